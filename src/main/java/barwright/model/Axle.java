@@ -1,0 +1,54 @@
+package barwright.model;
+
+/**
+ * One axle's suspension, tyres and anti-roll bar.
+ *
+ * @param track              track width t (m)
+ * @param rollCentreHeight   roll centre height above the ground z (m)
+ * @param unsprungMass       unsprung mass of the whole axle (kg)
+ * @param unsprungCgHeight   height of the unsprung centre of mass (m)
+ * @param springRate         rate of one spring at the spring (N/m)
+ * @param springMotionRatio  spring travel / wheel travel
+ * @param tyreVerticalRate   vertical rate of one tyre (N/m)
+ * @param tyre               the tyre's grip model
+ * @param bar                the anti-roll bar, or null for none
+ */
+public record Axle(double track, double rollCentreHeight, double unsprungMass, double unsprungCgHeight,
+                   double springRate, double springMotionRatio, double tyreVerticalRate, Tyre tyre,
+                   AntiRollBar bar) {
+    public Axle {
+        Checks.positive("track", track);
+        Checks.finite("rollCentreHeight", rollCentreHeight);
+        Checks.nonNegative("unsprungMass", unsprungMass);
+        Checks.nonNegative("unsprungCgHeight", unsprungCgHeight);
+        Checks.positive("springRate", springRate);
+        Checks.positive("springMotionRatio", springMotionRatio);
+        Checks.positive("tyreVerticalRate", tyreVerticalRate);
+        java.util.Objects.requireNonNull(tyre, "tyre");
+    }
+
+    /** @return true where the axle has an anti-roll bar */
+    public boolean hasBar() {
+        return bar != null;
+    }
+
+    public Axle withBar(AntiRollBar newBar) {
+        return new Axle(track, rollCentreHeight, unsprungMass, unsprungCgHeight, springRate, springMotionRatio,
+                tyreVerticalRate, tyre, newBar);
+    }
+
+    public Axle withSpringRate(double newRate) {
+        return new Axle(track, rollCentreHeight, unsprungMass, unsprungCgHeight, newRate, springMotionRatio,
+                tyreVerticalRate, tyre, bar);
+    }
+
+    public Axle withRollCentreHeight(double newHeight) {
+        return new Axle(track, newHeight, unsprungMass, unsprungCgHeight, springRate, springMotionRatio,
+                tyreVerticalRate, tyre, bar);
+    }
+
+    public Axle withTyreVerticalRate(double newRate) {
+        return new Axle(track, rollCentreHeight, unsprungMass, unsprungCgHeight, springRate, springMotionRatio,
+                newRate, tyre, bar);
+    }
+}
