@@ -146,14 +146,17 @@ public final class VehicleFileReader {
         if (body == null) {
             return null;
         }
+        int beforeCorners = reader.problems().size();
         CornerMasses corners = readCornerMasses(body, reader);
+        boolean cornersAccepted = reader.problems().size() == beforeCorners;
         double mass;
         double frontFraction;
         if (corners != null) {
             mass = corners.total();
             frontFraction = corners.frontFraction();
-            checkAgrees(body, "massKg", mass, Range.between(50, 20000, "kg"), reader);
-            checkAgrees(body, "frontMassFraction", frontFraction, Range.between(0.05, 0.95, ""), reader);
+            checkAgrees(body, "massKg", mass, Range.between(50, 20000, "kg"), cornersAccepted, reader);
+            checkAgrees(body, "frontMassFraction", frontFraction, Range.between(0.05, 0.95, ""), cornersAccepted,
+                    reader);
         } else {
             mass = reader.number(body, "vehicle", "massKg", Range.between(50, 20000, "kg"));
             frontFraction = reader.number(body, "vehicle", "frontMassFraction", Range.between(0.05, 0.95, ""));
@@ -185,12 +188,16 @@ public final class VehicleFileReader {
     }
 
     /** Where corner masses are given, massKg and frontMassFraction may be absent or must agree within 0.5 %. */
-    private static void checkAgrees(JsonNode body, String key, double fromCorners, Range range, NodeReader reader) {
+    private static void checkAgrees(JsonNode body, String key, double fromCorners, Range range,
+                                    boolean cornersAccepted, NodeReader reader) {
         if (NodeReader.isAbsent(body, key)) {
             return;
         }
+        int before = reader.problems().size();
         double given = reader.number(body, "vehicle", key, range);
-        if (!reader.hasProblems() && Math.abs(given - fromCorners) > 0.005 * fromCorners) {
+        // compared only where both the value and the corner masses were accepted, whatever else is wrong
+        if (cornersAccepted && reader.problems().size() == before
+                && Math.abs(given - fromCorners) > 0.005 * fromCorners) {
             reader.problem("vehicle." + key, "= " + Range.format(given) + ": must agree within 0.5 % with the "
                     + "corner masses, which give " + Range.format(Math.round(fromCorners * 1e4) / 1e4)
                     + " (or leave it out)");
