@@ -5,13 +5,16 @@ import barwright.model.CornerMasses;
 import barwright.model.Tyre;
 import barwright.model.Vehicle;
 import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonParseException;
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
+import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 
 import java.io.IOException;
@@ -45,6 +48,8 @@ public final class VehicleFileReader {
             // NaN and Infinity are read so that they can be refused by key path like any other bad value
             .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
             .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            // one JSON object and nothing after it: "{...} {...}" or "{...} junk" is not a vehicle file
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .build();
 
     private VehicleFileReader() {
@@ -87,13 +92,20 @@ public final class VehicleFileReader {
         } catch (StreamConstraintsException tooDeep) {
             throw new VehicleFileException("the file is nested too deeply to be a vehicle file (over "
                     + MAX_NESTING + " levels)");
-        } catch (JsonParseException bad) {
-            throw new VehicleFileException("not valid JSON at line " + bad.getLocation().getLineNr() + ", column "
-                    + bad.getLocation().getColumnNr() + ": " + bad.getOriginalMessage());
+        } catch (MismatchedInputException trailing) {
+            // with FAIL_ON_TRAILING_TOKENS, readTree reports text after the object this way
+            throw new VehicleFileException("not valid JSON" + at(trailing.getLocation())
+                    + ": there is more text after the end of the object; a vehicle file holds one JSON object");
+        } catch (JsonProcessingException bad) {
+            throw new VehicleFileException("not valid JSON" + at(bad.getLocation()) + ": " + bad.getOriginalMessage());
         } catch (IOException bad) {
             throw new VehicleFileException("not valid JSON: " + bad.getMessage());
         }
         return fromTree(tree);
+    }
+
+    private static String at(JsonLocation where) {
+        return where == null ? "" : " at line " + where.getLineNr() + ", column " + where.getColumnNr();
     }
 
     /** Validates a tree (for example the open document after an edit) and builds the car from it. */
