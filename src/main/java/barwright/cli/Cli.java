@@ -1,0 +1,74 @@
+package barwright.cli;
+
+import barwright.io.VehicleFileException;
+import barwright.physics.ImpossibleVehicleException;
+
+import java.io.PrintStream;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The command line: {@code barwright COMMAND ...}. Exit codes: 0 done, 2 refused input (the message on
+ * standard error names the key path), 1 internal failure.
+ */
+public final class Cli {
+    public static final int OK = 0;
+    public static final int INTERNAL_FAILURE = 1;
+    public static final int REFUSED = 2;
+
+    private static final List<Command> COMMANDS = List.of(
+            new AnalyzeCommand());
+
+    private Cli() {
+    }
+
+    public static List<Command> commands() {
+        return COMMANDS;
+    }
+
+    public static int run(String[] args, PrintStream out, PrintStream err) {
+        if (args.length == 0 || List.of("help", "--help", "-h").contains(args[0])) {
+            out.print(usage());
+            return OK;
+        }
+        Optional<Command> command = COMMANDS.stream().filter(c -> c.name().equals(args[0])).findFirst();
+        if (command.isEmpty()) {
+            err.println("barwright: unknown command '" + args[0] + "'");
+            err.print(usage());
+            return REFUSED;
+        }
+        List<String> rest = Arrays.asList(args).subList(1, args.length);
+        try {
+            return command.get().run(rest, out, err);
+        } catch (UsageException usage) {
+            err.println("barwright " + command.get().name() + ": " + usage.getMessage());
+            err.println("usage: barwright " + command.get().synopsis());
+            return REFUSED;
+        } catch (VehicleFileException refused) {
+            err.println("barwright: the vehicle file was refused:");
+            refused.problems().forEach(problem -> err.println("  " + problem));
+            return REFUSED;
+        } catch (ImpossibleVehicleException impossible) {
+            err.println("barwright: this car cannot be analysed: " + impossible.getMessage());
+            return REFUSED;
+        } catch (java.nio.file.NoSuchFileException missing) {
+            err.println("barwright: file not found: " + missing.getFile());
+            return REFUSED;
+        } catch (Exception | Error internal) {
+            err.println("barwright: internal failure: " + internal);
+            return INTERNAL_FAILURE;
+        }
+    }
+
+    public static String usage() {
+        StringBuilder text = new StringBuilder("Barwright: anti-roll bars and lateral load transfer.\n\n")
+                .append("usage: java -jar target/barwright.jar                 open the desktop program\n");
+        for (Command command : COMMANDS) {
+            text.append(String.format("       java -jar target/barwright.jar %s%n           %s%n",
+                    command.synopsis(), command.summary()));
+        }
+        text.append("\nExit codes: 0 done, 2 input refused (the message names the key path), 1 internal failure.\n");
+        return text.toString();
+    }
+}

@@ -1,0 +1,18 @@
+package barwright.cli;
+
+import barwright.io.VehicleDocument;
+import barwright.io.VehicleFileException;
+import barwright.io.VehicleFileReader;
+
+import java.io.IOException;
+import java.nio.file.Path;
+
+/** Reading the vehicle file a command is given. */
+final class VehicleInput {
+    private VehicleInput() {
+    }
+
+    static VehicleDocument read(String file) throws VehicleFileException, IOException {
+        return VehicleFileReader.read(Path.of(file));
+    }
+}

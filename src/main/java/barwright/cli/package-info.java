@@ -1,0 +1,2 @@
+/** The command line: one class per command, registered in {@link barwright.cli.Cli}. */
+package barwright.cli;

@@ -1,0 +1,211 @@
+package barwright.io;
+
+import barwright.model.Axle;
+import barwright.model.CornerMasses;
+import barwright.model.Tyre;
+import barwright.model.Vehicle;
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonParseException;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
+import com.fasterxml.jackson.core.json.JsonReadFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.json.JsonMapper;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+
+import static barwright.units.Constants.RADIANS_PER_DEGREE;
+
+/**
+ * Reads a vehicle file (files.md, version 1): refuses it whole, with every problem and its key path, or
+ * returns the car in SI with the tree as read (unknown keys included, to be kept on save).
+ */
+public final class VehicleFileReader {
+    /** The file format's name, the value of the key {@code format}. */
+    public static final String FORMAT = "barwright.vehicle";
+    /** The newest file version this program reads and writes. */
+    public static final int VERSION = 1;
+    /** A vehicle file is a few kilobytes; anything past this is refused before parsing (bytes). */
+    public static final long MAX_BYTES = 4L * 1024 * 1024;
+    /** Nesting deeper than this is refused while parsing; a vehicle file is 4 levels deep. */
+    public static final int MAX_NESTING = 32;
+    /** The bar stress check travel where the file gives none (mm), files.md. */
+    public static final double DEFAULT_DIFFERENTIAL_TRAVEL_MM = 60;
+
+    private static final ObjectMapper MAPPER = JsonMapper.builder(JsonFactory.builder()
+                    .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_NESTING).build())
+                    .build())
+            // NaN and Infinity are read so that they can be refused by key path like any other bad value
+            .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
+            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            .build();
+
+    private VehicleFileReader() {
+    }
+
+    /** @return the shared, configured mapper (also used for writing) */
+    static ObjectMapper mapper() {
+        return MAPPER;
+    }
+
+    /** Reads and validates a file; nothing is returned unless the whole file is good. */
+    public static VehicleDocument read(Path file) throws VehicleFileException, IOException {
+        long size;
+        try {
+            size = Files.size(file);
+        } catch (NoSuchFileException missing) {
+            throw new VehicleFileException("file not found: " + file);
+        }
+        if (size > MAX_BYTES) {
+            throw new VehicleFileException(String.format("the file is %.1f MB: a vehicle file must be under %d MB",
+                    size / 1048576.0, MAX_BYTES / 1048576));
+        }
+        try (InputStream in = Files.newInputStream(file)) {
+            return parse(in.readNBytes((int) MAX_BYTES + 1));
+        }
+    }
+
+    /** Parses and validates the bytes of a vehicle file (UTF-8). */
+    public static VehicleDocument parse(byte[] content) throws VehicleFileException {
+        if (content.length > MAX_BYTES) {
+            throw new VehicleFileException("the file is larger than " + MAX_BYTES / 1048576 + " MB");
+        }
+        String text = new String(content, StandardCharsets.UTF_8);
+        if (text.isBlank()) {
+            throw new VehicleFileException("the file is empty: a vehicle file is a JSON object");
+        }
+        JsonNode tree;
+        try {
+            tree = MAPPER.readTree(text);
+        } catch (StreamConstraintsException tooDeep) {
+            throw new VehicleFileException("the file is nested too deeply to be a vehicle file (over "
+                    + MAX_NESTING + " levels)");
+        } catch (JsonParseException bad) {
+            throw new VehicleFileException("not valid JSON at line " + bad.getLocation().getLineNr() + ", column "
+                    + bad.getLocation().getColumnNr() + ": " + bad.getOriginalMessage());
+        } catch (IOException bad) {
+            throw new VehicleFileException("not valid JSON: " + bad.getMessage());
+        }
+        return fromTree(tree);
+    }
+
+    /** Validates a tree (for example the open document after an edit) and builds the car from it. */
+    public static VehicleDocument fromTree(JsonNode tree) throws VehicleFileException {
+        if (tree == null || !tree.isObject()) {
+            throw new VehicleFileException("the file must hold one JSON object {...}, not "
+                    + (tree == null ? "nothing" : tree.getNodeType().toString().toLowerCase(java.util.Locale.ROOT)));
+        }
+        NodeReader reader = new NodeReader();
+        checkHeader(tree, reader);
+        if (reader.hasProblems()) {
+            throw new VehicleFileException(reader.problems()); // a wrong format or version: say only that
+        }
+        Vehicle vehicle = readVehicle(tree, reader);
+        if (reader.hasProblems() || vehicle == null) {
+            throw new VehicleFileException(reader.problems());
+        }
+        return new VehicleDocument(tree.deepCopy(), vehicle);
+    }
+
+    private static void checkHeader(JsonNode tree, NodeReader reader) {
+        String format = reader.text(tree, "", "format", true);
+        if (!format.isEmpty() && !FORMAT.equals(format)) {
+            reader.problem("format", "= \"" + format + "\": must be \"" + FORMAT + "\"");
+        }
+        JsonNode version = tree.get("version");
+        if (version != null && version.isNumber() && version.doubleValue() > VERSION
+                && version.doubleValue() == Math.rint(version.doubleValue())) {
+            reader.problem("version", "= " + version.asText() + ": this file was written by a newer Barwright "
+                    + "(file version " + version.asText() + "); this program reads versions up to " + VERSION
+                    + ". Update Barwright to open it.");
+            return;
+        }
+        reader.integer(tree, "", "version", 1, VERSION);
+    }
+
+    private static Vehicle readVehicle(JsonNode tree, NodeReader reader) {
+        String name = reader.text(tree, "", "name", true);
+        reader.text(tree, "", "notes", false);
+        JsonNode body = reader.object(tree, "", "vehicle", true);
+        JsonNode frontNode = reader.object(tree, "", "front", true);
+        JsonNode rearNode = reader.object(tree, "", "rear", true);
+        JsonNode analysis = reader.object(tree, "", "analysis", false);
+        double travelMm = analysis == null ? DEFAULT_DIFFERENTIAL_TRAVEL_MM
+                : reader.optionalNumber(analysis, "analysis", "differentialWheelTravelMm",
+                Range.between(0, 500, "mm"), DEFAULT_DIFFERENTIAL_TRAVEL_MM);
+
+        Axle front = frontNode == null ? null : AxleReader.read(frontNode, "front", reader);
+        Axle rear = rearNode == null ? null : AxleReader.read(rearNode, "rear", reader);
+        if (body == null) {
+            return null;
+        }
+        CornerMasses corners = readCornerMasses(body, reader);
+        double mass;
+        double frontFraction;
+        if (corners != null) {
+            mass = corners.total();
+            frontFraction = corners.frontFraction();
+            checkAgrees(body, "massKg", mass, Range.between(50, 20000, "kg"), reader);
+            checkAgrees(body, "frontMassFraction", frontFraction, Range.between(0.05, 0.95, ""), reader);
+        } else {
+            mass = reader.number(body, "vehicle", "massKg", Range.between(50, 20000, "kg"));
+            frontFraction = reader.number(body, "vehicle", "frontMassFraction", Range.between(0.05, 0.95, ""));
+        }
+        double cgHeight = reader.number(body, "vehicle", "cgHeightMm", Range.between(50, 3000, "mm")) * 1e-3;
+        double wheelbase = reader.number(body, "vehicle", "wheelbaseMm", Range.between(500, 10000, "mm")) * 1e-3;
+        Double chassis = NodeReader.isAbsent(body, "chassisTorsionalStiffnessNmPerDeg") ? null
+                : reader.number(body, "vehicle", "chassisTorsionalStiffnessNmPerDeg",
+                Range.between(10, 1e8, "N·m/deg")) / RADIANS_PER_DEGREE;
+        if (reader.hasProblems() || front == null || rear == null) {
+            return null;
+        }
+        return new Vehicle(name, mass, frontFraction, corners, cgHeight, wheelbase, chassis, front, rear,
+                travelMm * 1e-3);
+    }
+
+    private static CornerMasses readCornerMasses(JsonNode body, NodeReader reader) {
+        JsonNode node = reader.object(body, "vehicle", "cornerMassesKg", false);
+        if (node == null) {
+            return null;
+        }
+        String path = "vehicle.cornerMassesKg";
+        Range range = Range.between(5, 10000, "kg");
+        double leftFront = reader.number(node, path, "leftFront", range);
+        double rightFront = reader.number(node, path, "rightFront", range);
+        double leftRear = reader.number(node, path, "leftRear", range);
+        double rightRear = reader.number(node, path, "rightRear", range);
+        return new CornerMasses(leftFront, rightFront, leftRear, rightRear);
+    }
+
+    /** Where corner masses are given, massKg and frontMassFraction may be absent or must agree within 0.5 %. */
+    private static void checkAgrees(JsonNode body, String key, double fromCorners, Range range, NodeReader reader) {
+        if (NodeReader.isAbsent(body, key)) {
+            return;
+        }
+        double given = reader.number(body, "vehicle", key, range);
+        if (!reader.hasProblems() && Math.abs(given - fromCorners) > 0.005 * fromCorners) {
+            reader.problem("vehicle." + key, "= " + Range.format(given) + ": must agree within 0.5 % with the "
+                    + "corner masses, which give " + Range.format(Math.round(fromCorners * 1e4) / 1e4)
+                    + " (or leave it out)");
+        }
+    }
+
+    /** Reads a tyre object; package-private for the axle reader. */
+    static Tyre readTyre(JsonNode node, String path, NodeReader reader) {
+        double nominal = reader.number(node, path, "nominalLoadN", Range.between(100, 100000, "N"));
+        double friction = reader.number(node, path, "frictionAtNominalLoad", Range.between(0.1, 5, ""));
+        double sensitivity = reader.number(node, path, "frictionLoadSensitivity", Range.between(-1, 0.5, ""));
+        double stiffness = reader.number(node, path, "corneringStiffnessPerLoad", Range.between(1, 100, "per rad"));
+        double peakRatio = reader.number(node, path, "corneringStiffnessPeakLoadRatio", Range.between(0.5, 10, ""));
+        double shape = reader.number(node, path, "shapeFactor", Range.between(1, 2, ""));
+        double curvature = reader.number(node, path, "curvatureFactor", Range.between(-10, 1, ""));
+        return new Tyre(nominal, friction, sensitivity, stiffness, peakRatio, shape, curvature);
+    }
+}

@@ -1,0 +1,50 @@
+package barwright.physics;
+
+import barwright.model.AxlePosition;
+import barwright.model.TurnDirection;
+import barwright.model.Vehicle;
+
+import java.util.List;
+
+/**
+ * Everything the model computes for one car (model.md 1-8), in SI base units.
+ *
+ * @param vehicle                  the car analysed
+ * @param masses                   masses and roll axis
+ * @param front                    the front axle
+ * @param rear                     the rear axle
+ * @param roll                     body roll per a_y with the full roll stiffnesses
+ * @param suspensionRoll           body roll per a_y with the suspension-only stiffnesses
+ * @param frontLoadTransferShare   dF_f / (dF_f + dF_r) before any lift
+ * @param frontRollStiffnessShare  K_f / (K_f + K_r)
+ * @param understeerGradient       W_f/C_f - W_r/C_r per unit a_y (rad s^2/m)
+ * @param leftTurn                 the turn to the left
+ * @param rightTurn                the turn to the right
+ * @param warnings                 results a person should act on
+ */
+public record AnalysisResult(Vehicle vehicle, MassProperties masses, AxleResult front, AxleResult rear,
+                             RollResponse roll, RollResponse suspensionRoll, double frontLoadTransferShare,
+                             double frontRollStiffnessShare, double understeerGradient, TurnResult leftTurn,
+                             TurnResult rightTurn, List<Warning> warnings) {
+    public AnalysisResult {
+        warnings = List.copyOf(warnings);
+    }
+
+    public AxleResult axle(AxlePosition position) {
+        return position == AxlePosition.FRONT ? front : rear;
+    }
+
+    public TurnResult turn(TurnDirection direction) {
+        return direction == TurnDirection.LEFT ? leftTurn : rightTurn;
+    }
+
+    /** @return roll gradient: body roll per unit a_y (rad s^2/m) */
+    public double rollGradient() {
+        return roll.rollPerAccel();
+    }
+
+    /** @return roll gradient with the suspension-only stiffnesses (rad s^2/m) */
+    public double suspensionRollGradient() {
+        return suspensionRoll.rollPerAccel();
+    }
+}

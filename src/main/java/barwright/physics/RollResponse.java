@@ -1,0 +1,75 @@
+package barwright.physics;
+
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.LUDecomposition;
+import org.apache.commons.math3.linear.RealVector;
+
+import static barwright.units.Constants.RADIANS_PER_DEGREE;
+import static barwright.units.Constants.STANDARD_GRAVITY;
+
+/**
+ * Body roll per unit of lateral acceleration, steady state, with the lateral shift of the sprung CG under
+ * gravity (model.md 5 for a rigid chassis, model.md 6 for a flexible one). Angles in rad per m/s^2.
+ *
+ * @param frontRollPerAccel the front body end's roll phi_f / a_y (rad s^2/m)
+ * @param rearRollPerAccel  the rear body end's roll phi_r / a_y (rad s^2/m)
+ * @param rollPerAccel      the sprung-mass-weighted mean (m_sf phi_f + m_sr phi_r) / m_s per a_y (rad s^2/m)
+ */
+public record RollResponse(double frontRollPerAccel, double rearRollPerAccel, double rollPerAccel) {
+
+    /**
+     * @param frontRollStiffness K_f (N m/rad)
+     * @param rearRollStiffness  K_r (N m/rad)
+     * @param chassisStiffness   K_c (N m/rad), or null for a rigid chassis
+     * @throws ImpossibleVehicleException where the body has no stable roll position
+     */
+    public static RollResponse of(MassProperties masses, double frontRollStiffness, double rearRollStiffness,
+                                  Double chassisStiffness) {
+        double rollArm = masses.rollArm();
+        double sprungMass = masses.sprungMass();
+        double gravity = STANDARD_GRAVITY;
+        double total = frontRollStiffness + rearRollStiffness;
+        requireStable(masses, total);
+        if (chassisStiffness == null) {
+            // phi = m_s a_y h' / (K_f + K_r - m_s g h'), model.md 5
+            double roll = sprungMass * rollArm / (total - masses.gravityRollMoment());
+            return new RollResponse(roll, roll, roll);
+        }
+        // (K_f + K_c - m_sf g h') phi_f - K_c phi_r = m_sf h' a_y, and its twin at the rear (model.md 6)
+        double frontDiagonal = frontRollStiffness + chassisStiffness - masses.frontSprungMass() * gravity * rollArm;
+        double rearDiagonal = rearRollStiffness + chassisStiffness - masses.rearSprungMass() * gravity * rollArm;
+        double determinant = frontDiagonal * rearDiagonal - chassisStiffness * chassisStiffness;
+        if (!(frontDiagonal > 0 && determinant > 0)) {
+            throw new ImpossibleVehicleException(String.format(
+                    "No stable roll position with this chassis: the flexible body (chassis %.0f N·m/deg) with "
+                            + "front %.0f and rear %.0f N·m/deg at the axles cannot hold the sprung mass %.0f kg on "
+                            + "a roll arm of %.0f mm. Stiffen the chassis or the axles, or lower the sprung CG.",
+                    chassisStiffness * RADIANS_PER_DEGREE, frontRollStiffness * RADIANS_PER_DEGREE,
+                    rearRollStiffness * RADIANS_PER_DEGREE, sprungMass, rollArm * 1e3));
+        }
+        Array2DRowRealMatrix matrix = new Array2DRowRealMatrix(new double[][]{
+                {frontDiagonal, -chassisStiffness},
+                {-chassisStiffness, rearDiagonal}});
+        RealVector rollMoments = new ArrayRealVector(new double[]{
+                masses.frontSprungMass() * rollArm, masses.rearSprungMass() * rollArm});
+        RealVector roll = new LUDecomposition(matrix).getSolver().solve(rollMoments);
+        double front = roll.getEntry(0);
+        double rear = roll.getEntry(1);
+        double mean = (masses.frontSprungMass() * front + masses.rearSprungMass() * rear) / sprungMass;
+        return new RollResponse(front, rear, mean);
+    }
+
+    /** Refuses a car whose total roll stiffness does not exceed m_s g h' (model.md 5). */
+    static void requireStable(MassProperties masses, double totalRollStiffness) {
+        double needed = masses.gravityRollMoment();
+        if (!(totalRollStiffness > needed)) {
+            throw new ImpossibleVehicleException(String.format(
+                    "No stable roll position: the total roll stiffness %.0f N·m/deg must exceed m_s g h' = "
+                            + "%.0f N·m/deg (sprung mass %.0f kg on a roll arm of %.0f mm). Stiffen the springs "
+                            + "or bars, or lower the sprung CG or raise the roll centres.",
+                    totalRollStiffness * RADIANS_PER_DEGREE, needed * RADIANS_PER_DEGREE, masses.sprungMass(),
+                    masses.rollArm() * 1e3));
+        }
+    }
+}

@@ -1,0 +1,85 @@
+package barwright.physics;
+
+import barwright.model.AxlePosition;
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import static barwright.units.Constants.STANDARD_GRAVITY;
+
+/** Axle limits, balance and the handling curve of one turn direction (model.md 7 and 8). */
+public final class TurnAnalysis {
+    /** Limits are sought up to this lateral acceleration (m/s^2): 5 g, past any tyre on the road. */
+    static final double SEARCH_CEILING = 5 * STANDARD_GRAVITY;
+    /** Step of the scan for the first crossing of required force and capacity (m/s^2). */
+    private static final double SCAN_STEP = 0.1 * STANDARD_GRAVITY;
+    private static final double LIMIT_ACCURACY = 1e-9;
+
+    private TurnAnalysis() {
+    }
+
+    /**
+     * @param mass              total mass m (kg)
+     * @param frontMassFraction f: the front axle must give m a_y f, the rear m a_y (1 - f)
+     * @param curvePoints       how many points the handling curve has (at least 2)
+     */
+    public static TurnResult analyse(SteadyCornering cornering, double mass, double frontMassFraction,
+                                     AxleGrip frontGrip, AxleGrip rearGrip, int curvePoints) {
+        double rollover = cornering.rollover();
+        double ceiling = Math.min(SEARCH_CEILING, rollover);
+        double frontLimit = axleLimit(cornering, AxlePosition.FRONT, mass * frontMassFraction, frontGrip, ceiling);
+        double rearLimit = axleLimit(cornering, AxlePosition.REAR, mass * (1 - frontMassFraction), rearGrip, ceiling);
+        double limit = Math.min(frontLimit, rearLimit);
+        List<HandlingPoint> curve = handlingCurve(cornering, mass, frontMassFraction, frontGrip, rearGrip, limit,
+                curvePoints);
+        return new TurnResult(cornering, cornering.insideLift(AxlePosition.FRONT),
+                cornering.insideLift(AxlePosition.REAR), rollover, frontLimit, rearLimit, limit,
+                Balance.of(frontLimit, rearLimit), curve);
+    }
+
+    /**
+     * @param massShare the mass whose lateral force this axle must supply: m b/l or m a/l (kg)
+     * @return the first a_y at which the required force meets the capacity, or the ceiling where it never
+     *     does before it
+     */
+    static double axleLimit(SteadyCornering cornering, AxlePosition axle, double massShare, AxleGrip grip,
+                            double ceiling) {
+        UnivariateFunction surplus = accel -> capacityAt(cornering, axle, grip, accel) - massShare * accel;
+        double low = 0;
+        while (low < ceiling) {
+            double high = Math.min(ceiling, low + SCAN_STEP);
+            if (surplus.value(high) <= 0) {
+                return new BrentSolver(LIMIT_ACCURACY).solve(200, surplus, low, high);
+            }
+            low = high;
+        }
+        return ceiling;
+    }
+
+    private static double capacityAt(SteadyCornering cornering, AxlePosition axle, AxleGrip grip, double accel) {
+        WheelLoads loads = cornering.wheelLoads(accel);
+        return axle == AxlePosition.FRONT ? grip.capacity(loads.frontOutside(), loads.frontInside())
+                : grip.capacity(loads.rearOutside(), loads.rearInside());
+    }
+
+    private static List<HandlingPoint> handlingCurve(SteadyCornering cornering, double mass,
+                                                     double frontMassFraction, AxleGrip frontGrip,
+                                                     AxleGrip rearGrip, double limit, int points) {
+        List<HandlingPoint> curve = new ArrayList<>(points);
+        for (int i = 0; i < points; i++) {
+            double accel = limit * i / (points - 1);
+            WheelLoads loads = cornering.wheelLoads(accel);
+            double front = frontGrip.slipAngleFor(mass * frontMassFraction * accel, loads.frontOutside(),
+                    loads.frontInside());
+            double rear = rearGrip.slipAngleFor(mass * (1 - frontMassFraction) * accel, loads.rearOutside(),
+                    loads.rearInside());
+            if (Double.isNaN(front) || Double.isNaN(rear)) {
+                break; // an axle at a common slip angle cannot give the force: the curve ends here
+            }
+            curve.add(new HandlingPoint(accel, front, rear));
+        }
+        return curve;
+    }
+}

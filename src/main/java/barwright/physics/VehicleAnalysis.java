@@ -1,0 +1,96 @@
+package barwright.physics;
+
+import barwright.model.Axle;
+import barwright.model.AxlePosition;
+import barwright.model.TurnDirection;
+import barwright.model.Vehicle;
+import barwright.physics.bar.BarResult;
+
+import java.util.List;
+
+import static barwright.units.Constants.STANDARD_GRAVITY;
+
+/** One full analysis of a car: model.md 1-8, both turn directions. */
+public final class VehicleAnalysis {
+    /** Points of each handling curve. */
+    public static final int HANDLING_CURVE_POINTS = 50;
+
+    private VehicleAnalysis() {
+    }
+
+    /**
+     * @throws ImpossibleVehicleException where the car cannot be analysed (no stable roll position, no
+     *                                    sprung mass)
+     */
+    public static AnalysisResult analyse(Vehicle vehicle) {
+        MassProperties masses = MassProperties.of(vehicle);
+        MassProperties.StaticWheelLoads loads = masses.staticLoads();
+        double frontCornerSprung = cornerSprungMass(vehicle.front(), AxlePosition.FRONT, loads.frontAxle());
+        double rearCornerSprung = cornerSprungMass(vehicle.rear(), AxlePosition.REAR, loads.rearAxle());
+        BarResult frontBar = barResult(vehicle.front(), vehicle);
+        BarResult rearBar = barResult(vehicle.rear(), vehicle);
+        AxleStiffness frontStiffness = AxleStiffness.of(vehicle.front(), frontBar, frontCornerSprung);
+        AxleStiffness rearStiffness = AxleStiffness.of(vehicle.rear(), rearBar, rearCornerSprung);
+        double frontRoll = frontStiffness.rollStiffness();
+        double rearRoll = rearStiffness.rollStiffness();
+        Double chassis = vehicle.chassisTorsionalStiffness();
+
+        RollResponse roll = RollResponse.of(masses, frontRoll, rearRoll, chassis);
+        RollResponse suspensionRoll = RollResponse.of(masses, frontStiffness.suspensionRollStiffness(),
+                rearStiffness.suspensionRollStiffness(), chassis);
+        LoadTransferParts frontParts = transferParts(vehicle.front(), masses.frontSprungMass(), frontRoll,
+                roll.frontRollPerAccel());
+        LoadTransferParts rearParts = transferParts(vehicle.rear(), masses.rearSprungMass(), rearRoll,
+                roll.rearRollPerAccel());
+        double frontTransfer = frontParts.total();
+        double rearTransfer = rearParts.total();
+
+        AxleGrip frontGrip = new AxleGrip(new TyreModel(vehicle.front().tyre()));
+        AxleGrip rearGrip = new AxleGrip(new TyreModel(vehicle.rear().tyre()));
+        double frontCornering = frontGrip.corneringStiffness(loads.leftFront(), loads.rightFront());
+        double rearCornering = rearGrip.corneringStiffness(loads.leftRear(), loads.rightRear());
+        // K = W_f/C_f - W_r/C_r in rad per g (Gillespie, Fundamentals of Vehicle Dynamics, ch. 6), per m/s^2 here
+        double understeer = (loads.frontAxle() / frontCornering - loads.rearAxle() / rearCornering)
+                / STANDARD_GRAVITY;
+
+        TurnResult[] turns = new TurnResult[2];
+        for (TurnDirection direction : TurnDirection.values()) {
+            SteadyCornering cornering = new SteadyCornering(direction, masses, vehicle.cgHeight(),
+                    vehicle.front().track(), vehicle.rear().track(), frontTransfer, rearTransfer, roll,
+                    frontRoll, rearRoll, chassis);
+            turns[direction.ordinal()] = TurnAnalysis.analyse(cornering, masses.mass(), masses.frontMassFraction(),
+                    frontGrip, rearGrip, HANDLING_CURVE_POINTS);
+        }
+        AxleResult front = new AxleResult(frontStiffness, frontBar, frontParts, frontCornering, frontCornerSprung);
+        AxleResult rear = new AxleResult(rearStiffness, rearBar, rearParts, rearCornering, rearCornerSprung);
+        double frontShare = frontTransfer / (frontTransfer + rearTransfer);
+        double rollShare = frontRoll / (frontRoll + rearRoll);
+        AnalysisResult withoutWarnings = new AnalysisResult(vehicle, masses, front, rear, roll, suspensionRoll,
+                frontShare, rollShare, understeer, turns[0], turns[1], List.of());
+        return new AnalysisResult(vehicle, masses, front, rear, roll, suspensionRoll, frontShare, rollShare,
+                understeer, turns[0], turns[1], Warnings.of(withoutWarnings));
+    }
+
+    private static BarResult barResult(Axle axle, Vehicle vehicle) {
+        return axle.hasBar() ? BarAnalysis.analyse(axle.bar(), vehicle.differentialWheelTravel()) : null;
+    }
+
+    /** @return half of (static axle load / g - unsprung axle mass) (kg), model.md 3 */
+    private static double cornerSprungMass(Axle axle, AxlePosition position, double axleLoad) {
+        double cornerSprungMass = (axleLoad / STANDARD_GRAVITY - axle.unsprungMass()) / 2;
+        if (!(cornerSprungMass > 0)) {
+            throw new ImpossibleVehicleException(String.format(
+                    "The %s unsprung mass %.1f kg is not less than the static mass on the %s axle %.1f kg.",
+                    position.key(), axle.unsprungMass(), position.key(), axleLoad / STANDARD_GRAVITY));
+        }
+        return cornerSprungMass;
+    }
+
+    /** Load transfer per a_y in three parts: unsprung, geometric, elastic (model.md 5). */
+    private static LoadTransferParts transferParts(Axle axle, double axleSprungMass, double rollStiffness,
+                                                   double axleRollPerAccel) {
+        double track = axle.track();
+        return new LoadTransferParts(axle.unsprungMass() * axle.unsprungCgHeight() / track,
+                axleSprungMass * axle.rollCentreHeight() / track, rollStiffness * axleRollPerAccel / track);
+    }
+}

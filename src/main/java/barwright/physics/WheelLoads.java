@@ -1,0 +1,11 @@
+package barwright.physics;
+
+/**
+ * Vertical loads of the four wheels in a steady turn (N), never negative: a lifted wheel carries zero.
+ */
+public record WheelLoads(double frontOutside, double frontInside, double rearOutside, double rearInside) {
+    /** @return the sum of the four loads (N) */
+    public double total() {
+        return frontOutside + frontInside + rearOutside + rearInside;
+    }
+}

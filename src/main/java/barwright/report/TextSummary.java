@@ -1,0 +1,145 @@
+package barwright.report;
+
+import barwright.model.AxlePosition;
+import barwright.model.TurnDirection;
+import barwright.physics.AnalysisResult;
+import barwright.physics.AxleResult;
+import barwright.physics.AxleStiffness;
+import barwright.physics.TurnResult;
+import barwright.physics.Warning;
+import barwright.physics.bar.BarResult;
+import barwright.units.Figures;
+import barwright.units.Quantity;
+import barwright.units.UnitSystem;
+
+import java.util.Locale;
+
+/** The readable summary the command line prints for {@code analyze FILE}. */
+public final class TextSummary {
+    private final UnitSystem units;
+    private final StringBuilder out = new StringBuilder();
+
+    private TextSummary(UnitSystem units) {
+        this.units = units;
+    }
+
+    public static String of(AnalysisResult result, UnitSystem units) {
+        return new TextSummary(units).write(result);
+    }
+
+    private String write(AnalysisResult result) {
+        line("Barwright analysis: " + result.vehicle().name() + "   (units: " + units.label() + ")");
+        line("");
+        line("Car");
+        row("mass", f(result.masses().mass(), Quantity.MASS, 1));
+        row("static front weight", percent(result.masses().frontMassFraction()));
+        row("sprung mass", f(result.masses().sprungMass(), Quantity.MASS, 1));
+        row("sprung CG height", f(result.masses().sprungCgHeight(), Quantity.LENGTH, units == UnitSystem.US ? 2 : 0));
+        row("roll axis under sprung CG", f(result.masses().rollAxisHeightAtCg(), Quantity.LENGTH, units == UnitSystem.US ? 2 : 0));
+        row("roll arm", f(result.masses().rollArm(), Quantity.LENGTH, units == UnitSystem.US ? 2 : 0));
+        line("");
+        line(String.format(Locale.ROOT, "%-34s %18s %18s", "Per axle", "front", "rear"));
+        axleRows(result);
+        line("");
+        line("Balance");
+        row("roll gradient", f(result.rollGradient(), Quantity.ROLL_GRADIENT, 2)
+                + "   (springs and bars only: " + f(result.suspensionRollGradient(), Quantity.ROLL_GRADIENT, 2) + ")");
+        row("front share of load transfer", percent(result.frontLoadTransferShare())
+                + "   (static front weight " + percent(result.masses().frontMassFraction()) + ")");
+        row("front share of roll stiffness", percent(result.frontRollStiffnessShare()));
+        row("understeer gradient", f(result.understeerGradient(), Quantity.ROLL_GRADIENT, 2));
+        for (TurnDirection direction : TurnDirection.values()) {
+            TurnResult turn = result.turn(direction);
+            line("");
+            line("Turn to the " + direction.word() + " (" + direction.word() + " wheels inside)");
+            row("inside front lifts at", lift(turn.frontInsideLift()));
+            row("inside rear lifts at", lift(turn.rearInsideLift()));
+            row("front / rear axle limit", f(turn.frontLimit(), Quantity.ACCELERATION, 3) + " / "
+                    + f(turn.rearLimit(), Quantity.ACCELERATION, 3));
+            row("limit and balance", f(turn.limit(), Quantity.ACCELERATION, 3) + ", " + turn.balance().key());
+        }
+        line("");
+        if (result.warnings().isEmpty()) {
+            line("Warnings: none");
+        } else {
+            line("Warnings");
+            for (Warning warning : result.warnings()) {
+                line("  ! " + warning.message() + " [" + warning.code() + "]");
+            }
+        }
+        line("");
+        line(Cautions.SHORT);
+        return out.toString();
+    }
+
+    private void axleRows(AnalysisResult result) {
+        AxleResult front = result.axle(AxlePosition.FRONT);
+        AxleResult rear = result.axle(AxlePosition.REAR);
+        AxleStiffness fs = front.stiffness();
+        AxleStiffness rs = rear.stiffness();
+        pair("spring roll stiffness", f(fs.springRollStiffness(), Quantity.ROLL_STIFFNESS, 0),
+                f(rs.springRollStiffness(), Quantity.ROLL_STIFFNESS, 0));
+        pair("bar roll stiffness", barFigure(front, fs.barRollStiffness()), barFigure(rear, rs.barRollStiffness()));
+        pair("tyre roll stiffness", f(fs.tyreRollStiffness(), Quantity.ROLL_STIFFNESS, 0),
+                f(rs.tyreRollStiffness(), Quantity.ROLL_STIFFNESS, 0));
+        pair("roll stiffness (with tyres)", f(fs.rollStiffness(), Quantity.ROLL_STIFFNESS, 0),
+                f(rs.rollStiffness(), Quantity.ROLL_STIFFNESS, 0));
+        pair("wheel rate (heave)", f(fs.heaveRate(), Quantity.LINEAR_RATE, 1), f(rs.heaveRate(), Quantity.LINEAR_RATE, 1));
+        pair("single-wheel bump rate", f(fs.singleWheelBumpRate(), Quantity.LINEAR_RATE, 1),
+                f(rs.singleWheelBumpRate(), Quantity.LINEAR_RATE, 1));
+        pair("ride rate", f(fs.rideRate(), Quantity.LINEAR_RATE, 1), f(rs.rideRate(), Quantity.LINEAR_RATE, 1));
+        pair("ride frequency", f(fs.rideFrequency(), Quantity.FREQUENCY, 2), f(rs.rideFrequency(), Quantity.FREQUENCY, 2));
+        pair("load transfer per g", f(front.loadTransfer().total(), Quantity.FORCE_PER_G, 0),
+                f(rear.loadTransfer().total(), Quantity.FORCE_PER_G, 0));
+        pair("  unsprung part", f(front.loadTransfer().unsprung(), Quantity.FORCE_PER_G, 0),
+                f(rear.loadTransfer().unsprung(), Quantity.FORCE_PER_G, 0));
+        pair("  geometric part", f(front.loadTransfer().geometric(), Quantity.FORCE_PER_G, 0),
+                f(rear.loadTransfer().geometric(), Quantity.FORCE_PER_G, 0));
+        pair("  elastic part", f(front.loadTransfer().elastic(), Quantity.FORCE_PER_G, 0),
+                f(rear.loadTransfer().elastic(), Quantity.FORCE_PER_G, 0));
+        pair("cornering stiffness (axle)", f(front.corneringStiffness(), Quantity.CORNERING_STIFFNESS, 0),
+                f(rear.corneringStiffness(), Quantity.CORNERING_STIFFNESS, 0));
+        pair("bar model", barText(front.bar(), b -> b.model().key()), barText(rear.bar(), b -> b.model().key()));
+        pair("bar link rate", barText(front.bar(), b -> f(b.linkRate(), Quantity.LINEAR_RATE, 1)),
+                barText(rear.bar(), b -> f(b.linkRate(), Quantity.LINEAR_RATE, 1)));
+        pair("bar mass", barText(front.bar(), b -> f(b.mass(), Quantity.MASS, 2)),
+                barText(rear.bar(), b -> f(b.mass(), Quantity.MASS, 2)));
+        pair("bar max stress at check travel", barText(front.bar(), b -> f(b.maxVonMisesStress(), Quantity.STRESS, 0)),
+                barText(rear.bar(), b -> f(b.maxVonMisesStress(), Quantity.STRESS, 0)));
+        pair("bar safety factor (static)", barText(front.bar(), b -> String.format(Locale.ROOT, "%.2f", b.safetyFactor())),
+                barText(rear.bar(), b -> String.format(Locale.ROOT, "%.2f", b.safetyFactor())));
+    }
+
+    private String barFigure(AxleResult axle, double value) {
+        return axle.bar() == null ? "no bar" : f(value, Quantity.ROLL_STIFFNESS, 0);
+    }
+
+    private static String barText(BarResult bar, java.util.function.Function<BarResult, String> text) {
+        return bar == null ? "-" : text.apply(bar);
+    }
+
+    private String lift(double accel) {
+        Double inG = ReportJson.liftInG(accel);
+        return inG == null ? "stays down (past 3 g)" : f(accel, Quantity.ACCELERATION, 3);
+    }
+
+    private String f(double si, Quantity quantity, int decimals) {
+        return Figures.format(si, quantity, units, decimals);
+    }
+
+    private static String percent(double fraction) {
+        return String.format(Locale.ROOT, "%.1f %%", fraction * 100);
+    }
+
+    private void row(String label, String value) {
+        line(String.format(Locale.ROOT, "  %-32s %s", label, value));
+    }
+
+    private void pair(String label, String front, String rear) {
+        line(String.format(Locale.ROOT, "  %-32s %18s %18s", label, front, rear));
+    }
+
+    private void line(String text) {
+        out.append(text).append('\n');
+    }
+}
