@@ -53,22 +53,27 @@ public final class SweepOutput {
         }
     }
 
+    /** The columns of {@link #chartsCsv}. */
+    public static final List<String> CHART_COLUMNS = List.of("chart", "series", "xName", "x", "xUnit", "yName", "y",
+            "yUnit");
+
     /**
-     * Writes a chart's lines as long-form CSV: one line per point, with the series name, the abscissa and
-     * the ordinate in the display units of the SI system (the header names them).
+     * Writes charts' lines as long-form CSV: one line per point, with the chart's title, the series name and
+     * each coordinate in the SI display unit named beside it (mm, g, deg, N...).
      */
-    public static void chartCsv(Chart chart, Appendable out) throws IOException {
-        var xUnit = chart.x().unit(barwright.units.UnitSystem.SI);
-        var yUnit = chart.y().unit(barwright.units.UnitSystem.SI);
-        String xHeader = chart.xLabel() + " (" + xUnit.symbol() + ")";
-        String yHeader = chart.yLabel() + " (" + yUnit.symbol() + ")";
+    public static void chartsCsv(List<Chart> charts, Appendable out) throws IOException {
         try (CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder()
-                .setHeader("series", xHeader, yHeader).get())) {
-            for (Series series : chart.series()) {
-                double[] x = series.x();
-                double[] y = series.y();
-                for (int i = 0; i < x.length; i++) {
-                    printer.printRecord(series.name(), xUnit.fromSi(x[i]), yUnit.fromSi(y[i]));
+                .setHeader(CHART_COLUMNS.toArray(String[]::new)).get())) {
+            for (Chart chart : charts) {
+                var xUnit = chart.x().unit(barwright.units.UnitSystem.SI);
+                var yUnit = chart.y().unit(barwright.units.UnitSystem.SI);
+                for (Series series : chart.series()) {
+                    double[] x = series.x();
+                    double[] y = series.y();
+                    for (int i = 0; i < x.length; i++) {
+                        printer.printRecord(chart.title(), series.name(), chart.xLabel(), xUnit.fromSi(x[i]),
+                                xUnit.symbol(), chart.yLabel(), yUnit.fromSi(y[i]), yUnit.symbol());
+                    }
                 }
             }
         }
