@@ -22,7 +22,8 @@ public final class Cli {
             new SizeCommand(),
             new MapCommand(),
             new CompareCommand(),
-            new PreloadCommand());
+            new PreloadCommand(),
+            new SheetCommand());
 
     private Cli() {
     }
