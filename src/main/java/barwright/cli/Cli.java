@@ -18,7 +18,12 @@ public final class Cli {
     public static final int REFUSED = 2;
 
     private static final List<Command> COMMANDS = List.of(
-            new AnalyzeCommand());
+            new AnalyzeCommand(),
+            new SizeCommand(),
+            new MapCommand(),
+            new CompareCommand(),
+            new PreloadCommand(),
+            new SheetCommand());
 
     private Cli() {
     }
