@@ -9,6 +9,7 @@ import barwright.physics.AxleGrip;
 import barwright.physics.AxleStiffness;
 import barwright.physics.BarAnalysis;
 import barwright.physics.ImpossibleVehicleException;
+import barwright.physics.LoadTransferParts;
 import barwright.physics.MassProperties;
 import barwright.physics.RollResponse;
 import barwright.physics.SteadyCornering;
@@ -16,8 +17,6 @@ import barwright.physics.TurnAnalysis;
 import barwright.physics.TurnResult;
 import barwright.physics.TyreModel;
 import barwright.physics.bar.BarResult;
-
-import static barwright.units.Constants.STANDARD_GRAVITY;
 
 /**
  * The figures of a car with its bars swapped, for searches and maps that try thousands of bars. It gives the
@@ -45,8 +44,8 @@ public final class SetupEvaluator {
         this.frontGrip = new AxleGrip(new TyreModel(vehicle.front().tyre()));
         this.rearGrip = new AxleGrip(new TyreModel(vehicle.rear().tyre()));
         MassProperties.StaticWheelLoads loads = masses.staticLoads();
-        this.frontCornerSprungMass = cornerSprungMass(vehicle.front(), AxlePosition.FRONT, loads.frontAxle());
-        this.rearCornerSprungMass = cornerSprungMass(vehicle.rear(), AxlePosition.REAR, loads.rearAxle());
+        this.frontCornerSprungMass = AxleStiffness.cornerSprungMass(vehicle.front(), AxlePosition.FRONT, loads.frontAxle());
+        this.rearCornerSprungMass = AxleStiffness.cornerSprungMass(vehicle.rear(), AxlePosition.REAR, loads.rearAxle());
     }
 
     public Vehicle vehicle() {
@@ -81,15 +80,10 @@ public final class SetupEvaluator {
         double frontRoll = front.stiffness().rollStiffness();
         double rearRoll = rear.stiffness().rollStiffness();
         RollResponse roll = RollResponse.of(masses, frontRoll, rearRoll, vehicle.chassisTorsionalStiffness());
-        Axle frontAxle = vehicle.front();
-        Axle rearAxle = vehicle.rear();
-        // unsprung m_u h_u / t + geometric m_s,axle z / t + elastic K phi / t, per a_y (model.md 5)
-        double frontTransfer = (frontAxle.unsprungMass() * frontAxle.unsprungCgHeight()
-                + masses.frontSprungMass() * frontAxle.rollCentreHeight()
-                + frontRoll * roll.frontRollPerAccel()) / frontAxle.track();
-        double rearTransfer = (rearAxle.unsprungMass() * rearAxle.unsprungCgHeight()
-                + masses.rearSprungMass() * rearAxle.rollCentreHeight()
-                + rearRoll * roll.rearRollPerAccel()) / rearAxle.track();
+        double frontTransfer = LoadTransferParts.of(vehicle.front(), masses.frontSprungMass(), frontRoll,
+                roll.frontRollPerAccel()).total();
+        double rearTransfer = LoadTransferParts.of(vehicle.rear(), masses.rearSprungMass(), rearRoll,
+                roll.rearRollPerAccel()).total();
         return new RollBalance(roll, frontTransfer, rearTransfer, frontTransfer / (frontTransfer + rearTransfer));
     }
 
@@ -127,16 +121,5 @@ public final class SetupEvaluator {
                 vehicle.chassisTorsionalStiffness());
         return TurnAnalysis.analyse(cornering, masses.mass(), masses.frontMassFraction(), frontGrip, rearGrip,
                 CURVE_POINTS);
-    }
-
-    /** Half of (static axle load / g - unsprung axle mass), model.md 3; refused as VehicleAnalysis does. */
-    private static double cornerSprungMass(Axle axle, AxlePosition position, double axleLoad) {
-        double cornerSprungMass = (axleLoad / STANDARD_GRAVITY - axle.unsprungMass()) / 2;
-        if (!(cornerSprungMass > 0)) {
-            throw new ImpossibleVehicleException(String.format(
-                    "The %s unsprung mass %.1f kg is not less than the static mass on the %s axle %.1f kg.",
-                    position.key(), axle.unsprungMass(), position.key(), axleLoad / STANDARD_GRAVITY));
-        }
-        return cornerSprungMass;
     }
 }

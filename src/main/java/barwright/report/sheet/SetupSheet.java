@@ -36,6 +36,12 @@ import java.util.function.Function;
  * lines; the text uses the standard Helvetica fonts, so the sheet needs no font files.
  */
 public final class SetupSheet {
+    /*
+     * PDFBox reports through commons-logging (java.util.logging here) that it maps the standard Helvetica onto
+     * a system font and builds a font cache: notes for its developers, noise for a person printing a sheet.
+     * Held in a field so the setting is not lost when the logger is collected.
+     */
+    private static final java.util.logging.Logger PDFBOX_LOG = quietPdfBox();
     private static final float MARGIN = 40;
     private static final float PAGE_WIDTH = PDRectangle.A4.getWidth();
     private static final float PAGE_HEIGHT = PDRectangle.A4.getHeight();
@@ -256,5 +262,11 @@ public final class SetupSheet {
 
     private static String percent(double share) {
         return String.format(Locale.ROOT, "%.1f %%", share * 100);
+    }
+
+    private static java.util.logging.Logger quietPdfBox() {
+        java.util.logging.Logger logger = java.util.logging.Logger.getLogger("org.apache.pdfbox");
+        logger.setLevel(java.util.logging.Level.SEVERE);
+        return logger;
     }
 }
