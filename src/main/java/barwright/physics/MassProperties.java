@@ -46,6 +46,11 @@ public record MassProperties(double mass, double frontMassFraction, double cgToF
             return turn == TurnDirection.LEFT ? rightRear : leftRear;
         }
 
+        /** @return true where each axle's two wheels carry exactly the same static load */
+        public boolean symmetric() {
+            return leftFront == rightFront && leftRear == rightRear;
+        }
+
         public double frontAxle() {
             return leftFront + rightFront;
         }
