@@ -151,7 +151,7 @@ public final class VehicleFileReader {
         JsonNode analysis = reader.object(tree, "", "analysis", false);
         double travelMm = analysis == null ? DEFAULT_DIFFERENTIAL_TRAVEL_MM
                 : reader.optionalNumber(analysis, "analysis", "differentialWheelTravelMm",
-                Range.between(0, 500, "mm"), DEFAULT_DIFFERENTIAL_TRAVEL_MM);
+                Range.above(0, 500, "mm"), DEFAULT_DIFFERENTIAL_TRAVEL_MM);
 
         Axle front = frontNode == null ? null : AxleReader.read(frontNode, "front", reader);
         Axle rear = rearNode == null ? null : AxleReader.read(rearNode, "rear", reader);

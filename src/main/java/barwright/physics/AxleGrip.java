@@ -14,6 +14,9 @@ import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
  */
 public final class AxleGrip {
     private static final double SLIP_ACCURACY = 1e-10;
+    /** Newton's method stops when a step is below this (rad): with quadratic convergence the root is then exact. */
+    private static final double NEWTON_STEP_TOLERANCE = 1e-13;
+    private static final int NEWTON_MAX_ITERATIONS = 100;
     private final TyreModel tyre;
 
     public AxleGrip(TyreModel tyre) {
@@ -44,15 +47,16 @@ public final class AxleGrip {
         if (requiredForce <= 0) {
             return 0;
         }
-        UnivariateFunction surplus = slip -> tyre.lateralForce(slip, outsideLoad)
-                + tyre.lateralForce(slip, insideLoad) - requiredForce;
-        double firstPeak = Math.min(peakOf(outsideLoad), peakOf(insideLoad));
-        BrentSolver solver = new BrentSolver(SLIP_ACCURACY);
+        TyreModel.LoadedCurve outside = tyre.atLoad(outsideLoad);
+        TyreModel.LoadedCurve inside = tyre.atLoad(insideLoad);
+        UnivariateFunction surplus = slip -> outside.lateralForce(slip) + inside.lateralForce(slip) - requiredForce;
+        double firstPeak = Math.min(outside.peakSlipAngle(), inside.peakSlipAngle());
         if (surplus.value(firstPeak) >= 0) {
             // both curves still rise up to the first tyre's peak: the root is unique there
-            return solver.solve(200, surplus, 0, firstPeak);
+            return risingRoot(outside, inside, requiredForce, firstPeak);
         }
-        double lastPeak = Math.max(peakOf(outsideLoad), peakOf(insideLoad));
+        BrentSolver solver = new BrentSolver(SLIP_ACCURACY);
+        double lastPeak = Math.max(outside.peakSlipAngle(), inside.peakSlipAngle());
         if (lastPeak <= firstPeak) {
             return Double.NaN;
         }
@@ -66,7 +70,40 @@ public final class AxleGrip {
         return solver.solve(200, surplus, firstPeak, top);
     }
 
-    private double peakOf(double load) {
-        return load > 0 ? tyre.peakSlipAngle(load) : TyreModel.MAX_SLIP;
+    /**
+     * The root of F_o(alpha) + F_i(alpha) = required on [0, high], where the sum rises from below the force to at
+     * least it: Newton's method from the linear estimate required / (C_o + C_i), kept inside the bracket that the
+     * signs narrow, with bisection wherever a step would leave it (a safeguarded Newton iteration, e.g. Press et
+     * al., Numerical Recipes, "rtsafe"). It needs about four evaluations where a Brent search needs ten.
+     */
+    private static double risingRoot(TyreModel.LoadedCurve outside, TyreModel.LoadedCurve inside, double required,
+                                     double high) {
+        double low = 0;
+        double[] sums = new double[2];
+        double slip = required / (outside.initialSlope() + inside.initialSlope());
+        if (!(slip > low && slip < high)) {
+            slip = (low + high) / 2;
+        }
+        for (int iteration = 0; iteration < NEWTON_MAX_ITERATIONS; iteration++) {
+            sums[0] = -required;
+            sums[1] = 0;
+            outside.addForceAndSlope(slip, sums);
+            inside.addForceAndSlope(slip, sums);
+            if (sums[0] == 0) {
+                return slip;
+            }
+            if (sums[0] < 0) {
+                low = slip;
+            } else {
+                high = slip;
+            }
+            double step = sums[0] / sums[1];
+            if (Math.abs(step) <= NEWTON_STEP_TOLERANCE) {
+                return slip - step;
+            }
+            double next = slip - step;
+            slip = next > low && next < high ? next : (low + high) / 2;
+        }
+        return slip;
     }
 }

@@ -46,6 +46,11 @@ public record MassProperties(double mass, double frontMassFraction, double cgToF
             return turn == TurnDirection.LEFT ? rightRear : leftRear;
         }
 
+        /** @return true where each axle's two wheels carry exactly the same static load */
+        public boolean symmetric() {
+            return leftFront == rightFront && leftRear == rightRear;
+        }
+
         public double frontAxle() {
             return leftFront + rightFront;
         }
@@ -74,6 +79,12 @@ public record MassProperties(double mass, double frontMassFraction, double cgToF
         }
         double sprungCgHeight = (mass * vehicle.cgHeight() - unsprungFront * vehicle.front().unsprungCgHeight()
                 - unsprungRear * vehicle.rear().unsprungCgHeight()) / sprungMass;
+        if (!(sprungCgHeight > 0)) {
+            throw new ImpossibleVehicleException(String.format(
+                    "The sprung mass's centre comes out %.0f mm above the ground, at or below it: the unsprung "
+                            + "masses and their heights do not fit the car's CG height of %.0f mm.",
+                    sprungCgHeight * 1e3, vehicle.cgHeight() * 1e3));
+        }
         double sprungCgToFront = (mass * cgToFront - unsprungRear * wheelbase) / sprungMass;
         if (sprungCgToFront < 0 || sprungCgToFront > wheelbase) {
             throw new ImpossibleVehicleException(String.format(

@@ -66,23 +66,68 @@ public final class TyreModel {
 
     /** @return the Magic Formula lateral force F_y at a slip angle (N) */
     public double lateralForce(double slipAngle, double load) {
-        double peak = peakForce(load);
-        if (peak <= 0) {
-            return 0;
-        }
-        double shape = tyre.shapeFactor();
-        double stiffnessFactor = corneringStiffness(load) / (shape * peak);
-        double x = stiffnessFactor * slipAngle;
-        return peak * Math.sin(shape * Math.atan(x - tyre.curvatureFactor() * (x - Math.atan(x))));
+        return atLoad(load).lateralForce(slipAngle);
     }
 
     /** @return the slip angle at which the force peaks for this load (rad), at most {@link #MAX_SLIP} */
     public double peakSlipAngle(double load) {
+        return atLoad(load).peakSlipAngle();
+    }
+
+    /**
+     * @return the force curve at one load, its Magic Formula factors worked out once: a root search over the
+     *     slip angle evaluates the curve many times at the same load
+     */
+    public LoadedCurve atLoad(double load) {
         double peak = peakForce(load);
         if (peak <= 0) {
-            return MAX_SLIP;
+            return new LoadedCurve(0, 0, tyre.shapeFactor(), tyre.curvatureFactor(), MAX_SLIP);
         }
         double stiffnessFactor = corneringStiffness(load) / (tyre.shapeFactor() * peak);
-        return Math.min(MAX_SLIP, peakSlipTimesB / stiffnessFactor);
+        return new LoadedCurve(peak, stiffnessFactor, tyre.shapeFactor(), tyre.curvatureFactor(),
+                Math.min(MAX_SLIP, peakSlipTimesB / stiffnessFactor));
+    }
+
+    /**
+     * The tyre's lateral force curve at one vertical load (Magic Formula, model.md 8).
+     *
+     * @param peak            D = mu F_z (N); zero for an unloaded tyre, which gives no force
+     * @param stiffnessFactor B (1/rad)
+     * @param shape           C
+     * @param curvature       E
+     * @param peakSlipAngle   the slip angle of the peak (rad), at most {@link #MAX_SLIP}
+     */
+    public record LoadedCurve(double peak, double stiffnessFactor, double shape, double curvature,
+                              double peakSlipAngle) {
+        /** @return F_y = D sin(C atan(B alpha - E (B alpha - atan(B alpha)))) (N) */
+        public double lateralForce(double slipAngle) {
+            if (peak <= 0) {
+                return 0;
+            }
+            double x = stiffnessFactor * slipAngle;
+            return peak * Math.sin(shape * Math.atan(x - curvature * (x - Math.atan(x))));
+        }
+
+        /** @return the slope at zero slip, B C D: the cornering stiffness at this load (N/rad) */
+        public double initialSlope() {
+            return peak * shape * stiffnessFactor;
+        }
+
+        /**
+         * Adds F_y and its slope dF_y/d alpha at a slip angle to {@code sums[0]} and {@code sums[1]}, sharing the
+         * arctangents: dF/d alpha = D C cos(C theta) / (1 + phi^2) * (1 - E + E / (1 + x^2)) * B, with x = B alpha,
+         * phi = x - E (x - atan x), theta = atan phi (the chain rule on the formula above).
+         */
+        void addForceAndSlope(double slipAngle, double[] sums) {
+            if (peak <= 0) {
+                return;
+            }
+            double x = stiffnessFactor * slipAngle;
+            double phi = x - curvature * (x - Math.atan(x));
+            double angle = shape * Math.atan(phi);
+            sums[0] += peak * Math.sin(angle);
+            sums[1] += peak * shape * Math.cos(angle) / (1 + phi * phi)
+                    * (1 - curvature + curvature / (1 + x * x)) * stiffnessFactor;
+        }
     }
 }

@@ -64,6 +64,9 @@ class BadInputTest {
                         "front.bar.material.yieldStrengthMPa = 1000000 MPa"),
                 arguments("negative check travel", "analysis.differentialWheelTravelMm", "-1",
                         "analysis.differentialWheelTravelMm = -1 mm"),
+                // a check at no travel has no stress: its safety factor would print as "Infinity"
+                arguments("zero check travel", "analysis.differentialWheelTravelMm", "0",
+                        "analysis.differentialWheelTravelMm = 0 mm: must be more than 0 and at most 500 mm"),
                 arguments("corner mass 0", "vehicle.cornerMassesKg",
                         "{\"leftFront\": 0, \"rightFront\": 330, \"leftRear\": 190, \"rightRear\": 210}",
                         "vehicle.cornerMassesKg.leftFront = 0 kg"),

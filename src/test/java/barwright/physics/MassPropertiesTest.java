@@ -58,6 +58,19 @@ class MassPropertiesTest {
     }
 
     @Test
+    void aSprungCentreBelowTheGroundIsRefused() {
+        // h_s = (m h - m_uf h_uf - m_ur h_ur) / m_s (model.md 4): a 1050 kg car with its CG at 0.1 m and 300 kg
+        // of unsprung mass at 0.9 m gives h_s = (105 - 270) / 750 < 0, a body under the road: impossible, and
+        // before this check it gave a negative roll gradient and a negative share of load transfer
+        Vehicle car = TestCars.clubCar();
+        Vehicle impossible = car.withCgHeight(0.1)
+                .withFront(TestCars.axle(1.46, 0.06, 150, 0.9, 55e3, 0.95, 230e3, null))
+                .withRear(TestCars.axle(1.44, 0.11, 150, 0.9, 45e3, 0.9, 230e3, null));
+        assertThatThrownBy(() -> MassProperties.of(impossible)).isInstanceOf(ImpossibleVehicleException.class)
+                .hasMessageContaining("sprung mass's centre comes out -220 mm above the ground");
+    }
+
+    @Test
     void unsprungMassesThatLeaveNoSprungMassAreRefused() {
         Vehicle car = TestCars.clubCar().withMassDistribution(150, 0.5);
         assertThatThrownBy(() -> MassProperties.of(car)).isInstanceOf(ImpossibleVehicleException.class)
