@@ -14,9 +14,6 @@ import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
  */
 public final class AxleGrip {
     private static final double SLIP_ACCURACY = 1e-10;
-    /** Newton's method stops when a step is below this (rad): with quadratic convergence the root is then exact. */
-    private static final double NEWTON_STEP_TOLERANCE = 1e-13;
-    private static final int NEWTON_MAX_ITERATIONS = 100;
     private final TyreModel tyre;
 
     public AxleGrip(TyreModel tyre) {
@@ -51,11 +48,11 @@ public final class AxleGrip {
         TyreModel.LoadedCurve inside = tyre.atLoad(insideLoad);
         UnivariateFunction surplus = slip -> outside.lateralForce(slip) + inside.lateralForce(slip) - requiredForce;
         double firstPeak = Math.min(outside.peakSlipAngle(), inside.peakSlipAngle());
+        BrentSolver solver = new BrentSolver(SLIP_ACCURACY);
         if (surplus.value(firstPeak) >= 0) {
             // both curves still rise up to the first tyre's peak: the root is unique there
-            return risingRoot(outside, inside, requiredForce, firstPeak);
+            return solver.solve(200, surplus, 0, firstPeak);
         }
-        BrentSolver solver = new BrentSolver(SLIP_ACCURACY);
         double lastPeak = Math.max(outside.peakSlipAngle(), inside.peakSlipAngle());
         if (lastPeak <= firstPeak) {
             return Double.NaN;
@@ -68,42 +65,5 @@ public final class AxleGrip {
             return Double.NaN;
         }
         return solver.solve(200, surplus, firstPeak, top);
-    }
-
-    /**
-     * The root of F_o(alpha) + F_i(alpha) = required on [0, high], where the sum rises from below the force to at
-     * least it: Newton's method from the linear estimate required / (C_o + C_i), kept inside the bracket that the
-     * signs narrow, with bisection wherever a step would leave it (a safeguarded Newton iteration, e.g. Press et
-     * al., Numerical Recipes, "rtsafe"). It needs about four evaluations where a Brent search needs ten.
-     */
-    private static double risingRoot(TyreModel.LoadedCurve outside, TyreModel.LoadedCurve inside, double required,
-                                     double high) {
-        double low = 0;
-        double[] sums = new double[2];
-        double slip = required / (outside.initialSlope() + inside.initialSlope());
-        if (!(slip > low && slip < high)) {
-            slip = (low + high) / 2;
-        }
-        for (int iteration = 0; iteration < NEWTON_MAX_ITERATIONS; iteration++) {
-            sums[0] = -required;
-            sums[1] = 0;
-            outside.addForceAndSlope(slip, sums);
-            inside.addForceAndSlope(slip, sums);
-            if (sums[0] == 0) {
-                return slip;
-            }
-            if (sums[0] < 0) {
-                low = slip;
-            } else {
-                high = slip;
-            }
-            double step = sums[0] / sums[1];
-            if (Math.abs(step) <= NEWTON_STEP_TOLERANCE) {
-                return slip - step;
-            }
-            double next = slip - step;
-            slip = next > low && next < high ? next : (low + high) / 2;
-        }
-        return slip;
     }
 }

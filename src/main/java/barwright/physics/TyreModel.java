@@ -107,27 +107,5 @@ public final class TyreModel {
             double x = stiffnessFactor * slipAngle;
             return peak * Math.sin(shape * Math.atan(x - curvature * (x - Math.atan(x))));
         }
-
-        /** @return the slope at zero slip, B C D: the cornering stiffness at this load (N/rad) */
-        public double initialSlope() {
-            return peak * shape * stiffnessFactor;
-        }
-
-        /**
-         * Adds F_y and its slope dF_y/d alpha at a slip angle to {@code sums[0]} and {@code sums[1]}, sharing the
-         * arctangents: dF/d alpha = D C cos(C theta) / (1 + phi^2) * (1 - E + E / (1 + x^2)) * B, with x = B alpha,
-         * phi = x - E (x - atan x), theta = atan phi (the chain rule on the formula above).
-         */
-        void addForceAndSlope(double slipAngle, double[] sums) {
-            if (peak <= 0) {
-                return;
-            }
-            double x = stiffnessFactor * slipAngle;
-            double phi = x - curvature * (x - Math.atan(x));
-            double angle = shape * Math.atan(phi);
-            sums[0] += peak * Math.sin(angle);
-            sums[1] += peak * shape * Math.cos(angle) / (1 + phi * phi)
-                    * (1 - curvature + curvature / (1 + x * x)) * stiffnessFactor;
-        }
     }
 }
