@@ -18,7 +18,10 @@ public final class Cli {
     public static final int REFUSED = 2;
 
     private static final List<Command> COMMANDS = List.of(
-            new AnalyzeCommand());
+            new AnalyzeCommand(),
+            new EnvelopeCommand(),
+            new SensitivityCommand(),
+            new ChassisCommand());
 
     private Cli() {
     }
