@@ -135,7 +135,14 @@ public final class LiftEnvelope {
                 values.add(solver.solve(EVALUATIONS, difference, grid.get(i - 1), grid.get(i)));
             }
         }
-        return new ArrayList<>(values);
+        // a grid value and a quoted or solved one that differ by round-off only are one point
+        List<Double> distinct = new ArrayList<>();
+        for (double value : values) {
+            if (distinct.isEmpty() || value - distinct.get(distinct.size() - 1) > ACCURACY) {
+                distinct.add(value);
+            }
+        }
+        return distinct;
     }
 
     /**
