@@ -50,6 +50,7 @@ public final class NumberField extends JTextField {
         setHorizontalAlignment(SwingConstants.RIGHT);
         getAccessibleContext().setAccessibleName(spec.label());
         problemLabel.setName(path + ".problem");
+        unitLabel.setName(path + ".unit");
         problemLabel.setVisible(false);
         getDocument().addDocumentListener(onChange(this::typed));
         addFocusListener(new FocusAdapter() {
