@@ -55,12 +55,12 @@ public final class ChassisText {
                 + "their effect is a rule discussed by Deakin et al., SAE 2000-01-3554.";
         if (study.stiffnessForTarget() == null) {
             return "No chassis stiffness in the range searched lets the bar change (" + study.barChange() + ") deliver "
-                    + percent(ChassisStudy.DELIVERED_TARGET) + " of its rigid-chassis effect." + rule;
+                    + wholePercent(ChassisStudy.DELIVERED_TARGET) + " of its rigid-chassis effect." + rule;
         }
         double target = study.stiffnessForTarget();
         return String.format(Locale.ROOT, "For a bar change (%s) to deliver %s of its rigid-chassis effect on the front share, "
                         + "the chassis must be at least %s, %.2f times the car's total roll stiffness.%s",
-                study.barChange(), percent(ChassisStudy.DELIVERED_TARGET), stiffness(target),
+                study.barChange(), wholePercent(ChassisStudy.DELIVERED_TARGET), stiffness(target),
                 target / study.totalRollStiffness(), rule);
     }
 
@@ -71,6 +71,10 @@ public final class ChassisText {
 
     private String stiffness(double nmPerRad) {
         return Figures.format(nmPerRad, Quantity.ROLL_STIFFNESS, units, 0);
+    }
+
+    private static String wholePercent(double fraction) {
+        return String.format(Locale.ROOT, "%.0f %%", fraction * 100);
     }
 
     private static String percent(double fraction) {

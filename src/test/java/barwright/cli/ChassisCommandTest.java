@@ -30,7 +30,7 @@ class ChassisCommandTest {
         CommandRun run = CommandRun.of("chassis", "sample-vehicles/club-hatchback.json", "--units", "us");
         assertThat(run.exitCode()).isZero();
         assertThat(run.out())
-                .contains("to deliver 80.0 % of its rigid-chassis effect")
+                .contains("to deliver 80 % of its rigid-chassis effect")
                 .contains("lbf·ft/deg")
                 .contains("Deakin et al., SAE 2000-01-3554")
                 .contains("no chassis stiffness in its file");

@@ -161,7 +161,7 @@ public final class ResultsTabs extends JTabbedPane {
     /** @return the chart on the selected tab, or null on the car picture */
     public ResultChart selectedChart() {
         int index = getSelectedIndex();
-        return index >= 1 ? charts.get(index - 1) : null;
+        return index >= 1 && index <= charts.size() ? charts.get(index - 1) : null;
     }
 
     public CarBehindView car() {

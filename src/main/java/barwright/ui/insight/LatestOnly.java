@@ -1,0 +1,78 @@
+package barwright.ui.insight;
+
+import javax.swing.SwingUtilities;
+import javax.swing.SwingWorker;
+import java.util.concurrent.ExecutionException;
+import java.util.function.Consumer;
+import java.util.function.Function;
+
+/**
+ * Runs a computation off the event thread, one at a time; requests made while one runs collapse into the
+ * newest. Results (or the failure's message) arrive on the event thread. Call from the event thread.
+ *
+ * @param <I> what is computed from
+ * @param <O> what is computed
+ */
+final class LatestOnly<I, O> {
+    private final Function<I, O> work;
+    private final Consumer<O> onResult;
+    private final Consumer<String> onFailure;
+    private I pending;
+    private boolean running;
+
+    LatestOnly(Function<I, O> work, Consumer<O> onResult, Consumer<String> onFailure) {
+        this.work = work;
+        this.onResult = onResult;
+        this.onFailure = onFailure;
+    }
+
+    void submit(I input) {
+        if (!SwingUtilities.isEventDispatchThread()) {
+            throw new IllegalStateException("submit from the event thread");
+        }
+        pending = input;
+        if (!running) {
+            startNext();
+        }
+    }
+
+    /** @return true when nothing runs or waits */
+    boolean isIdle() {
+        return !running && pending == null;
+    }
+
+    private void startNext() {
+        I input = pending;
+        pending = null;
+        running = true;
+        new SwingWorker<O, Void>() {
+            @Override
+            protected O doInBackground() {
+                return work.apply(input);
+            }
+
+            @Override
+            protected void done() {
+                running = false;
+                // a newer request supersedes this answer: only the newest is shown
+                if (pending == null) {
+                    deliver(this);
+                }
+                if (pending != null) {
+                    startNext();
+                }
+            }
+        }.execute();
+    }
+
+    private void deliver(SwingWorker<O, Void> worker) {
+        try {
+            onResult.accept(worker.get());
+        } catch (ExecutionException failed) {
+            Throwable cause = failed.getCause() != null ? failed.getCause() : failed;
+            onFailure.accept(cause.getMessage() != null ? cause.getMessage() : cause.toString());
+        } catch (InterruptedException interrupted) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}
