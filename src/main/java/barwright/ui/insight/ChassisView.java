@@ -20,7 +20,6 @@ import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
-import javax.swing.BorderFactory;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
@@ -40,7 +39,7 @@ public final class ChassisView extends JPanel {
     private final XYSeriesCollection shares = new XYSeriesCollection();
     private final XYSeriesCollection roll = new XYSeriesCollection();
     private final JFreeChart chart;
-    private final JTextArea statement = new JTextArea();
+    private final JTextArea statement = InsightCharts.sentences("insight.chassis.statement");
 
     ChassisView(ViewSettings view) {
         super(new BorderLayout());
@@ -58,17 +57,7 @@ public final class ChassisView extends JPanel {
         plot.setRangeAxis(1, rollAxis);
         plot.setDataset(1, roll);
         plot.mapDatasetToRangeAxis(1, 1);
-        ChartPanel panel = new ChartPanel(chart, false, false, false, true, true);
-        panel.setName("insight.chassis.chart");
-        panel.setMouseWheelEnabled(false);
-        panel.setPopupMenu(null);
-        panel.setMaximumDrawWidth(4000);
-        panel.setMaximumDrawHeight(3000);
-        statement.setName("insight.chassis.statement");
-        statement.setEditable(false);
-        statement.setLineWrap(true);
-        statement.setWrapStyleWord(true);
-        statement.setBorder(BorderFactory.createEmptyBorder(4, 8, 4, 8));
+        ChartPanel panel = InsightCharts.panel(chart, "insight.chassis.chart");
         JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, panel, new JScrollPane(statement));
         split.setResizeWeight(0.75);
         split.setBorder(null);

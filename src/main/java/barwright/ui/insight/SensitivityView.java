@@ -77,12 +77,7 @@ public final class SensitivityView extends JPanel {
         chart = ChartFactory.createBarChart("What one small change does", "", "", data, PlotOrientation.HORIZONTAL,
                 true, true, false);
         chart.getCategoryPlot().setRenderer(new TendencyRenderer());
-        ChartPanel panel = new ChartPanel(chart, false, false, false, true, true);
-        panel.setName("insight.sensitivity.chart");
-        panel.setMouseWheelEnabled(false);
-        panel.setPopupMenu(null);
-        panel.setMaximumDrawWidth(4000);
-        panel.setMaximumDrawHeight(3000);
+        ChartPanel panel = InsightCharts.panel(chart, "insight.sensitivity.chart");
         JTable rows = new JTable(table) {
             @Override
             public String getToolTipText(java.awt.event.MouseEvent event) {

@@ -7,7 +7,6 @@ import barwright.ui.document.KeyPath;
 import com.fasterxml.jackson.databind.node.IntNode;
 
 import javax.imageio.ImageIO;
-import javax.swing.JComponent;
 import javax.swing.SwingUtilities;
 import java.awt.image.BufferedImage;
 import java.nio.file.Files;
@@ -47,23 +46,21 @@ public final class InsightScreenshots {
             int index = tab;
             SwingUtilities.invokeAndWait(() -> panel.tabs().setSelectedIndex(index));
             InsightWindows.settle(window, panel);
-            write(window.getRootPane(), folder.resolve(names[tab] + ".png"));
+            write(window, folder.resolve(names[tab] + ".png"));
         }
         SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
     }
 
-    static void write(JComponent component, Path file) throws Exception {
-        AtomicReference<BufferedImage> image = new AtomicReference<>();
+    /** Captures the window from the screen, as a person sees it (toolchain.md: Robot.createScreenCapture). */
+    static void write(MainWindow window, Path file) throws Exception {
+        AtomicReference<java.awt.Rectangle> bounds = new AtomicReference<>();
         SwingUtilities.invokeAndWait(() -> {
-            BufferedImage picture = new BufferedImage(component.getWidth(), component.getHeight(),
-                    BufferedImage.TYPE_INT_RGB);
-            var graphics = picture.createGraphics();
-            component.printAll(graphics);
-            graphics.dispose();
-            image.set(picture);
+            java.awt.Point corner = window.getRootPane().getLocationOnScreen();
+            bounds.set(new java.awt.Rectangle(corner, window.getRootPane().getSize()));
         });
-        ImageIO.write(image.get(), "png", file.toFile());
+        BufferedImage picture = new java.awt.Robot().createScreenCapture(bounds.get());
+        ImageIO.write(picture, "png", file.toFile());
         System.out.println("wrote " + file);
     }
 }
