@@ -22,6 +22,10 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
 
 import static barwright.units.Constants.STANDARD_GRAVITY;
 import static org.assertj.core.api.Assertions.assertThat;
@@ -109,6 +113,23 @@ class InsightViewsTest {
     }
 
     @Test
+    void a_chosen_vehicle_file_is_drawn_dashed_and_a_refused_one_is_said_so(@TempDir Path folder) throws Exception {
+        Path saloon = Path.of("sample-vehicles", "road-saloon.json");
+        GuiActionRunner.execute(() -> panel.envelope().compareWith(saloon));
+        InsightWindows.settle(window, panel);
+        LiftEnvelopeResult expected = coreEnvelope(barwright.io.VehicleFileReader.read(saloon).vehicle());
+        assertThat(series(EnvelopeChart.COMPARED_FRONT).getX(0).doubleValue()).isEqualTo(
+                -expected.boundary(Wheel.LEFT_FRONT).points().get(0).lateralAcceleration() / STANDARD_GRAVITY);
+        assertThat(frame.label("insight.envelope.compareNote").text()).contains("Road saloon");
+        Path broken = folder.resolve("broken.json");
+        Files.writeString(broken, Files.readString(saloon).replace("\"wheelbaseMm\": ", "\"wheelbaseMm\": -"));
+        GuiActionRunner.execute(() -> panel.envelope().compareWith(broken));
+        InsightWindows.settle(window, panel);
+        assertThat(frame.label("insight.envelope.compareNote").text())
+                .startsWith("Not compared: the file was refused").contains("vehicle.wheelbaseMm");
+    }
+
+    @Test
     void the_sensitivity_table_lists_the_core_rows_in_order_with_their_steps() {
         frame.tabbedPane("insight.tabs").selectTab("What moves the balance");
         SensitivityResult expected = Sensitivity.of(shownVehicle());
@@ -146,8 +167,13 @@ class InsightViewsTest {
         GuiActionRunner.execute(() -> window.document().replace(Samples.load(Samples.ALL.get(2)), null, "sample"));
         InsightWindows.settle(window, panel);
         assertThat(GuiActionRunner.execute(() -> panel.current().chassis().current())).isNotNull();
-        var markers = GuiActionRunner.execute(() -> panel.chassis().chart().getXYPlot().getDomainMarkers(
-                org.jfree.chart.ui.Layer.FOREGROUND));
-        assertThat(markers).anyMatch(marker -> "this car".equals(((org.jfree.chart.plot.Marker) marker).getLabel()));
+        java.util.List<String> labels = GuiActionRunner.execute(() -> {
+            java.util.List<String> found = new java.util.ArrayList<>();
+            for (Object marker : panel.chassis().chart().getXYPlot().getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND)) {
+                found.add(((org.jfree.chart.plot.Marker) marker).getLabel());
+            }
+            return found;
+        });
+        assertThat(labels).contains("this car");
     }
 }
