@@ -20,7 +20,7 @@ final class InsightDisplay {
         boolean unix = !System.getProperty("os.name", "").toLowerCase(java.util.Locale.ROOT).contains("win")
                 && !System.getProperty("os.name", "").toLowerCase(java.util.Locale.ROOT).contains("mac");
         String problem = headless ? "the JVM is headless"
-                : unix && (display == null || display.isBlank()) ? "DISPLAY is not set" : null;
+                : unix && (display == null || display.isBlank()) ? "DISPLAY is not set" : unusable();
         if (problem == null) {
             return;
         }
@@ -28,5 +28,15 @@ final class InsightDisplay {
             fail("gui.required is true but " + problem + ": run under xvfb-run -a -s \"-screen 0 1280x1024x24\"");
         }
         Assumptions.abort(problem + " (set -Dgui.required=true to make this a failure)");
+    }
+
+    /** @return why the display named cannot be reached, or null where it can */
+    private static String unusable() {
+        try {
+            GraphicsEnvironment.getLocalGraphicsEnvironment().getDefaultScreenDevice();
+            return null;
+        } catch (Throwable unreachable) {
+            return "the display cannot be used (" + unreachable + ")";
+        }
     }
 }

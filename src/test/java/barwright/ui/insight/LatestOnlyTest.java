@@ -1,5 +1,7 @@
 package barwright.ui.insight;
 
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import javax.swing.SwingUtilities;
@@ -10,8 +12,17 @@ import java.util.concurrent.TimeUnit;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-/** The insight views' background work: off the event thread, newest request wins, answers on the event thread. */
+/**
+ * The insight views' background work: off the event thread, newest request wins, answers on the event thread.
+ * The event thread needs the window toolkit, so these run where the window tests do.
+ */
+@Tag("window")
 class LatestOnlyTest {
+    @BeforeEach
+    void needsDisplay() {
+        InsightDisplay.require();
+    }
+
     @Test
     void work_runs_off_the_event_thread_and_only_the_newest_answer_arrives() throws Exception {
         List<Boolean> workOnEventThread = new CopyOnWriteArrayList<>();
