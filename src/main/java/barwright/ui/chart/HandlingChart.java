@@ -68,7 +68,7 @@ public final class HandlingChart extends ResultChart {
         double highest = Axes.shown(Math.max(turn.frontLimit(), turn.rearLimit()), Quantity.ACCELERATION, view);
         plot.getDomainAxis().setAutoRange(false);
         plot.getDomainAxis().setRange(0, Math.max(0.05, highest * 1.08));
-        chart().setTitle("Handling in a " + probe.turn().word() + " turn: " + turn.balance().key() + " at the limit");
+        chart().getTitle().setText("Handling in a " + probe.turn().word() + " turn: " + turn.balance().key() + " at the limit");
         plot.getDomainAxis().setLabel(Axes.label("Lateral acceleration a_y", Quantity.ACCELERATION, view));
         plot.getRangeAxis().setLabel(Axes.label("Front slip angle minus rear", Quantity.ANGLE, view));
     }

@@ -21,7 +21,7 @@ class BarSweepTest {
         AnalysisResult now = VehicleAnalysis.analyse(car);
         assertThat(sweep.current()).isEqualTo(0.022);
         SweepResult.Point middle = sweep.points().get(BarSweep.POINTS / 2);
-        // the sweep spans 0.65 D to 1.35 D in 24 equal steps, so its middle point is D itself (to rounding)
+        // the sweep spans 0.65 D to 1.35 D in 16 equal steps, so its middle point is D itself (to rounding)
         assertThat(middle.parameter()).isCloseTo(0.022, within(1e-15));
         assertThat(middle.frontShare()).isCloseTo(now.frontLoadTransferShare(), within(1e-12));
         assertThat(middle.rollGradient()).isCloseTo(now.rollGradient(), within(1e-15));
