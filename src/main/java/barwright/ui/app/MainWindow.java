@@ -165,9 +165,7 @@ public final class MainWindow extends JFrame {
     /** Applies the theme and text size settings to this window. */
     void applyLook() {
         Themes.apply(theme(), textSize());
-        for (var chart : tabs.charts()) {
-            chart.show(results.shown(), results.isStale());
-        }
+        tabs.restyle();
         repaint();
     }
 

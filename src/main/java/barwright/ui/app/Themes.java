@@ -32,9 +32,13 @@ public final class Themes {
         if (baseFont == null) {
             UIManager.put("defaultFont", null);
             setup(theme);
+            FlatLaf.updateUI();
             baseFont = UIManager.getFont("defaultFont");
             if (baseFont == null) {
                 baseFont = UIManager.getFont("Label.font");
+            }
+            if (textSize <= 0) {
+                return; // the system's size: one set-up is enough (it counts at start-up)
             }
         }
         UIManager.put("defaultFont", textSize > 0 && baseFont != null

@@ -64,7 +64,11 @@ public final class HandlingChart extends ResultChart {
         plot.addDomainMarker(limitMarker("rear axle limit", turn.rearLimit(), ChartStyle.series(2)));
         ValueMarker zero = new ValueMarker(0, ChartStyle.text(), new BasicStroke(0.8f));
         plot.addRangeMarker(zero);
-        chart().setTitle("Handling in a " + probe.turn().word() + " turn: " + turn.balance().key() + " at the limit");
+        // both axle limits in view: the curve ends at the lower one, the other lies beyond it
+        double highest = Axes.shown(Math.max(turn.frontLimit(), turn.rearLimit()), Quantity.ACCELERATION, view);
+        plot.getDomainAxis().setAutoRange(false);
+        plot.getDomainAxis().setRange(0, Math.max(0.05, highest * 1.08));
+        chart().getTitle().setText("Handling in a " + probe.turn().word() + " turn: " + turn.balance().key() + " at the limit");
         plot.getDomainAxis().setLabel(Axes.label("Lateral acceleration a_y", Quantity.ACCELERATION, view));
         plot.getRangeAxis().setLabel(Axes.label("Front slip angle minus rear", Quantity.ANGLE, view));
     }
@@ -75,8 +79,11 @@ public final class HandlingChart extends ResultChart {
         marker.setLabel(String.format(view.locale(), "%s %.3f g", label, Axes.shown(accel, Quantity.ACCELERATION,
                 view)));
         marker.setLabelPaint(colour);
-        marker.setLabelAnchor(label.startsWith("front") ? RectangleAnchor.TOP_LEFT : RectangleAnchor.BOTTOM_LEFT);
-        marker.setLabelTextAnchor(label.startsWith("front") ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);
+        boolean front = label.startsWith("front");
+        marker.setLabelAnchor(front ? RectangleAnchor.TOP_LEFT : RectangleAnchor.BOTTOM_LEFT);
+        marker.setLabelTextAnchor(front ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);
+        marker.setLabelOffset(new org.jfree.chart.ui.RectangleInsets(front ? 14 : 4, 4, front ? 4 : 14, 4));
+        marker.setLabelBackgroundColor(new Color(0, 0, 0, 0));
         return marker;
     }
 }

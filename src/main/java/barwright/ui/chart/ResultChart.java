@@ -49,10 +49,14 @@ public abstract class ResultChart {
             if (outcome != null && outcome.result() != null) {
                 fill(outcome);
             }
-            ChartStyle.apply(chart);
         } finally {
             chart.setNotify(true);
         }
+    }
+
+    /** Dresses the chart in the current theme and text size again (after a theme change). */
+    public final void restyle() {
+        ChartStyle.apply(chart);
     }
 
     /** Called when the slider moves; charts that mark the probe override it. */

@@ -60,7 +60,7 @@ public final class RollChart extends ResultChart {
             note.setText("Without bars the body has no stable roll position.");
         }
         XYPlot plot = chart().getXYPlot();
-        chart().setTitle("Body roll in a " + probe.turn().word() + " turn, each car up to its grip limit");
+        chart().getTitle().setText("Body roll in a " + probe.turn().word() + " turn, each car up to its grip limit");
         plot.getDomainAxis().setLabel(Axes.label("Lateral acceleration a_y", Quantity.ACCELERATION, view));
         plot.getRangeAxis().setLabel(Axes.label("Body roll angle", Quantity.ANGLE, view));
     }

@@ -63,12 +63,15 @@ public final class SweepChart extends ResultChart {
     @Override
     protected void fill(AnalysisOutcome outcome) {
         SweepResult sweep = outcome.sweep();
+        if (sweep == null) {
+            return; // not worked out yet: it is asked for when this chart comes on screen
+        }
         XYPlot plot = chart().getXYPlot();
         shareData.removeAllSeries();
         rollData.removeAllSeries();
         plot.clearDomainMarkers();
         String bar = sweep.request().axle().key() + " bar";
-        chart().setTitle("Changing the " + bar + "'s " + sweep.request().parameter().words());
+        chart().getTitle().setText("Changing the " + bar + "'s " + sweep.request().parameter().words());
         if (sweep.unavailable() != null) {
             note.setText(sweep.unavailable());
             return;

@@ -65,7 +65,7 @@ public final class TransferSplitChart extends ResultChart {
         whole.setGroupingUsed(false);
         plot.getRenderer().setDefaultItemLabelGenerator(new StandardCategoryItemLabelGenerator("{2}", whole));
         plot.getRenderer().setDefaultItemLabelPaint(java.awt.Color.WHITE);
-        chart().setTitle(String.format(view.locale(), "Load moved to the outside wheels per g (front share %.1f %%)",
+        chart().getTitle().setText(String.format(view.locale(), "Load moved to the outside wheels per g (front share %.1f %%)",
                 outcome.result().frontLoadTransferShare() * 100));
         plot.getRangeAxis().setLabel(Axes.label("Load transfer per g of lateral acceleration", Quantity.FORCE_PER_G,
                 view));

@@ -86,7 +86,7 @@ public final class WheelLoadChart extends ResultChart {
         plot.clearAnnotations();
         markLift(plot, "front", turn.frontInsideLift(), limit);
         markLift(plot, "rear", turn.rearInsideLift(), limit);
-        chart().setTitle("Wheel loads in a " + direction.word() + " turn, up to the grip limit");
+        chart().getTitle().setText("Wheel loads in a " + direction.word() + " turn, up to the grip limit");
         plot.getDomainAxis().setLabel(Axes.label("Lateral acceleration a_y", Quantity.ACCELERATION, view));
         plot.getRangeAxis().setLabel(Axes.label("Vertical load on the wheel", Quantity.FORCE, view));
         probeMoved(outcome);

@@ -106,17 +106,17 @@ public final class FieldCatalogue {
             field("nominalLoadN", "Reference load", Quantity.FORCE, NONE,
                     "The load on one tyre at which the grip figures below are given; often near the static "
                             + "wheel load."),
-            field("frictionAtNominalLoad", "Peak grip at reference load", Quantity.RATIO, NONE,
+            field("frictionAtNominalLoad", "Peak grip at reference", Quantity.RATIO, NONE,
                     "Peak sideways force over vertical load at the reference load (the friction coefficient). "
                             + "From tyre test data: road tyres near 0.9-1.1, track tyres 1.2-1.5."),
             field("frictionLoadSensitivity", "Grip change with load", Quantity.RATIO, NONE,
                     "s in mu = mu0 (1 + s (Fz/Fz0 - 1)). Negative for real tyres, typically -0.1 to -0.2: a "
                             + "more heavily loaded tyre grips less per unit of load. This is what turns load "
                             + "transfer into understeer or oversteer."),
-            field("corneringStiffnessPerLoad", "Cornering stiffness per load (per rad)", Quantity.RATIO, NONE,
+            field("corneringStiffnessPerLoad", "Cornering stiffness / load (1/rad)", Quantity.RATIO, NONE,
                     "Slope of sideways force against slip angle near zero slip, at the reference load, over that "
                             + "load: per radian of slip. Tyre data usually give 12-20."),
-            field("corneringStiffnessPeakLoadRatio", "Load of stiffest cornering (x reference)", Quantity.RATIO,
+            field("corneringStiffnessPeakLoadRatio", "Stiffest at (× reference load)", Quantity.RATIO,
                     NONE, "The load, as a multiple of the reference load, at which the tyre's cornering stiffness "
                             + "is highest; typically 1.5 to 3."),
             field("shapeFactor", "Force curve shape (C)", Quantity.RATIO, NONE,

@@ -2,7 +2,6 @@ package barwright.ui.insight;
 
 import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
-import java.util.concurrent.ExecutionException;
 import java.util.function.Consumer;
 import java.util.function.Function;
 
@@ -45,34 +44,37 @@ final class LatestOnly<I, O> {
         I input = pending;
         pending = null;
         running = true;
-        new SwingWorker<O, Void>() {
+        new SwingWorker<Void, Void>() {
             @Override
-            protected O doInBackground() {
-                return work.apply(input);
-            }
-
-            @Override
-            protected void done() {
-                running = false;
-                // a newer request supersedes this answer: only the newest is shown
-                if (pending == null) {
-                    deliver(this);
+            protected Void doInBackground() {
+                O result = null;
+                String failure = null;
+                try {
+                    result = work.apply(input);
+                } catch (RuntimeException | Error failed) {
+                    failure = failed.getMessage() != null ? failed.getMessage() : failed.toString();
                 }
-                if (pending != null) {
-                    startNext();
-                }
+                // handed over with invokeLater, not done(): SwingWorker runs done() from a timer of about
+                // 33 ms, which would add that much to every edit
+                O finished = result;
+                String failed = failure;
+                SwingUtilities.invokeLater(() -> finished(finished, failed));
+                return null;
             }
         }.execute();
     }
 
-    private void deliver(SwingWorker<O, Void> worker) {
-        try {
-            onResult.accept(worker.get());
-        } catch (ExecutionException failed) {
-            Throwable cause = failed.getCause() != null ? failed.getCause() : failed;
-            onFailure.accept(cause.getMessage() != null ? cause.getMessage() : cause.toString());
-        } catch (InterruptedException interrupted) {
-            Thread.currentThread().interrupt();
+    private void finished(O result, String failure) {
+        running = false;
+        // a newer request supersedes this answer: only the newest is shown
+        if (pending == null) {
+            if (failure == null) {
+                onResult.accept(result);
+            } else {
+                onFailure.accept(failure);
+            }
+        } else {
+            startNext();
         }
     }
 }

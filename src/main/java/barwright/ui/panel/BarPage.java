@@ -27,7 +27,7 @@ import java.util.List;
 
 /** One axle's anti-roll bar: fitted or not, material, section, lengths, arm holes and the link. */
 final class BarPage extends EditorPage {
-    static final String CUSTOM = "Custom material (enter its values)";
+    static final String CUSTOM = "Custom (your own values)";
     private final AxlePosition axle;
     private final String bar;
     private JsonNode removedBar;

@@ -27,10 +27,14 @@ final class FigureButton extends JButton {
 
     /** Sets the figure's text; out-of-date figures are greyed and slanted. */
     void show(String text, boolean stale) {
-        setText(text);
-        setFont(getFont().deriveFont(stale ? Font.ITALIC : Font.PLAIN));
+        if (!text.equals(getText())) {
+            setText(text);
+        }
+        int style = stale ? Font.ITALIC : Font.PLAIN;
+        if (getFont().getStyle() != style) {
+            setFont(getFont().deriveFont(style));
+        }
         setForeground(stale ? Palette.muted() : javax.swing.UIManager.getColor("Label.foreground"));
-        setEnabled(true);
     }
 
     KeyFigure figure() {

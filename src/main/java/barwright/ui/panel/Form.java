@@ -48,6 +48,11 @@ final class Form extends PagePanel {
         } else if (component instanceof TextValueField text) {
             detachers.add(text::detach);
         }
+        if (component instanceof javax.swing.JTextField) {
+            // a number field never shrinks below what shows "1234.567" whole
+            component.setMinimumSize(new java.awt.Dimension(Math.max(component.getPreferredSize().width, 96),
+                    component.getPreferredSize().height));
+        }
         JLabel name = new JLabel(label);
         name.setLabelFor(component);
         name.setToolTipText(component.getToolTipText());

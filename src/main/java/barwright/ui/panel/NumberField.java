@@ -38,6 +38,7 @@ public final class NumberField extends JTextField {
     private final Consumer<DocumentEvent> documentListener = this::documentChanged;
     private final Runnable viewListener = this::reload;
     private boolean reloading;
+    private boolean editPending;
     private Object typingSession = new Object();
 
     public NumberField(OpenDocument document, ViewSettings view, KeyPath path, FieldSpec spec) {
@@ -52,7 +53,7 @@ public final class NumberField extends JTextField {
         problemLabel.setName(path + ".problem");
         unitLabel.setName(path + ".unit");
         problemLabel.setVisible(false);
-        getDocument().addDocumentListener(onChange(this::typed));
+        getDocument().addDocumentListener(onChange(this::textChanged));
         addFocusListener(new FocusAdapter() {
             @Override
             public void focusGained(FocusEvent event) {
@@ -117,10 +118,22 @@ public final class NumberField extends JTextField {
         view.removeListener(viewListener);
     }
 
-    private void typed() {
-        if (reloading) {
+    /**
+     * A change of the text becomes one edit at the end of the current event, so that a paste or a
+     * replacement (which Swing reports as a removal and an insertion) is one edit, not two.
+     */
+    private void textChanged() {
+        if (reloading || editPending) {
             return;
         }
+        editPending = true;
+        javax.swing.SwingUtilities.invokeLater(() -> {
+            editPending = false;
+            typed();
+        });
+    }
+
+    private void typed() {
         String text = getText();
         JsonNode value;
         OptionalDouble number = NumberText.parse(text, view.locale());

@@ -24,7 +24,6 @@ import javax.swing.JSlider;
 import javax.swing.JTabbedPane;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.function.BiConsumer;
 
@@ -32,9 +31,16 @@ import java.util.function.BiConsumer;
 public final class ResultsTabs extends JTabbedPane {
     private final ResultsModel results;
     private final CorneringProbe probe;
-    private final List<ResultChart> charts = new ArrayList<>();
+    /** The chart tabs after the car picture, in order; the last is the sweep. */
+    static final List<String> CHART_TITLES = List.of("Wheel loads", "Body roll", "Load transfer parts", "Handling",
+            "Bar sweep");
+    private final ResultChart[] built = new ResultChart[CHART_TITLES.size()];
+    private final barwright.ui.field.ViewSettings view;
+    private final AnalysisController analysis;
+    private final BiConsumer<ResultChart, String> export;
     private final CarBehindView car;
     private TurnDirection shownTurn;
+    private final java.util.Set<ResultChart> outOfDate = new java.util.HashSet<>();
 
     /**
      * @param export called with a chart and "png" or "svg" when a person asks to export it
@@ -52,28 +58,19 @@ public final class ResultsTabs extends JTabbedPane {
         carTab.add(controls(), BorderLayout.SOUTH);
         addTab("Car from behind", carTab);
         setToolTipTextAt(0, "The car in a steady turn at the slider's lateral acceleration");
-        charts.add(new WheelLoadChart(view, probe));
-        charts.add(new RollChart(view, probe));
-        charts.add(new TransferSplitChart(view, probe));
-        charts.add(new HandlingChart(view, probe));
-        SweepChart sweep = new SweepChart(view, probe);
-        charts.add(sweep);
-        for (ResultChart chart : charts) {
-            JPanel tab = new JPanel(new BorderLayout());
-            tab.add(chart.component(), BorderLayout.CENTER);
-            JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
-            if (chart == sweep) {
-                sweepControls(bar, analysis);
-            }
-            bar.add(Box.createHorizontalStrut(12));
-            bar.add(exportButton(chart, "png", "Save as PNG…", export));
-            bar.add(exportButton(chart, "svg", "Save as SVG…", export));
-            tab.add(bar, BorderLayout.SOUTH);
-            addTab(chart.title(), tab);
+        this.view = view;
+        this.analysis = analysis;
+        this.export = export;
+        for (String title : CHART_TITLES) {
+            addTab(title, new JPanel()); // the chart itself is made when its tab is first chosen
         }
         results.addListener(this::refresh);
         view.addListener(this::refresh);
         probe.addListener(this::probeMoved);
+        addChangeListener(event -> {
+            analysis.setSweepWanted(getSelectedIndex() == CHART_TITLES.size());
+            showSelected();
+        });
     }
 
     private JButton exportButton(ResultChart chart, String type, String text, BiConsumer<ResultChart, String> export) {
@@ -135,13 +132,27 @@ public final class ResultsTabs extends JTabbedPane {
         bar.add(parameter);
     }
 
+    /**
+     * Brings the chart on screen up to date at once; the others are marked and redrawn when their tab is
+     * chosen, so that an edit costs one chart's update, not five.
+     */
     private void refresh() {
         shownTurn = probe.turn();
-        var shown = results.shown();
-        boolean stale = results.isStale();
-        for (ResultChart chart : charts) {
-            chart.show(shown, stale);
+        outOfDate.addAll(charts());
+        showSelected();
+    }
+
+    private void showSelected() {
+        ResultChart chart = selectedChart();
+        if (chart != null && outOfDate.remove(chart)) {
+            chart.show(results.shown(), results.isStale());
         }
+    }
+
+    /** Redraws every chart in the current theme and text size. */
+    public void restyle() {
+        charts().forEach(ResultChart::restyle);
+        refresh();
     }
 
     private void probeMoved() {
@@ -149,19 +160,54 @@ public final class ResultsTabs extends JTabbedPane {
         if (probe.turn() != shownTurn) {
             refresh();
         } else {
-            charts.forEach(chart -> chart.probeMoved(results.shown()));
+            ResultChart chart = selectedChart();
+            if (chart != null && !outOfDate.contains(chart)) {
+                chart.probeMoved(results.shown());
+            }
         }
     }
 
-    /** @return the charts, in tab order */
+    /** @return the charts made so far, in tab order */
     public List<ResultChart> charts() {
-        return charts;
+        return java.util.Arrays.stream(built).filter(java.util.Objects::nonNull).toList();
     }
 
-    /** @return the chart on the selected tab, or null on the car picture */
+    /** @return the chart on the selected tab (made now if it is the first time), or null on the car picture */
     public ResultChart selectedChart() {
-        int index = getSelectedIndex();
-        return index >= 1 && index <= charts.size() ? charts.get(index - 1) : null;
+        int index = getSelectedIndex() - 1;
+        if (index < 0 || index >= built.length) {
+            return null; // the car picture, or a tab added after the charts that is not one
+        }
+        if (built[index] == null) {
+            built[index] = make(index);
+            outOfDate.add(built[index]);
+            setComponentAt(index + 1, tabFor(built[index], index == CHART_TITLES.size() - 1));
+        }
+        return built[index];
+    }
+
+    private ResultChart make(int index) {
+        return switch (index) {
+            case 0 -> new WheelLoadChart(view, probe);
+            case 1 -> new RollChart(view, probe);
+            case 2 -> new TransferSplitChart(view, probe);
+            case 3 -> new HandlingChart(view, probe);
+            default -> new SweepChart(view, probe);
+        };
+    }
+
+    private JPanel tabFor(ResultChart chart, boolean isSweep) {
+        JPanel tab = new JPanel(new BorderLayout());
+        tab.add(chart.component(), BorderLayout.CENTER);
+        JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        if (isSweep) {
+            sweepControls(bar, analysis);
+        }
+        bar.add(Box.createHorizontalStrut(12));
+        bar.add(exportButton(chart, "png", "Save as PNG…", export));
+        bar.add(exportButton(chart, "svg", "Save as SVG…", export));
+        tab.add(bar, BorderLayout.SOUTH);
+        return tab;
     }
 
     public CarBehindView car() {

@@ -3,17 +3,16 @@ package barwright.ui.panel;
 import barwright.ui.task.ResultsModel;
 
 import javax.swing.BorderFactory;
-import javax.swing.JLabel;
-import java.awt.Color;
+import javax.swing.UIManager;
 
 /** A strip above the results that says, while they are out of date, why, and what the figures are for. */
-public final class StaleBanner extends JLabel {
+public final class StaleBanner extends WrappingText {
     private final ResultsModel results;
 
     public StaleBanner(ResultsModel results) {
+        super("");
         this.results = results;
         setName("stale.banner");
-        setOpaque(true);
         setBorder(BorderFactory.createEmptyBorder(6, 10, 6, 10));
         setVisible(false);
         results.addListener(this::refresh);
@@ -23,12 +22,12 @@ public final class StaleBanner extends JLabel {
         boolean stale = results.isStale();
         setVisible(stale);
         if (stale) {
+            setOpaque(true);
             setBackground(Palette.staleBackground());
-            setForeground(javax.swing.UIManager.getColor("Label.foreground") == null ? Color.BLACK
-                    : javax.swing.UIManager.getColor("Label.foreground"));
-            setText("<html><body style='width:760px'><b>Out of date.</b> " + Tooltips.escape("The figures "
-                    + "and charts show the last car the program accepted. " + results.staleReason())
-                    + "</body></html>");
+            setForeground(UIManager.getColor("Label.foreground"));
+            setFont(UIManager.getFont("Label.font").deriveFont(java.awt.Font.BOLD));
+            setText("Out of date: the figures and charts show the last car the program accepted. "
+                    + results.staleReason());
         }
     }
 }

@@ -12,6 +12,7 @@ import java.util.List;
 /** The analysis's warnings in words: lifts before the limit, weak or yielding bars, rolling over. */
 public final class WarningsPanel extends PagePanel {
     private final ResultsModel results;
+    private List<Warning> showing;
 
     public WarningsPanel(ResultsModel results) {
         super(null);
@@ -23,19 +24,21 @@ public final class WarningsPanel extends PagePanel {
     }
 
     private void refresh() {
-        removeAll();
         var shown = results.shown();
-        if (shown != null && shown.result() != null) {
-            List<Warning> warnings = shown.result().warnings();
-            if (warnings.isEmpty()) {
-                add(line("warning.none", "No warnings: no inside wheel lifts before the grip limit, and both bars "
-                        + "keep a safety factor of 1.5 or more at the check travel.", null));
-            }
-            for (Warning warning : warnings) {
-                JTextArea line = line("warning." + warning.code(), "\u26A0 " + warning.message(), Palette.warning());
-                line.setToolTipText("Code for scripts: " + warning.code());
-                add(line);
-            }
+        List<Warning> warnings = shown == null || shown.result() == null ? null : shown.result().warnings();
+        if (warnings == null || warnings.equals(showing)) {
+            return; // the same warnings: nothing to rebuild
+        }
+        showing = warnings;
+        removeAll();
+        if (warnings.isEmpty()) {
+            add(line("warning.none", "No warnings: no inside wheel lifts before the grip limit, and both bars "
+                    + "keep a safety factor of 1.5 or more at the check travel.", null));
+        }
+        for (Warning warning : warnings) {
+            JTextArea line = line("warning." + warning.code(), "\u26A0 " + warning.message(), Palette.warning());
+            line.setToolTipText("Code for scripts: " + warning.code());
+            add(line);
         }
         revalidate();
         repaint();

@@ -47,8 +47,8 @@ public final class WorkDialog {
         Font base = area.getFont();
         area.setFont(new Font(Font.MONOSPACED, Font.PLAIN, base.getSize()));
         area.setBorder(BorderFactory.createEmptyBorder(10, 12, 10, 12));
-        area.setColumns(84);
-        area.setRows(Math.min(30, (int) text.lines().count() + 2));
+        area.setColumns(96);
+        area.setRows(Math.min(34, (int) text.lines().count() + 2));
         JButton close = new JButton("Close");
         close.addActionListener(event -> dialog.dispose());
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.RIGHT));

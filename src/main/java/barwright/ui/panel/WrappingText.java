@@ -5,7 +5,7 @@ import javax.swing.JTextArea;
 import javax.swing.UIManager;
 
 /** A read-only line of text that wraps at the width it is given, looking like a label. */
-public final class WrappingText extends JTextArea {
+public class WrappingText extends JTextArea {
     public WrappingText(String text) {
         super(text);
         setEditable(false);

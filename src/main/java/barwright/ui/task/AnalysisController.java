@@ -14,6 +14,7 @@ public final class AnalysisController {
     private final AnalysisScheduler scheduler;
     private SweepRequest sweep = new SweepRequest(AxlePosition.FRONT, SweepParameter.DIAMETER);
     private long lastDelivered;
+    private boolean sweepWanted;
 
     public AnalysisController(OpenDocument document, ResultsModel results) {
         this.document = document;
@@ -25,7 +26,7 @@ public final class AnalysisController {
     /** Analyses the document as it stands, or marks the results out of date where the core refuses it. */
     public void refresh() {
         if (document.isValid()) {
-            scheduler.submit(document.lastValid().vehicle(), sweep);
+            scheduler.submit(document.lastValid().vehicle(), sweepWanted ? sweep : null);
         } else {
             Problem first = document.problems().get(0);
             int more = document.problems().size() - 1;
@@ -37,6 +38,19 @@ public final class AnalysisController {
     public void setSweep(SweepRequest request) {
         sweep = request;
         refresh();
+    }
+
+    /**
+     * Says whether the sweep chart is on screen: the sweep is worked out only then, so that edits elsewhere
+     * cost one analysis, not a score.
+     */
+    public void setSweepWanted(boolean wanted) {
+        boolean missing = wanted && (results.shown() == null || results.shown().sweep() == null
+                || !results.shown().sweep().request().equals(sweep));
+        sweepWanted = wanted;
+        if (missing) {
+            refresh();
+        }
     }
 
     public SweepRequest sweep() {

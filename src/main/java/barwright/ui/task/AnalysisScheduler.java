@@ -7,7 +7,6 @@ import barwright.physics.VehicleAnalysis;
 
 import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
-import java.util.concurrent.ExecutionException;
 import java.util.function.Consumer;
 
 /**
@@ -29,7 +28,11 @@ public final class AnalysisScheduler {
         this.onOutcome = onOutcome;
     }
 
-    /** Asks for an analysis of this car; an earlier request not yet started is dropped. */
+    /**
+     * Asks for an analysis of this car; an earlier request not yet started is dropped.
+     *
+     * @param sweep the bar sweep to run as well, or null for none (it costs a score of analyses)
+     */
     public void submit(Vehicle vehicle, SweepRequest sweep) {
         requireEventThread();
         pending = new Request(++revision, vehicle, sweep);
@@ -52,37 +55,39 @@ public final class AnalysisScheduler {
         Request request = pending;
         pending = null;
         running = true;
-        new SwingWorker<AnalysisOutcome, Void>() {
+        new SwingWorker<Void, Void>() {
             @Override
-            protected AnalysisOutcome doInBackground() {
-                return analyse(request.revision(), request.vehicle(), request.sweep());
-            }
-
-            @Override
-            protected void done() {
-                running = false;
+            protected Void doInBackground() {
                 AnalysisOutcome outcome;
                 try {
-                    outcome = get();
-                } catch (InterruptedException | ExecutionException failed) {
-                    Throwable cause = failed.getCause() != null ? failed.getCause() : failed;
+                    outcome = analyse(request.revision(), request.vehicle(), request.sweep());
+                } catch (RuntimeException | Error failed) {
                     outcome = new AnalysisOutcome(request.revision(), request.vehicle(), null, null, null,
-                            "The analysis failed inside the program: " + cause);
+                            "The analysis failed inside the program: " + failed);
                 }
-                onOutcome.accept(outcome);
-                if (pending != null) {
-                    startNext();
-                }
+                // handed over with invokeLater rather than done(): SwingWorker batches done() on a timer that
+                // fires about every 33 ms, which would add that much to every edit
+                AnalysisOutcome finished = outcome;
+                SwingUtilities.invokeLater(() -> delivered(finished));
+                return null;
             }
         }.execute();
+    }
+
+    private void delivered(AnalysisOutcome outcome) {
+        running = false;
+        onOutcome.accept(outcome);
+        if (pending != null) {
+            startNext();
+        }
     }
 
     /** The work itself, on whatever thread calls it. */
     public static AnalysisOutcome analyse(long revision, Vehicle vehicle, SweepRequest sweep) {
         try {
             AnalysisResult result = VehicleAnalysis.analyse(vehicle);
-            return new AnalysisOutcome(revision, vehicle, result, BarSweep.run(vehicle, sweep), withoutBars(vehicle),
-                    null);
+            return new AnalysisOutcome(revision, vehicle, result, sweep == null ? null : BarSweep.run(vehicle, sweep),
+                    withoutBars(vehicle), null);
         } catch (ImpossibleVehicleException impossible) {
             return new AnalysisOutcome(revision, vehicle, null, null, null, impossible.getMessage());
         } catch (UnsupportedOperationException notBuilt) {

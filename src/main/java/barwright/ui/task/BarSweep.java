@@ -20,7 +20,7 @@ import java.util.function.DoubleFunction;
  */
 public final class BarSweep {
     /** Points of a diameter or wall sweep. */
-    static final int POINTS = 25;
+    static final int POINTS = 17;
     /** A diameter sweep spans this factor below and above the current diameter. */
     static final double DIAMETER_SPAN = 0.35;
     /** The thinnest wall a sweep tries (m) and the least bore it leaves (m). */
@@ -100,7 +100,7 @@ public final class BarSweep {
             AnalysisResult result = VehicleAnalysis.analyse(changed);
             points.add(new SweepResult.Point(value, result.frontLoadTransferShare(), result.rollGradient()));
         } catch (ImpossibleVehicleException impossible) {
-            // no stable roll with this bar: the point is left out and the curve has a gap there
+            // no stable roll with this bar: the point is left out
         }
     }
 }

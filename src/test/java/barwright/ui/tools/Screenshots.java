@@ -52,8 +52,56 @@ public final class Screenshots {
         });
         settle(window);
         write(window.getRootPane(), folder.resolve("main-front-bar" + suffix + ".png"));
+
+        // the working behind the front share, as an instructor opens it
+        SwingUtilities.invokeAndWait(() -> ((javax.swing.AbstractButton) find(window, "figure.frontShare")).doClick());
+        settle(window);
+        write(dialog("work.dialog"), folder.resolve("show-the-work" + suffix + ".png"));
+        SwingUtilities.invokeAndWait(() -> javax.swing.SwingUtilities.getWindowAncestor(dialog("work.dialog")).dispose());
+
+        // a refused tube wall: the field is marked, the results are out of date
+        SwingUtilities.invokeAndWait(() -> window.editor().setSelectedIndex(4));
+        settle(window);
+        SwingUtilities.invokeAndWait(() -> ((javax.swing.JTextField) find(window, "rear.bar.section.wallMm")).setText("14"));
+        settle(window);
+        write(window.getRootPane(), folder.resolve("refused-value" + suffix + ".png"));
+        SwingUtilities.invokeAndWait(() -> window.document().undo());
+        settle(window);
+
+        // US customary units and a larger text for a projector
+        SwingUtilities.invokeAndWait(() -> {
+            window.setUnits(barwright.units.UnitSystem.US);
+            window.editor().setSelectedIndex(1);
+            window.tabs().setSelectedIndex(1);
+        });
+        settle(window);
+        write(window.getRootPane(), folder.resolve("us-units" + suffix + ".png"));
         SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
+    }
+
+    private static java.awt.Component find(java.awt.Container root, String name) {
+        for (java.awt.Component child : root.getComponents()) {
+            if (name.equals(child.getName())) {
+                return child;
+            }
+            if (child instanceof java.awt.Container container) {
+                java.awt.Component found = find(container, name);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
+    }
+
+    private static JComponent dialog(String name) {
+        for (java.awt.Window open : java.awt.Window.getWindows()) {
+            if (open.isShowing() && name.equals(open.getName()) && open instanceof javax.swing.RootPaneContainer pane) {
+                return pane.getRootPane();
+            }
+        }
+        throw new IllegalStateException("no open window " + name);
     }
 
     private static void settle(MainWindow window) throws Exception {

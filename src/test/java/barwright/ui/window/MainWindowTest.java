@@ -111,7 +111,7 @@ class MainWindowTest {
         assertThat(GuiActionRunner.execute(() -> wall.target().getClientProperty("JComponent.outline")))
                 .isEqualTo("error");
         assertThat(bannerShowing()).isTrue();
-        assertThat(fixture.frame.label("stale.banner").text()).contains("Out of date")
+        assertThat(fixture.frame.textBox("stale.banner").text()).contains("Out of date")
                 .contains("rear.bar.section.wallMm");
         // typed key by key, "1" was accepted on the way to "14": the figures stay on that car, the last valid one
         AnalysisResult lastAccepted = coreAnalysis(tree ->

@@ -1,5 +1,6 @@
 package barwright.ui.window;
 
+import barwright.ui.Display;
 import barwright.ui.ScriptedDialogs;
 import barwright.ui.action.Settings;
 import barwright.ui.app.MainWindow;

@@ -1,4 +1,4 @@
-package barwright.ui.window;
+package barwright.ui;
 
 import org.junit.jupiter.api.Assumptions;
 
@@ -7,14 +7,15 @@ import java.awt.GraphicsEnvironment;
 import static org.junit.jupiter.api.Assertions.fail;
 
 /**
- * Window tests need a display. Where the system property gui.required is true (CI passes it) a missing
+ * Window tests, and tests that run Swing's event thread, need a display (the surefire JVM runs with
+ * java.awt.headless=false so that the window tests can open windows). Where the system property gui.required is true (CI passes it) a missing
  * display fails the test; elsewhere the test is skipped and says why.
  */
-final class Display {
+public final class Display {
     private Display() {
     }
 
-    static void require() {
+    public static void require() {
         String problem = missing();
         if (problem == null) {
             return;
