@@ -21,7 +21,12 @@ public final class Cli {
             new AnalyzeCommand(),
             new EnvelopeCommand(),
             new SensitivityCommand(),
-            new ChassisCommand());
+            new ChassisCommand(),
+            new SizeCommand(),
+            new MapCommand(),
+            new CompareCommand(),
+            new PreloadCommand(),
+            new SheetCommand());
 
     private Cli() {
     }

@@ -32,6 +32,10 @@ public final class TyreModel {
         double upper = 1;
         while (upper - curvature * (upper - Math.atan(upper)) < tangent) {
             upper *= 2;
+            if (Double.isInfinite(upper)) {
+                // E = 1 leaves atan x < pi/2: with C below about 1.565 the argument never reaches the peak
+                return Double.POSITIVE_INFINITY;
+            }
         }
         return new BrentSolver(1e-12, 1e-14).solve(200,
                 x -> x - curvature * (x - Math.atan(x)) - tangent, 0, upper);

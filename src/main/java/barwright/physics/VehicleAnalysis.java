@@ -25,8 +25,8 @@ public final class VehicleAnalysis {
     public static AnalysisResult analyse(Vehicle vehicle) {
         MassProperties masses = MassProperties.of(vehicle);
         MassProperties.StaticWheelLoads loads = masses.staticLoads();
-        double frontCornerSprung = cornerSprungMass(vehicle.front(), AxlePosition.FRONT, loads.frontAxle());
-        double rearCornerSprung = cornerSprungMass(vehicle.rear(), AxlePosition.REAR, loads.rearAxle());
+        double frontCornerSprung = AxleStiffness.cornerSprungMass(vehicle.front(), AxlePosition.FRONT, loads.frontAxle());
+        double rearCornerSprung = AxleStiffness.cornerSprungMass(vehicle.rear(), AxlePosition.REAR, loads.rearAxle());
         BarResult frontBar = barResult(vehicle.front(), vehicle);
         BarResult rearBar = barResult(vehicle.rear(), vehicle);
         AxleStiffness frontStiffness = AxleStiffness.of(vehicle.front(), frontBar, frontCornerSprung);
@@ -38,9 +38,9 @@ public final class VehicleAnalysis {
         RollResponse roll = RollResponse.of(masses, frontRoll, rearRoll, chassis);
         RollResponse suspensionRoll = RollResponse.of(masses, frontStiffness.suspensionRollStiffness(),
                 rearStiffness.suspensionRollStiffness(), chassis);
-        LoadTransferParts frontParts = transferParts(vehicle.front(), masses.frontSprungMass(), frontRoll,
+        LoadTransferParts frontParts = LoadTransferParts.of(vehicle.front(), masses.frontSprungMass(), frontRoll,
                 roll.frontRollPerAccel());
-        LoadTransferParts rearParts = transferParts(vehicle.rear(), masses.rearSprungMass(), rearRoll,
+        LoadTransferParts rearParts = LoadTransferParts.of(vehicle.rear(), masses.rearSprungMass(), rearRoll,
                 roll.rearRollPerAccel());
         double frontTransfer = frontParts.total();
         double rearTransfer = rearParts.total();
@@ -91,24 +91,5 @@ public final class VehicleAnalysis {
 
     private static BarResult barResult(Axle axle, Vehicle vehicle) {
         return axle.hasBar() ? BarAnalysis.analyse(axle.bar(), vehicle.differentialWheelTravel()) : null;
-    }
-
-    /** @return half of (static axle load / g - unsprung axle mass) (kg), model.md 3 */
-    private static double cornerSprungMass(Axle axle, AxlePosition position, double axleLoad) {
-        double cornerSprungMass = (axleLoad / STANDARD_GRAVITY - axle.unsprungMass()) / 2;
-        if (!(cornerSprungMass > 0)) {
-            throw new ImpossibleVehicleException(String.format(
-                    "The %s unsprung mass %.1f kg is not less than the static mass on the %s axle %.1f kg.",
-                    position.key(), axle.unsprungMass(), position.key(), axleLoad / STANDARD_GRAVITY));
-        }
-        return cornerSprungMass;
-    }
-
-    /** Load transfer per a_y in three parts: unsprung, geometric, elastic (model.md 5). */
-    private static LoadTransferParts transferParts(Axle axle, double axleSprungMass, double rollStiffness,
-                                                   double axleRollPerAccel) {
-        double track = axle.track();
-        return new LoadTransferParts(axle.unsprungMass() * axle.unsprungCgHeight() / track,
-                axleSprungMass * axle.rollCentreHeight() / track, rollStiffness * axleRollPerAccel / track);
     }
 }
