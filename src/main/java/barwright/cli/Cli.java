@@ -19,6 +19,9 @@ public final class Cli {
 
     private static final List<Command> COMMANDS = List.of(
             new AnalyzeCommand(),
+            new EnvelopeCommand(),
+            new SensitivityCommand(),
+            new ChassisCommand(),
             new SizeCommand(),
             new MapCommand(),
             new CompareCommand(),

@@ -109,6 +109,24 @@ public record MassProperties(double mass, double frontMassFraction, double cgToF
                 sprungCgToFront, frontSprung, rearSprung, rollAxisHeight, rollArm, loads);
     }
 
+    /**
+     * The same car under a steady longitudinal acceleration as well: m a_x h / l of load moves from the front
+     * axle to the rear, half from each wheel, before the lateral calculation (model.md 7, lift envelope only).
+     * The masses, the roll axis and so the lateral load transfer per a_y stay as they are.
+     *
+     * @param longitudinalAcceleration a_x, forward positive (m/s^2)
+     * @param cgHeight                 height of the car's centre of mass h (m)
+     */
+    public MassProperties withLongitudinalAcceleration(double longitudinalAcceleration, double cgHeight) {
+        double wheelbase = cgToFrontAxle + cgToRearAxle;
+        double perWheel = mass * longitudinalAcceleration * cgHeight / wheelbase / 2;
+        StaticWheelLoads shifted = new StaticWheelLoads(staticLoads.leftFront() - perWheel,
+                staticLoads.rightFront() - perWheel, staticLoads.leftRear() + perWheel,
+                staticLoads.rightRear() + perWheel);
+        return new MassProperties(mass, frontMassFraction, cgToFrontAxle, cgToRearAxle, sprungMass, sprungCgHeight,
+                sprungCgToFrontAxle, frontSprungMass, rearSprungMass, rollAxisHeightAtCg, rollArm, shifted);
+    }
+
     /** @return m_s g h', the roll stiffness the gravity term takes away (N m/rad) */
     public double gravityRollMoment() {
         return sprungMass * STANDARD_GRAVITY * rollArm;

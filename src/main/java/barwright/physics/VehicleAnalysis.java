@@ -77,6 +77,24 @@ public final class VehicleAnalysis {
                 understeer, turns[0], turns[1], Warnings.of(withoutWarnings));
     }
 
+    /**
+     * The steady turn of an analysed car with a steady longitudinal acceleration as well (model.md 7): the
+     * static wheel loads shifted by m a_x h / l from the front axle to the rear, then the lateral calculation of
+     * the analysis. With a_x = 0 it is the analysis's own turn.
+     *
+     * @param longitudinalAcceleration a_x, forward positive (m/s^2)
+     */
+    public static SteadyCornering cornering(AnalysisResult result, TurnDirection direction,
+                                            double longitudinalAcceleration) {
+        Vehicle vehicle = result.vehicle();
+        MassProperties shifted = result.masses().withLongitudinalAcceleration(longitudinalAcceleration,
+                vehicle.cgHeight());
+        return new SteadyCornering(direction, shifted, vehicle.cgHeight(), vehicle.front().track(),
+                vehicle.rear().track(), result.front().loadTransfer().total(), result.rear().loadTransfer().total(),
+                result.roll(), result.front().stiffness().rollStiffness(), result.rear().stiffness().rollStiffness(),
+                vehicle.chassisTorsionalStiffness());
+    }
+
     private static BarResult barResult(Axle axle, Vehicle vehicle) {
         return axle.hasBar() ? BarAnalysis.analyse(axle.bar(), vehicle.differentialWheelTravel()) : null;
     }
