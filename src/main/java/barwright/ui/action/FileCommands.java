@@ -29,6 +29,11 @@ public final class FileCommands {
         this.recent = recent;
     }
 
+    /** @return how the commands ask a person (scripted in tests); other views choose their files through it */
+    public Dialogs dialogs() {
+        return dialogs;
+    }
+
     /** Opens a sample as a new, unsaved document. */
     public void newFromSample(Samples.Sample sample) {
         if (mayDiscard()) {

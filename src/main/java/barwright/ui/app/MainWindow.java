@@ -79,6 +79,7 @@ public final class MainWindow extends JFrame {
         Menus menus = new Menus(this);
         setJMenuBar(menus.menuBar());
         getContentPane().add(menus.toolBar(), BorderLayout.NORTH);
+        barwright.ui.sizing.SizingViews.install(this);
         document.addListener(event -> updateTitle());
         updateTitle();
         setDefaultCloseOperation(WindowConstants.DO_NOTHING_ON_CLOSE);

@@ -1,0 +1,47 @@
+package barwright.ui.sizing;
+
+import barwright.ui.panel.Palette;
+
+import javax.swing.UIManager;
+import java.awt.Color;
+
+/**
+ * The arm-hole map's tints: a cell whose front share of load transfer lies above the reference takes on the
+ * front axle's colour, one below it the rear axle's, by how far it lies from it (full at 8 points); near the
+ * reference it stays the background. Mixed with the theme's background, so light and dark themes both read.
+ */
+final class MapColours {
+    /** The tint is full this far from the reference share (a fraction: 8 percentage points). */
+    static final double FULL_TINT = 0.08;
+    /** How much of the axle colour a full tint mixes in. */
+    private static final double STRENGTH = 0.45;
+
+    private MapColours() {
+    }
+
+    /** @param difference the cell's front share minus the reference (a fraction) */
+    static Color tint(double difference) {
+        Color toward = difference >= 0 ? Palette.front() : Palette.rear();
+        double share = Math.min(1, Math.abs(difference) / FULL_TINT) * STRENGTH;
+        return mix(background(), toward, share);
+    }
+
+    /** @return the colour of a lift warning */
+    static Color lift() {
+        return Palette.problem();
+    }
+
+    static Color background() {
+        Color colour = UIManager.getColor("Table.background");
+        return colour != null ? colour : Color.WHITE;
+    }
+
+    static Color mix(Color base, Color other, double share) {
+        return new Color(channel(base.getRed(), other.getRed(), share), channel(base.getGreen(), other.getGreen(), share),
+                channel(base.getBlue(), other.getBlue(), share));
+    }
+
+    private static int channel(int base, int other, double share) {
+        return (int) Math.round(base + (other - base) * share);
+    }
+}

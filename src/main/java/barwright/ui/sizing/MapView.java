@@ -1,0 +1,282 @@
+package barwright.ui.sizing;
+
+import barwright.model.AxlePosition;
+import barwright.model.Vehicle;
+import barwright.sizing.map.AdjustmentMap;
+import barwright.sizing.map.BarOption;
+import barwright.ui.document.DocumentEvent;
+import barwright.ui.panel.FigureFormat;
+import barwright.ui.panel.WrappingText;
+import barwright.units.Quantity;
+
+import javax.swing.BorderFactory;
+import javax.swing.JButton;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.SwingConstants;
+import java.awt.BorderLayout;
+import java.awt.FlowLayout;
+import java.awt.GridBagConstraints;
+import java.awt.GridBagLayout;
+import java.awt.Insets;
+import java.awt.event.MouseAdapter;
+import java.awt.event.MouseEvent;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The arm-hole map of the car as it stands: every front hole (rows) against every rear hole (columns), each
+ * cell with its front share, roll gradient, limit and balance and any inside wheel lifting before the limit,
+ * tinted so it reads at a glance, the car's setting framed. Worked out again off the event thread after every
+ * accepted edit. A chosen cell's holes can be put in the car (one undo step). Event thread.
+ */
+final class MapView extends JPanel {
+    private final SizingContext context;
+    private final FigureFormat format;
+    private final Exports exports;
+    private final JPanel grid = new JPanel(new GridBagLayout());
+    private final QuantityField reference;
+    private final WrappingText legend = new WrappingText(" ");
+    private final JButton useHoles = new JButton("Put the chosen holes in the car");
+    private final WorkStrip work = new WorkStrip("map");
+    private final List<MapCellView> cells = new ArrayList<>();
+    private boolean referenceFollowsCar = true;
+    private AdjustmentMap shown;
+    private MapCellView chosen;
+
+    MapView(SizingContext context, Exports exports) {
+        super(new BorderLayout());
+        setName("map.view");
+        this.context = context;
+        this.exports = exports;
+        this.format = new FigureFormat(context.view());
+        reference = new QuantityField("map.reference", "Tint centred on a front share of", Quantity.SHARE,
+                context.view(), 0.01, 0.99, null, false);
+        reference.setToolTipText("Cells above this front share are tinted in the front axle's colour (towards "
+                + "understeer), below it in the rear axle's (towards oversteer)");
+        reference.addActionListener(event -> referenceTyped());
+        reference.addFocusListener(new java.awt.event.FocusAdapter() {
+            @Override
+            public void focusLost(java.awt.event.FocusEvent event) {
+                referenceTyped();
+            }
+        });
+        JButton ruleOfThumb = new JButton("Static front weight + 5 points");
+        ruleOfThumb.setName("map.ruleOfThumb");
+        ruleOfThumb.setToolTipText("A rule of thumb for a slight understeer (from memory of Milliken & Milliken, Race "
+                + "Car Vehicle Dynamics)");
+        ruleOfThumb.addActionListener(event -> {
+            referenceFollowsCar = true;
+            carChanged();
+        });
+        useHoles.setName("map.useHoles");
+        useHoles.setToolTipText("Moves both bars' links to the chosen cell's holes; Edit > Undo takes it back");
+        useHoles.addActionListener(event -> useChosen());
+        JButton csv = new JButton("Save the map as CSV…");
+        csv.setName("map.csv");
+        csv.addActionListener(event -> exports.mapCsv(message -> work.say(message, false)));
+        JButton sheet = new JButton("Export the setup sheet as PDF…");
+        sheet.setName("map.sheet");
+        sheet.addActionListener(event -> exports.setupSheet(message -> work.say(message, false)));
+        exports.useReference(this::referenceShare);
+
+        JPanel top = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 4));
+        top.add(new JLabel("Tint centred on a front share of"));
+        top.add(reference);
+        top.add(reference.unitLabel());
+        top.add(ruleOfThumb);
+        JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        buttons.add(useHoles);
+        buttons.add(csv);
+        buttons.add(sheet);
+        JPanel under = new JPanel(new BorderLayout());
+        legend.setName("map.legend");
+        legend.setBorder(BorderFactory.createEmptyBorder(2, 8, 2, 8));
+        under.add(legend, BorderLayout.NORTH);
+        under.add(buttons, BorderLayout.CENTER);
+        under.add(work, BorderLayout.SOUTH);
+        grid.setName("map.grid");
+        grid.setBorder(BorderFactory.createEmptyBorder(6, 8, 6, 8));
+        JPanel holder = new JPanel(new BorderLayout());
+        holder.add(grid, BorderLayout.NORTH);
+        JScrollPane scroll = new JScrollPane(holder);
+        scroll.setBorder(null);
+        scroll.getVerticalScrollBar().setUnitIncrement(16);
+        add(top, BorderLayout.NORTH);
+        add(scroll, BorderLayout.CENTER);
+        add(under, BorderLayout.SOUTH);
+        context.document().addListener(this::documentChanged);
+        context.view().addListener(this::redraw);
+        carChanged();
+    }
+
+    private void documentChanged(DocumentEvent event) {
+        carChanged();
+    }
+
+    /** Works the map out again for the car as it stands. */
+    private void carChanged() {
+        Vehicle vehicle;
+        try {
+            vehicle = context.currentCar().vehicle();
+        } catch (IllegalStateException refused) {
+            work.say("The map is for the car before the last change: " + refused.getMessage() + ".", true);
+            return;
+        }
+        if (referenceFollowsCar) {
+            reference.setValue(Exports.ruleOfThumb(vehicle));
+        }
+        work.run("Working out the map", "hole pairs", "The map could not be worked out",
+                progress -> AdjustmentMap.of(vehicle, List.of(new AdjustmentMap.LabelledBar("current",
+                        vehicle.front().bar())), List.of(new AdjustmentMap.LabelledBar("current", vehicle.rear().bar())),
+                        progress), this::show);
+    }
+
+    private void referenceTyped() {
+        try {
+            reference.value();
+            referenceFollowsCar = false;
+            work.say(" ", false);
+            redraw();
+        } catch (IllegalArgumentException refused) {
+            work.say(refused.getMessage(), true);
+        }
+    }
+
+    /** @return the front share the tint is centred on */
+    double referenceShare() {
+        try {
+            return reference.value();
+        } catch (IllegalArgumentException unreadable) {
+            return shown != null ? Exports.ruleOfThumb(shown.vehicle()) : 0.5;
+        }
+    }
+
+    private void show(AdjustmentMap map) {
+        int[] kept = chosen == null ? null : new int[]{chosen.cell().front().hole(), chosen.cell().rear().hole()};
+        shown = map;
+        chosen = null;
+        cells.clear();
+        grid.removeAll();
+        JLabel corner = header("<html><b>front hole</b> (rows)<br>against <b>rear hole</b> (columns)</html>");
+        grid.add(corner, at(0, 0));
+        for (int c = 0; c < map.columns().size(); c++) {
+            grid.add(optionHeader(AxlePosition.REAR, map.columns().get(c)), at(c + 1, 0));
+        }
+        for (int r = 0; r < map.rows().size(); r++) {
+            grid.add(optionHeader(AxlePosition.FRONT, map.rows().get(r)), at(0, r + 1));
+            for (int c = 0; c < map.columns().size(); c++) {
+                MapCellView cell = new MapCellView(map.cell(r, c), r, c);
+                cell.addMouseListener(new MouseAdapter() {
+                    @Override
+                    public void mousePressed(MouseEvent event) {
+                        choose(cell);
+                    }
+                });
+                cells.add(cell);
+                GridBagConstraints at = at(c + 1, r + 1);
+                at.fill = GridBagConstraints.BOTH;
+                grid.add(cell, at);
+                if (kept != null && kept[0] == cell.cell().front().hole() && kept[1] == cell.cell().rear().hole()) {
+                    chosen = cell;
+                    cell.setSelected(true);
+                }
+            }
+        }
+        redraw();
+        grid.revalidate();
+        grid.repaint();
+    }
+
+    private void redraw() {
+        if (shown == null) {
+            return;
+        }
+        double centre = referenceShare();
+        for (MapCellView cell : cells) {
+            cell.show(format, centre);
+        }
+        for (java.awt.Component header : grid.getComponents()) {
+            if (header instanceof JLabel label && label.getClientProperty(BarOption.class) instanceof Object[] key) {
+                label.setText(optionWords((AxlePosition) key[0], (BarOption) key[1]));
+            }
+        }
+        legend.setText("Tint: the front axle's colour where the front share of load transfer is above "
+                + format.text(centre, Quantity.SHARE) + " (more understeer), the rear axle's where it is below (more "
+                + "oversteer), fuller the further it lies. Red dashes and red text: an inside wheel lifts before the "
+                + "limit. Heavy frame: the car's setting now. Holes count from 1, the first arm length in the file.");
+        useHoles.setEnabled(chosen != null && !chosen.cell().current());
+    }
+
+    private String optionWords(AxlePosition axle, BarOption option) {
+        if (option.bar() == null) {
+            return "<html><b>no " + axle.key() + " bar</b></html>";
+        }
+        String arm = Double.isNaN(option.armLength()) ? "" : "<br>arm " + format.text(option.armLength(), Quantity.LENGTH);
+        return "<html><b>" + axle.key() + " hole " + (option.hole() + 1) + "</b>" + arm
+                + (option.current() ? "<br>(in use)" : "") + "</html>";
+    }
+
+    private JLabel optionHeader(AxlePosition axle, BarOption option) {
+        JLabel label = header(optionWords(axle, option));
+        label.putClientProperty(BarOption.class, new Object[]{axle, option});
+        return label;
+    }
+
+    private JLabel header(String text) {
+        JLabel label = new JLabel(text, SwingConstants.CENTER);
+        label.setBorder(BorderFactory.createEmptyBorder(2, 6, 2, 6));
+        return label;
+    }
+
+    private void choose(MapCellView cell) {
+        if (chosen != null) {
+            chosen.setSelected(false);
+        }
+        chosen = cell;
+        cell.setSelected(true);
+        useHoles.setEnabled(!cell.cell().current());
+        cell.requestFocusInWindow();
+    }
+
+    private void useChosen() {
+        if (chosen == null || chosen.cell().current()) {
+            return;
+        }
+        Map<AxlePosition, Integer> holes = new EnumMap<>(AxlePosition.class);
+        if (chosen.cell().front().bar() != null) {
+            holes.put(AxlePosition.FRONT, chosen.cell().front().hole());
+        }
+        if (chosen.cell().rear().bar() != null) {
+            holes.put(AxlePosition.REAR, chosen.cell().rear().hole());
+        }
+        BarEdits.putHoles(context.document(), holes, this);
+        work.say("Links moved to front hole " + (chosen.cell().front().hole() + 1) + ", rear hole "
+                + (chosen.cell().rear().hole() + 1) + ". Edit > Undo (Ctrl+Z) in the main window takes it back.", false);
+    }
+
+    private static GridBagConstraints at(int x, int y) {
+        GridBagConstraints at = new GridBagConstraints();
+        at.gridx = x;
+        at.gridy = y;
+        at.weightx = x == 0 ? 0 : 1;
+        at.fill = GridBagConstraints.BOTH;
+        at.insets = new Insets(3, 3, 3, 3);
+        return at;
+    }
+
+    List<MapCellView> cells() {
+        return List.copyOf(cells);
+    }
+
+    AdjustmentMap shown() {
+        return shown;
+    }
+
+    WorkStrip work() {
+        return work;
+    }
+}

@@ -1,0 +1,84 @@
+package barwright.ui.sizing;
+
+import javax.swing.JDialog;
+import javax.swing.JFrame;
+import javax.swing.JPanel;
+import javax.swing.JTabbedPane;
+import javax.swing.WindowConstants;
+import java.awt.BorderLayout;
+import java.awt.Dimension;
+
+/**
+ * The sizing and setup views in a window of their own beside the main one (their tables need the room): one
+ * tab each, the caution under them. It stays open while the car is edited in the main window. Event thread.
+ */
+final class SizingWindow extends JDialog {
+    /** The tabs, in order. */
+    enum Tab {
+        SEARCH("Size a bar", "Stock sizes that meet a front share or roll gradient, ranked"),
+        TUBES("Tube or solid", "Tubes from the catalogues with the rate of a solid bar, and what they save"),
+        MAP("Arm-hole map", "Every front arm hole against every rear one"),
+        COMPARE("Compare setups", "Two to four setups side by side"),
+        PRELOAD("Link preload", "What a bar link made longer or shorter does to the corner weights");
+
+        final String title;
+        final String help;
+
+        Tab(String title, String help) {
+            this.title = title;
+            this.help = help;
+        }
+    }
+
+    private final JTabbedPane tabs = new JTabbedPane();
+    private final SearchView search;
+    private final MapView map;
+
+    SizingWindow(JFrame owner, SizingContext context, Exports exports) {
+        super(owner, "Sizing and setup — Barwright", ModalityType.MODELESS);
+        setName("sizing.window");
+        setDefaultCloseOperation(WindowConstants.HIDE_ON_CLOSE);
+        search = new SearchView(context);
+        tabs.setName("sizing.tabs");
+        add(Tab.SEARCH, search);
+        add(Tab.TUBES, new JPanel());
+        map = new MapView(context, exports);
+        add(Tab.MAP, map);
+        JPanel content = new JPanel(new BorderLayout());
+        content.add(tabs, BorderLayout.CENTER);
+        content.add(new CautionLine(), BorderLayout.SOUTH);
+        setContentPane(content);
+        setMinimumSize(new Dimension(900, 600));
+        setSize(new Dimension(1180, 800));
+        if (owner != null) {
+            // placed beside the owner's corner here, where it is made (toolchain.md: reliable clicks under Xvfb)
+            setLocation(owner.getX() + 40, owner.getY() + 40);
+        }
+    }
+
+    private void add(Tab tab, java.awt.Component view) {
+        tabs.addTab(tab.title, view);
+        tabs.setToolTipTextAt(tabs.getTabCount() - 1, tab.help);
+    }
+
+    /** Shows the window on a tab. */
+    void open(Tab tab) {
+        if (tab.ordinal() < tabs.getTabCount()) {
+            tabs.setSelectedIndex(tab.ordinal());
+        }
+        setVisible(true);
+        toFront();
+    }
+
+    JTabbedPane tabs() {
+        return tabs;
+    }
+
+    SearchView search() {
+        return search;
+    }
+
+    MapView map() {
+        return map;
+    }
+}

@@ -1,0 +1,7 @@
+/**
+ * The window's views of issue 5: sizing a bar to a target, tube or solid of equal rate, the arm-hole map,
+ * setups compared side by side, link preload, and the setup sheet and map exports. They open from the Tools
+ * and File menus ({@link barwright.ui.sizing.SizingViews#install}); long work runs in {@link
+ * barwright.ui.sizing.Background}, off the event thread, with progress and cancel. Event thread otherwise.
+ */
+package barwright.ui.sizing;

@@ -1,0 +1,69 @@
+package barwright.ui.sizing;
+
+import barwright.ui.app.MainWindow;
+
+import javax.imageio.ImageIO;
+import javax.swing.SwingUtilities;
+import java.awt.Rectangle;
+import java.awt.Window;
+import java.awt.image.BufferedImage;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import java.util.concurrent.atomic.AtomicReference;
+
+/** Reaching the sizing views of a main window from tests and the screenshot tool, and waiting for their work. */
+final class SizingScreens {
+    private SizingScreens() {
+    }
+
+    /** Opens the sizing window on a tab (as the Tools menu does) and returns it. */
+    static SizingWindow open(MainWindow window, SizingWindow.Tab tab) throws Exception {
+        return onEdt(() -> {
+            SizingWindow views = SizingViews.of(window).views();
+            views.open(tab);
+            return views;
+        });
+    }
+
+    static <T> T onEdt(Callable<T> task) throws Exception {
+        AtomicReference<T> result = new AtomicReference<>();
+        AtomicReference<Exception> failure = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            try {
+                result.set(task.call());
+            } catch (Exception failed) {
+                failure.set(failed);
+            }
+        });
+        if (failure.get() != null) {
+            throw failure.get();
+        }
+        return result.get();
+    }
+
+    /** Waits (up to 60 s) until the condition holds on the event thread, then for painting. */
+    static void until(String what, Callable<Boolean> condition) throws Exception {
+        for (int i = 0; i < 3000; i++) {
+            if (onEdt(condition)) {
+                onEdt(() -> null);
+                Thread.sleep(100);
+                return;
+            }
+            Thread.sleep(20);
+        }
+        throw new AssertionError("timed out waiting for " + what);
+    }
+
+    /** Waits until the main window's analysis is idle with results shown. */
+    static void analysed(MainWindow window) throws Exception {
+        until("the analysis", () -> window.analysis().isIdle() && window.results().shown() != null);
+    }
+
+    /** Captures a window from the screen as a person sees it (toolchain.md: Robot.createScreenCapture). */
+    static void capture(Window shown, Path file) throws Exception {
+        Rectangle bounds = onEdt(() -> new Rectangle(shown.getLocationOnScreen(), shown.getSize()));
+        BufferedImage picture = new java.awt.Robot().createScreenCapture(bounds);
+        ImageIO.write(picture, "png", file.toFile());
+        System.out.println("wrote " + file);
+    }
+}
