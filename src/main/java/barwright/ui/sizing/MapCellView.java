@@ -27,6 +27,7 @@ import java.util.List;
 final class MapCellView extends JPanel {
     private final MapCell cell;
     private final JLabel share = new JLabel();
+    private final JLabel tag = new JLabel();
     private final JLabel roll = new JLabel();
     private final JLabel limit = new JLabel();
     private final JLabel lift = new JLabel();
@@ -38,7 +39,13 @@ final class MapCellView extends JPanel {
         setName("map.cell." + row + "." + column);
         share.setName(getName() + ".share");
         share.setFont(share.getFont().deriveFont(Font.BOLD, share.getFont().getSize2D() * 1.25f));
-        add(share);
+        tag.setName(getName() + ".tag");
+        tag.setFont(tag.getFont().deriveFont(Font.BOLD));
+        JPanel top = new JPanel(new java.awt.BorderLayout(6, 0));
+        top.setOpaque(false);
+        top.add(share, java.awt.BorderLayout.WEST);
+        top.add(tag, java.awt.BorderLayout.EAST);
+        add(top);
         add(roll);
         add(limit);
         add(lift);
@@ -49,7 +56,7 @@ final class MapCellView extends JPanel {
     void show(FigureFormat format, double referenceShare) {
         SetupFigures figures = cell.figures();
         Color text = UIManager.getColor("Label.foreground");
-        for (JLabel label : new JLabel[]{share, roll, limit}) {
+        for (JLabel label : new JLabel[]{share, tag, roll, limit}) {
             label.setForeground(text);
         }
         lift.setForeground(MapColours.lift());
@@ -62,8 +69,9 @@ final class MapCellView extends JPanel {
             setToolTipText(cell.problem());
         } else {
             setBackground(MapColours.tint(figures.frontLoadTransferShare() - referenceShare));
-            share.setText(format.text(figures.frontLoadTransferShare(), Quantity.SHARE) + " front"
-                    + (cell.current() ? "   (current)" : ""));
+            share.setText(format.text(figures.frontLoadTransferShare(), Quantity.SHARE) + " front");
+            tag.setText(cell.current() ? "now" : "");
+            tag.setToolTipText(cell.current() ? "The car's setting now" : null);
             roll.setText("roll " + format.text(figures.rollGradient(), Quantity.ROLL_GRADIENT));
             limit.setText("limit " + format.text(figures.limit(), Quantity.ACCELERATION) + ", "
                     + figures.balance().key());
@@ -137,8 +145,8 @@ final class MapCellView extends JPanel {
         return selected;
     }
 
-    /** @return the cell's first line, e.g. "46.7 % front (current)" */
+    /** @return the cell's first line, e.g. "46.7 % front now" for the car's setting */
     String shareText() {
-        return share.getText();
+        return tag.getText().isEmpty() ? share.getText() : share.getText() + " " + tag.getText();
     }
 }

@@ -7,12 +7,12 @@ import java.awt.Color;
 
 /**
  * The arm-hole map's tints: a cell whose front share of load transfer lies above the reference takes on the
- * front axle's colour, one below it the rear axle's, by how far it lies from it (full at 8 points); near the
+ * front axle's colour, one below it the rear axle's, by how far it lies from it (full at 5 points); near the
  * reference it stays the background. Mixed with the theme's background, so light and dark themes both read.
  */
 final class MapColours {
-    /** The tint is full this far from the reference share (a fraction: 8 percentage points). */
-    static final double FULL_TINT = 0.08;
+    /** The tint is full this far from the reference share (a fraction: 5 percentage points). */
+    static final double FULL_TINT = 0.05;
     /** How much of the axle colour a full tint mixes in. */
     private static final double STRENGTH = 0.45;
 

@@ -11,6 +11,7 @@ import barwright.units.Quantity;
 
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
+import javax.swing.JComboBox;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
@@ -43,7 +44,8 @@ final class MapView extends JPanel {
     private final JButton useHoles = new JButton("Put the chosen holes in the car");
     private final WorkStrip work = new WorkStrip("map");
     private final List<MapCellView> cells = new ArrayList<>();
-    private boolean referenceFollowsCar = true;
+    private final JComboBox<String> centre = new JComboBox<>(new String[]{"the car's setting now",
+        "the static front weight + 5 points", "a front share of"});
     private AdjustmentMap shown;
     private MapCellView chosen;
 
@@ -54,24 +56,20 @@ final class MapView extends JPanel {
         this.exports = exports;
         this.format = new FigureFormat(context.view());
         reference = new QuantityField("map.reference", "Tint centred on a front share of", Quantity.SHARE,
-                context.view(), 0.01, 0.99, null, false);
+                context.view(), 0.01, 0.99, 0.5, false);
         reference.setToolTipText("Cells above this front share are tinted in the front axle's colour (towards "
                 + "understeer), below it in the rear axle's (towards oversteer)");
-        reference.addActionListener(event -> referenceTyped());
+        reference.addActionListener(event -> referenceChanged());
         reference.addFocusListener(new java.awt.event.FocusAdapter() {
             @Override
             public void focusLost(java.awt.event.FocusEvent event) {
-                referenceTyped();
+                referenceChanged();
             }
         });
-        JButton ruleOfThumb = new JButton("Static front weight + 5 points");
-        ruleOfThumb.setName("map.ruleOfThumb");
-        ruleOfThumb.setToolTipText("A rule of thumb for a slight understeer (from memory of Milliken & Milliken, Race "
-                + "Car Vehicle Dynamics)");
-        ruleOfThumb.addActionListener(event -> {
-            referenceFollowsCar = true;
-            carChanged();
-        });
+        centre.setName("map.centre");
+        centre.setToolTipText("The static front weight + 5 points is a rule of thumb for a slight understeer (from "
+                + "memory of Milliken & Milliken, Race Car Vehicle Dynamics)");
+        centre.addActionListener(event -> referenceChanged());
         useHoles.setName("map.useHoles");
         useHoles.setToolTipText("Moves both bars' links to the chosen cell's holes; Edit > Undo takes it back");
         useHoles.addActionListener(event -> useChosen());
@@ -81,13 +79,15 @@ final class MapView extends JPanel {
         JButton sheet = new JButton("Export the setup sheet as PDF…");
         sheet.setName("map.sheet");
         sheet.addActionListener(event -> exports.setupSheet(message -> work.say(message, false)));
-        exports.useReference(this::referenceShare);
+        exports.useReference(this::sheetReference);
+        reference.setVisible(false);
+        reference.unitLabel().setVisible(false);
 
         JPanel top = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 4));
-        top.add(new JLabel("Tint centred on a front share of"));
+        top.add(new JLabel("Tint the cells by their front share against"));
+        top.add(centre);
         top.add(reference);
         top.add(reference.unitLabel());
-        top.add(ruleOfThumb);
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
         buttons.add(useHoles);
         buttons.add(csv);
@@ -126,33 +126,68 @@ final class MapView extends JPanel {
             work.say("The map is for the car before the last change: " + refused.getMessage() + ".", true);
             return;
         }
-        if (referenceFollowsCar) {
-            reference.setValue(Exports.ruleOfThumb(vehicle));
-        }
         work.run("Working out the map", "hole pairs", "The map could not be worked out",
                 progress -> AdjustmentMap.of(vehicle, List.of(new AdjustmentMap.LabelledBar("current",
                         vehicle.front().bar())), List.of(new AdjustmentMap.LabelledBar("current", vehicle.rear().bar())),
                         progress), this::show);
     }
 
-    private void referenceTyped() {
+    private void referenceChanged() {
+        reference.setVisible(centre.getSelectedIndex() == 2);
+        reference.unitLabel().setVisible(reference.isVisible());
         try {
-            reference.value();
-            referenceFollowsCar = false;
+            referenceShare();
             work.say(" ", false);
-            redraw();
         } catch (IllegalArgumentException refused) {
             work.say(refused.getMessage(), true);
+            return;
         }
+        redraw();
     }
 
-    /** @return the front share the tint is centred on */
+    /**
+     * @return the front share the tint is centred on: the current cell's, the rule of thumb's, or the one typed
+     * @throws IllegalArgumentException where the one typed is not a share
+     */
     double referenceShare() {
-        try {
+        if (centre.getSelectedIndex() == 2) {
             return reference.value();
-        } catch (IllegalArgumentException unreadable) {
-            return shown != null ? Exports.ruleOfThumb(shown.vehicle()) : 0.5;
         }
+        if (shown == null) {
+            return Double.NaN;
+        }
+        if (centre.getSelectedIndex() == 0) {
+            for (var cell : shown.cells()) {
+                if (cell.current() && cell.figures() != null) {
+                    return cell.figures().frontLoadTransferShare();
+                }
+            }
+        }
+        return Exports.ruleOfThumb(shown.vehicle());
+    }
+
+    /** @return the reference in words for the legend */
+    private String referenceWords(double share) {
+        return format.text(share, Quantity.SHARE) + switch (centre.getSelectedIndex()) {
+            case 0 -> ", the car's setting now";
+            case 1 -> ", the static front weight + 5 points";
+            default -> "";
+        };
+    }
+
+    /**
+     * @return the reference the setup sheet's map is tinted around: a share typed here (a target), else the rule of
+     *     thumb that the sheet's legend names
+     */
+    private double sheetReference() {
+        try {
+            if (centre.getSelectedIndex() == 2) {
+                return reference.value();
+            }
+        } catch (IllegalArgumentException unreadable) {
+            // the sheet falls back on the rule of thumb
+        }
+        return Exports.ruleOfThumb(context.currentCar().vehicle());
     }
 
     private void show(AdjustmentMap map) {
@@ -195,9 +230,20 @@ final class MapView extends JPanel {
         if (shown == null) {
             return;
         }
-        double centre = referenceShare();
+        double centreShare;
+        try {
+            centreShare = referenceShare();
+        } catch (IllegalArgumentException unreadable) {
+            centreShare = Exports.ruleOfThumb(shown.vehicle());
+        }
+        int widest = 0;
         for (MapCellView cell : cells) {
-            cell.show(format, centre);
+            cell.show(format, centreShare);
+            cell.setPreferredSize(null);
+            widest = Math.max(widest, cell.getPreferredSize().width);
+        }
+        for (MapCellView cell : cells) { // one width for every column, so the grid reads as a table
+            cell.setPreferredSize(new java.awt.Dimension(widest, cell.getPreferredSize().height));
         }
         for (java.awt.Component header : grid.getComponents()) {
             if (header instanceof JLabel label && label.getClientProperty(BarOption.class) instanceof Object[] key) {
@@ -205,9 +251,10 @@ final class MapView extends JPanel {
             }
         }
         legend.setText("Tint: the front axle's colour where the front share of load transfer is above "
-                + format.text(centre, Quantity.SHARE) + " (more understeer), the rear axle's where it is below (more "
-                + "oversteer), fuller the further it lies. Red dashes and red text: an inside wheel lifts before the "
-                + "limit. Heavy frame: the car's setting now. Holes count from 1, the first arm length in the file.");
+                + referenceWords(centreShare) + ", towards understeer; the rear axle's where it is below, towards "
+                + "oversteer; fuller the further it lies (full at 5 points). Red dashes and red text: an inside wheel "
+                + "lifts before the limit. Heavy frame and \"now\": the car's setting. Holes count from 1, the first "
+                + "arm length in the file. Click a cell to choose its holes.");
         useHoles.setEnabled(chosen != null && !chosen.cell().current());
     }
 

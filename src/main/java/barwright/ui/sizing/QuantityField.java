@@ -52,6 +52,7 @@ final class QuantityField extends JTextField {
         setHorizontalAlignment(SwingConstants.RIGHT);
         getAccessibleContext().setAccessibleName(label);
         setValue(initial);
+        setMinimumSize(getPreferredSize()); // a narrow column scrolls; the number never shrinks out of sight
         view.addListener(this::unitsChanged);
     }
 

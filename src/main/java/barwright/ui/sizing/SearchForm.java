@@ -1,12 +1,9 @@
 package barwright.ui.sizing;
 
 import barwright.model.AxlePosition;
-import barwright.model.Material;
-import barwright.model.MaterialLibrary;
 import barwright.model.Vehicle;
 import barwright.report.sheet.SheetContent;
 import barwright.sizing.SizingRequest;
-import barwright.sizing.catalogue.Catalogues;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Constants;
 import barwright.units.Quantity;
@@ -15,24 +12,15 @@ import javax.swing.ButtonGroup;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
-import javax.swing.JFileChooser;
 import javax.swing.JLabel;
-import javax.swing.JPanel;
 import javax.swing.JRadioButton;
 import javax.swing.JSpinner;
-import javax.swing.JTextField;
 import javax.swing.SpinnerNumberModel;
-import java.awt.BorderLayout;
-import java.awt.GridLayout;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 
 /** The settings of a sizing search: which bar, what to aim at, what must hold, what to try. Event thread. */
 final class SearchForm extends Rows {
-    /** The built-in catalogues with names for people, in the order offered. */
-    static final Map<String, String> CATALOGUES = catalogueNames();
     private final JComboBox<String> axle = new JComboBox<>(new String[]{"front bar", "rear bar", "both bars"});
     private final JCheckBox aimShare = new JCheckBox("Front share of the lateral load transfer", true);
     private final JRadioButton shareItself = new JRadioButton("a front share of", false);
@@ -46,10 +34,8 @@ final class SearchForm extends Rows {
     private final JCheckBox rearDown = new JCheckBox("Inside rear wheel stays down up to the limit");
     private final QuantityField maxMass;
     private final QuantityField maxDiameter;
-    private final JCheckBox ownMaterial = new JCheckBox("Each bar's own material", true);
-    private final Map<Material, JCheckBox> materials = new LinkedHashMap<>();
-    private final Map<String, JCheckBox> catalogues = new LinkedHashMap<>();
-    private final JTextField ownCatalogue = new JTextField(12);
+    private final MaterialChoice materials = new MaterialChoice("search");
+    private final CatalogueChoice catalogues = new CatalogueChoice("search", id -> true);
     private final QuantityField tubeDiameter;
     private final JSpinner count = new JSpinner(new SpinnerNumberModel(SizingRequest.DEFAULT_MAX_RESULTS, 1, 100, 1));
     private final JButton search = new JButton("Find bars");
@@ -82,8 +68,6 @@ final class SearchForm extends Rows {
         aimGradient.setName("search.aimGradient");
         frontDown.setName("search.frontStaysDown");
         rearDown.setName("search.rearStaysDown");
-        ownMaterial.setName("search.ownMaterial");
-        ownCatalogue.setName("search.ownCatalogue");
         count.setName("search.count");
         search.setName("search.run");
         ButtonGroup shareKind = new ButtonGroup();
@@ -108,46 +92,12 @@ final class SearchForm extends Rows {
         line("Largest outside diameter", maxDiameter);
         across(new JLabel("<html><small>Leave a limit empty for none.</small></html>"));
         heading("Try");
-        across(ownMaterial);
-        JPanel library = new JPanel(new GridLayout(0, 2, 6, 0));
-        library.setOpaque(false);
-        for (Material material : MaterialLibrary.all()) {
-            JCheckBox box = new JCheckBox(material.name(), false);
-            box.setName("search.material." + material.name());
-            materials.put(material, box);
-            library.add(box);
-        }
-        across(library);
-        JPanel sizes = new JPanel(new GridLayout(0, 2, 6, 0));
-        sizes.setOpaque(false);
-        CATALOGUES.forEach((id, words) -> {
-            JCheckBox box = new JCheckBox(words, true);
-            box.setName("search.catalogue." + id);
-            catalogues.put(id, box);
-            sizes.add(box);
-        });
+        across(materials);
         across(new JLabel("Stock sizes from"));
-        across(sizes);
-        JPanel own = new JPanel(new BorderLayout(4, 0));
-        own.setOpaque(false);
-        JButton choose = new JButton("Choose…");
-        choose.setToolTipText("A catalogue file of your stockist's sizes (docs/sizing.md gives its format)");
-        choose.addActionListener(event -> chooseCatalogue());
-        own.add(ownCatalogue, BorderLayout.CENTER);
-        own.add(choose, BorderLayout.EAST);
-        line("and your own file", own, null);
+        across(catalogues);
         line("Exact wall for a tube of", tubeDiameter);
         line("Results to list", count, null);
         end();
-    }
-
-    private void chooseCatalogue() {
-        JFileChooser chooser = new JFileChooser();
-        chooser.setDialogTitle("Choose a catalogue of stock sizes");
-        chooser.setFileFilter(new javax.swing.filechooser.FileNameExtensionFilter("Catalogue files (*.json)", "json"));
-        if (chooser.showOpenDialog(this) == JFileChooser.APPROVE_OPTION) {
-            ownCatalogue.setText(chooser.getSelectedFile().getPath());
-        }
     }
 
     /** Says which material "own" means for the car as it stands. */
@@ -158,7 +108,7 @@ final class SearchForm extends Rows {
                 own.add(position.key() + ": " + vehicle.axle(position).bar().material().name());
             }
         }
-        ownMaterial.setToolTipText(own.isEmpty() ? "The car has no bar" : String.join("; ", own));
+        materials.describeOwn(own.isEmpty() ? "The car has no bar" : String.join("; ", own));
         offset.setToolTipText(String.format(java.util.Locale.ROOT, "The static front weight is %.1f %%; a rule of "
                 + "thumb puts the front share about 5 points above it for a slight understeer (from memory of "
                 + "Milliken & Milliken, Race Car Vehicle Dynamics)", 100 * barwright.physics.MassProperties
@@ -182,16 +132,10 @@ final class SearchForm extends Rows {
             case SHARE -> share.value();
             case OFFSET_FROM_STATIC -> offset.value();
         };
-        List<Material> tried = materials.entrySet().stream().filter(e -> e.getValue().isSelected())
-                .map(Map.Entry::getKey).toList();
-        List<String> chosen = new ArrayList<>(catalogues.entrySet().stream().filter(e -> e.getValue().isSelected())
-                .map(Map.Entry::getKey).toList());
-        if (!ownCatalogue.getText().isBlank()) {
-            chosen.add(ownCatalogue.getText().strip());
-        }
         return new SearchSettings(axles, aim, shareValue, aimGradient.isSelected() ? gradient.value() : null,
                 safety.value(), frontDown.isSelected(), rearDown.isSelected(), maxMass.value(), maxDiameter.value(),
-                ownMaterial.isSelected(), tried, chosen, tubeDiameter.value(), (Integer) count.getValue());
+                materials.ownTicked(), materials.libraryTicked(), catalogues.chosen(), tubeDiameter.value(),
+                (Integer) count.getValue());
     }
 
     JButton searchButton() {
@@ -200,19 +144,5 @@ final class SearchForm extends Rows {
 
     JComboBox<String> axleChoice() {
         return axle;
-    }
-
-    private static Map<String, String> catalogueNames() {
-        Map<String, String> names = new LinkedHashMap<>();
-        for (String id : Catalogues.BUILT_IN) {
-            names.put(id, switch (id) {
-                case "solid-metric" -> "solid bar, metric";
-                case "solid-inch" -> "solid bar, inch";
-                case "tube-metric" -> "tube, metric";
-                case "tube-inch" -> "tube, inch";
-                default -> id;
-            });
-        }
-        return names;
     }
 }

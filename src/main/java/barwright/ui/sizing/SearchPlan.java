@@ -48,7 +48,8 @@ final class SearchPlan {
                         + "window first (its torsion length, arms and link); the search then picks its material, "
                         + "section and arm hole.");
             }
-            choices.put(axle, new SizeChoices(materials(settings, bar), sizes, List.of()));
+            choices.put(axle, new SizeChoices(materials(settings.ownMaterial(), settings.materials(), bar),
+                    sizes, List.of()));
         }
         return new SizingRequest(settings.axles(), targets(settings), constraints(settings), choices,
                 settings.count(), SizingRequest.DEFAULT_TIE_BAND);
@@ -95,13 +96,16 @@ final class SearchPlan {
                 settings.maxOuterDiameter());
     }
 
-    /** @return the bar's own material first where it is asked for, then the others, each once */
-    static List<Material> materials(SearchSettings settings, AntiRollBar bar) {
+    /**
+     * @return the bar's own material first where it is asked for, then the others, each once
+     * @throws IllegalArgumentException where none is asked for
+     */
+    static List<Material> materials(boolean own, List<Material> others, AntiRollBar bar) {
         Set<Material> chosen = new LinkedHashSet<>();
-        if (settings.ownMaterial()) {
+        if (own) {
             chosen.add(bar.material());
         }
-        chosen.addAll(settings.materials());
+        chosen.addAll(others);
         if (chosen.isEmpty()) {
             throw new IllegalArgumentException("Materials: tick at least one material to try.");
         }

@@ -32,7 +32,10 @@ final class SizingWindow extends JDialog {
 
     private final JTabbedPane tabs = new JTabbedPane();
     private final SearchView search;
+    private final TubeView tubes;
     private final MapView map;
+    private final CompareView compare;
+    private final PreloadView preload;
 
     SizingWindow(JFrame owner, SizingContext context, Exports exports) {
         super(owner, "Sizing and setup — Barwright", ModalityType.MODELESS);
@@ -41,9 +44,14 @@ final class SizingWindow extends JDialog {
         search = new SearchView(context);
         tabs.setName("sizing.tabs");
         add(Tab.SEARCH, search);
-        add(Tab.TUBES, new JPanel());
+        tubes = new TubeView(context);
+        add(Tab.TUBES, tubes);
         map = new MapView(context, exports);
         add(Tab.MAP, map);
+        compare = new CompareView(context);
+        add(Tab.COMPARE, compare);
+        preload = new PreloadView(context);
+        add(Tab.PRELOAD, preload);
         JPanel content = new JPanel(new BorderLayout());
         content.add(tabs, BorderLayout.CENTER);
         content.add(new CautionLine(), BorderLayout.SOUTH);
@@ -78,7 +86,19 @@ final class SizingWindow extends JDialog {
         return search;
     }
 
+    TubeView tubes() {
+        return tubes;
+    }
+
     MapView map() {
         return map;
+    }
+
+    CompareView compare() {
+        return compare;
+    }
+
+    PreloadView preload() {
+        return preload;
     }
 }

@@ -4,6 +4,9 @@ import barwright.ui.action.Settings;
 import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
 
+import javax.swing.AbstractButton;
+import javax.swing.JComboBox;
+import javax.swing.JTextField;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -29,13 +32,63 @@ public final class SizingScreenshots {
         SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.SEARCH);
         SizingScreens.onEdt(() -> {
             views.setLocation(0, 0);
-            views.setSize(1260, 820);
-            views.search().form().axleChoice().setSelectedIndex(0);
+            views.setSize(1260, 840);
+            return null;
+        });
+
+        // the rear bar sized for a front share of 52 %, its inside wheel to stay down up to the limit
+        SizingScreens.onEdt(() -> {
+            SizingScreens.<JComboBox<?>>find(views, "search.axle").setSelectedIndex(1);
+            SizingScreens.<AbstractButton>find(views, "search.shareItself").setSelected(true);
+            SizingScreens.<JTextField>find(views, "search.share").setText("52");
+            SizingScreens.<AbstractButton>find(views, "search.rearStaysDown").setSelected(true);
             views.search().search();
             return null;
         });
         SizingScreens.until("the search", () -> views.search().work().isIdle());
         SizingScreens.capture(views, folder.resolve("sizing-search.png"));
+
+        // tubes of the front bar's rate, in its own steel and in 4130
+        SizingScreens.onEdt(() -> {
+            views.open(SizingWindow.Tab.TUBES);
+            SizingScreens.<AbstractButton>find(views, "tubes.material.4130 chromoly").setSelected(true);
+            views.tubes().find();
+            return null;
+        });
+        SizingScreens.until("the tubes", () -> views.tubes().work().isIdle());
+        SizingScreens.capture(views, folder.resolve("sizing-tubes.png"));
+
+        SizingScreens.onEdt(() -> {
+            views.open(SizingWindow.Tab.MAP);
+            return null;
+        });
+        SizingScreens.until("the map", () -> views.map().work().isIdle() && !views.map().cells().isEmpty());
+        SizingScreens.capture(views, folder.resolve("sizing-map.png"));
+
+        // the open car against two variants
+        SizingScreens.onEdt(() -> {
+            views.open(SizingWindow.Tab.COMPARE);
+            CompareView compare = views.compare();
+            SizingScreens.<JTextField>find(views, "compare.name").setText("as it is");
+            compare.addOpenCar();
+            SizingScreens.<JTextField>find(views, "compare.name").setText("rear bar hole 1");
+            SizingScreens.<JTextField>find(views, "compare.changes").setText("rear.bar.selectedArm=0");
+            compare.addVariant();
+            SizingScreens.<JTextField>find(views, "compare.name").setText("front bar 25 mm");
+            SizingScreens.<JTextField>find(views, "compare.changes").setText("front.bar.section.outerDiameterMm=25");
+            compare.addVariant();
+            return null;
+        });
+        SizingScreens.until("the comparison", () -> views.compare().work().isIdle() && views.compare().shown() != null);
+        SizingScreens.capture(views, folder.resolve("sizing-compare.png"));
+
+        SizingScreens.onEdt(() -> {
+            views.open(SizingWindow.Tab.PRELOAD);
+            return null;
+        });
+        SizingScreens.until("the preload", () -> views.preload().work().isIdle() && views.preload().shown() != null);
+        SizingScreens.capture(views, folder.resolve("sizing-preload.png"));
+
         SizingScreens.onEdt(() -> {
             views.dispose();
             window.dispose();

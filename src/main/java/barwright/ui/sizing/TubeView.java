@@ -1,0 +1,286 @@
+package barwright.ui.sizing;
+
+import barwright.model.AntiRollBar;
+import barwright.model.AxlePosition;
+import barwright.model.SolidSection;
+import barwright.model.Vehicle;
+import barwright.physics.bar.BarResult;
+import barwright.sizing.BarChoice;
+import barwright.sizing.TubeEquivalents;
+import barwright.sizing.TubeMatch;
+import barwright.ui.document.DocumentEvent;
+import barwright.ui.panel.FigureFormat;
+import barwright.ui.panel.WrappingText;
+import barwright.units.Quantity;
+
+import javax.swing.BorderFactory;
+import javax.swing.ButtonGroup;
+import javax.swing.JButton;
+import javax.swing.JComboBox;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JRadioButton;
+import javax.swing.JScrollPane;
+import javax.swing.table.AbstractTableModel;
+import java.awt.BorderLayout;
+import java.awt.FlowLayout;
+import java.util.List;
+
+/**
+ * Tube or solid: for the car's solid bar (or a solid bar of a given diameter in its place) the catalogue tubes
+ * within 2 % of its rate, lightest first, with the mass saved and both bars' stress at the check travel; the
+ * chosen tube can be put in the car as one undoable edit. Event thread.
+ */
+final class TubeView extends JPanel {
+    static final String[] COLUMNS = {"Tube", "Material", "Link rate", "Rate vs solid", "Mass", "Mass saved",
+        "Largest stress", "Stress vs solid", "Safety factor"};
+    static final String[] HELP = {"The tube as the catalogue names it", "The tube's material",
+        "Force per unit of relative link travel at the same hole", "The tube's rate over the solid bar's, less one",
+        "The tube's mass", "The solid bar's mass less the tube's, and as a share of the solid's",
+        "Largest von Mises stress at the check travel", "The tube's largest stress over the solid bar's, less one",
+        "Static safety factor against yield at the check travel"};
+    private final SizingContext context;
+    private final FigureFormat format;
+    private final JComboBox<String> axle = new JComboBox<>(new String[]{"front bar", "rear bar"});
+    private final JRadioButton own = new JRadioButton("the car's own bar", true);
+    private final JRadioButton given = new JRadioButton("a solid bar in its place of", false);
+    private final QuantityField diameter;
+    private final MaterialChoice materials = new MaterialChoice("tubes");
+    private final CatalogueChoice catalogues = new CatalogueChoice("tubes", id -> id.startsWith("tube"));
+    private final JButton find = new JButton("Find tubes");
+    private final JButton apply = new JButton("Put the chosen tube in the car");
+    private final WrappingText solid = new WrappingText("Choose the solid bar to match and press Find tubes.");
+    private final WrappingText applied = new WrappingText(" ");
+    private final WorkStrip work = new WorkStrip("tubes");
+    private final Rows rows = new Rows();
+    private final Model model = new Model();
+    private final FigureTable table;
+    private Found shown;
+
+    /** A finished match, with where it was made. */
+    private record Found(Vehicle vehicle, AxlePosition axle, TubeEquivalents.Comparison comparison) {
+    }
+
+    TubeView(SizingContext context) {
+        super(new BorderLayout());
+        setName("tubes.view");
+        this.context = context;
+        this.format = new FigureFormat(context.view());
+        diameter = new QuantityField("tubes.diameter", "Solid bar diameter", Quantity.LENGTH, context.view(), 3e-3,
+                200e-3, 22e-3, false);
+        axle.setName("tubes.axle");
+        own.setName("tubes.own");
+        given.setName("tubes.given");
+        find.setName("tubes.find");
+        apply.setName("tubes.apply");
+        solid.setName("tubes.solid");
+        applied.setName("tubes.applied");
+        ButtonGroup which = new ButtonGroup();
+        which.add(own);
+        which.add(given);
+        table = new FigureTable("tubes.results", model, HELP, new int[]{170, 150, 95, 95, 70, 115, 100, 105, 95});
+        table.getSelectionModel().addListSelectionListener(event -> refreshApply());
+        find.addActionListener(event -> find());
+        apply.setToolTipText("Writes the chosen tube and its material into the open car (same hole); Edit > Undo "
+                + "takes it back");
+        apply.addActionListener(event -> applyChosen());
+
+        rows.heading("Solid bar to match");
+        rows.line("The", axle, null);
+        rows.across(Rows.inLine(0, own));
+        rows.across(Rows.inLine(0, given, diameter, diameter.unitLabel()));
+        rows.heading("Tubes to try");
+        rows.across(materials);
+        rows.across(catalogues);
+        rows.across(new JLabel("<html><small>Equal rate: within 2 % of the solid bar's.</small></html>"));
+        rows.end();
+        JPanel left = new JPanel(new BorderLayout());
+        left.add(new JScrollPane(rows), BorderLayout.CENTER);
+        JPanel run = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 4));
+        run.add(find);
+        left.add(run, BorderLayout.SOUTH);
+        left.setPreferredSize(new java.awt.Dimension(390, 400));
+
+        JPanel results = new JPanel(new BorderLayout(0, 4));
+        results.setBorder(BorderFactory.createEmptyBorder(6, 8, 4, 8));
+        results.add(solid, BorderLayout.NORTH);
+        results.add(new JScrollPane(table), BorderLayout.CENTER);
+        JPanel under = new JPanel(new BorderLayout(0, 4));
+        JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
+        buttons.add(apply);
+        under.add(new WrappingText("A tube of the same rate stresses more than the solid bar: check its safety "
+                + "factor, and that its ends and splines can be made in that wall."), BorderLayout.NORTH);
+        under.add(buttons, BorderLayout.CENTER);
+        under.add(applied, BorderLayout.SOUTH);
+        results.add(under, BorderLayout.SOUTH);
+        add(left, BorderLayout.WEST);
+        add(results, BorderLayout.CENTER);
+        add(work, BorderLayout.SOUTH);
+        axle.addActionListener(event -> describeOwn());
+        context.document().addListener(this::documentChanged);
+        context.view().addListener(() -> {
+            model.fireTableDataChanged();
+            describe();
+        });
+        describeOwn();
+        refreshApply();
+    }
+
+    private void documentChanged(DocumentEvent event) {
+        describeOwn();
+        describe();
+        refreshApply();
+    }
+
+    private AxlePosition chosenAxle() {
+        return axle.getSelectedIndex() == 0 ? AxlePosition.FRONT : AxlePosition.REAR;
+    }
+
+    /** Says what the car's own bar is, and offers it only where it is solid. */
+    private void describeOwn() {
+        if (!context.document().isValid()) {
+            return;
+        }
+        AntiRollBar bar = context.document().lastValid().vehicle().axle(chosenAxle()).bar();
+        boolean solidBar = bar != null && bar.section() instanceof SolidSection;
+        own.setText(bar == null ? "the car's own bar (there is none)"
+                : solidBar ? "the car's own bar: " + format.text(bar.section().outerDiameter(), Quantity.LENGTH)
+                + " solid, " + bar.material().name()
+                : "the car's own bar (a tube: give a solid diameter instead)");
+        own.setEnabled(solidBar);
+        if (!solidBar) {
+            given.setSelected(true);
+        }
+    }
+
+    void find() {
+        Vehicle vehicle;
+        AntiRollBar solidBar;
+        List<String> names;
+        List<barwright.model.Material> tried;
+        AxlePosition position = chosenAxle();
+        try {
+            vehicle = context.currentCar().vehicle();
+            AntiRollBar bar = vehicle.axle(position).bar();
+            if (bar == null) {
+                throw new IllegalArgumentException("The " + position.key() + " axle has no bar to match: give it one "
+                        + "in the main window first.");
+            }
+            solidBar = own.isSelected() ? bar : bar.withSection(new SolidSection(diameter.value()));
+            if (!(solidBar.section() instanceof SolidSection)) {
+                throw new IllegalArgumentException("The " + position.key() + " bar is a tube: give the diameter of "
+                        + "the solid bar to match.");
+            }
+            tried = SearchPlan.materials(materials.ownTicked(), materials.libraryTicked(), bar);
+            names = catalogues.chosen();
+            SearchPlan.sizes(names);
+        } catch (IllegalArgumentException | IllegalStateException refused) {
+            work.say(refused.getMessage(), true);
+            return;
+        }
+        AntiRollBar matched = solidBar;
+        work.run("Trying the tubes", "tubes", "The tubes could not be tried", progress -> new Found(vehicle, position,
+                TubeEquivalents.compare(matched, vehicle.differentialWheelTravel(), SearchPlan.sizes(names), tried,
+                        TubeEquivalents.DEFAULT_TOLERANCE)), found -> {
+            shown = found;
+            model.fireTableDataChanged();
+            if (model.getRowCount() > 0) {
+                table.setRowSelectionInterval(0, 0);
+            }
+            applied.setText(" ");
+            describe();
+            refreshApply();
+        });
+    }
+
+    private void describe() {
+        if (shown == null) {
+            return;
+        }
+        AntiRollBar bar = shown.comparison().solidBar();
+        BarResult result = shown.comparison().solid();
+        String text = "Solid bar " + format.text(bar.section().outerDiameter(), Quantity.LENGTH) + " "
+                + bar.material().name() + " on the " + shown.axle().key() + ", hole " + (bar.selectedArm() + 1)
+                + ": link rate " + format.text(result.linkRate(), Quantity.LINEAR_RATE) + ", mass "
+                + format.text(result.mass(), Quantity.MASS) + ", largest stress "
+                + format.text(result.maxVonMisesStress(), Quantity.STRESS) + ", safety factor "
+                + format.factor(result.safetyFactor()) + ". "
+                + (shown.comparison().matches().isEmpty() ? "No tube tried comes within 2 % of its rate."
+                : shown.comparison().matches().size() + " tubes come within 2 % of its rate, lightest first.");
+        if (!stillApplies()) {
+            text += " The car has changed since: find the tubes again before using them.";
+        }
+        solid.setText(text);
+    }
+
+    private boolean stillApplies() {
+        return shown != null && context.document().isValid()
+                && context.document().lastValid().vehicle().equals(shown.vehicle());
+    }
+
+    private void applyChosen() {
+        int row = table.getSelectedRow();
+        if (row < 0 || !stillApplies()) {
+            return;
+        }
+        TubeMatch match = shown.comparison().matches().get(table.convertRowIndexToModel(row));
+        BarChoice choice = new BarChoice(shown.axle(), match.material(), match.size(),
+                shown.comparison().solidBar().selectedArm());
+        BarEdits.putBars(context.document(), List.of(choice), this);
+        applied.setText("Put in the car: " + shown.axle().key() + " bar " + match.size().label() + " "
+                + match.material().name() + ". Edit > Undo (Ctrl+Z) in the main window takes it back.");
+    }
+
+    private void refreshApply() {
+        apply.setEnabled(table.getSelectedRow() >= 0 && stillApplies());
+    }
+
+    WorkStrip work() {
+        return work;
+    }
+
+    FigureTable table() {
+        return table;
+    }
+
+    String solidText() {
+        return solid.getText();
+    }
+
+    /** The tubes found, as rows in the units chosen. */
+    private final class Model extends AbstractTableModel {
+        @Override
+        public int getRowCount() {
+            return shown == null ? 0 : shown.comparison().matches().size();
+        }
+
+        @Override
+        public int getColumnCount() {
+            return COLUMNS.length;
+        }
+
+        @Override
+        public String getColumnName(int column) {
+            return COLUMNS[column];
+        }
+
+        @Override
+        public Object getValueAt(int row, int column) {
+            TubeMatch match = shown.comparison().matches().get(row);
+            BarResult solidBar = shown.comparison().solid();
+            var locale = context.view().locale();
+            return switch (column) {
+                case 0 -> match.size().label();
+                case 1 -> match.material().name();
+                case 2 -> format.text(match.linkRate(), Quantity.LINEAR_RATE);
+                case 3 -> String.format(locale, "%+.1f %%", match.rateDifference() * 100);
+                case 4 -> format.text(match.mass(), Quantity.MASS);
+                case 5 -> format.text(match.massSaved(), Quantity.MASS)
+                        + String.format(locale, " (%.0f %%)", 100 * match.massSaved() / solidBar.mass());
+                case 6 -> format.text(match.maxStress(), Quantity.STRESS);
+                case 7 -> String.format(locale, "%+.0f %%", 100 * (match.maxStress() / solidBar.maxVonMisesStress() - 1));
+                default -> format.factor(match.safetyFactor());
+            };
+        }
+    }
+}
