@@ -71,7 +71,7 @@ final class CompareView extends JPanel {
                 + "front.bar.section.outerDiameterMm=24; rear.bar.selectedArm=3");
         setupTable = new FigureTable("compare.setups", setups, new String[]{"What the setup is called",
             "Where it came from"}, new int[]{220, 640});
-        figureTable = new FigureTable("compare.figures", figures, new String[0], new int[]{220, 215, 215, 215, 215});
+        figureTable = new FigureTable("compare.figures", figures, new String[0], new int[]{200, 200, 200, 200, 200});
         charts.setName("compare.charts");
 
         JButton addOpen = button("compare.addOpen", "Add the open car as it is now", this::addOpenCar);
@@ -98,8 +98,12 @@ final class CompareView extends JPanel {
         list.setPreferredSize(new java.awt.Dimension(800, 110));
         top.add(list, BorderLayout.CENTER);
         top.add(controls, BorderLayout.SOUTH);
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(figureTable), charts);
-        split.setResizeWeight(0.6);
+        JScrollPane figureScroll = new JScrollPane(figureTable);
+        figureScroll.setPreferredSize(new java.awt.Dimension(640, 400));
+        charts.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
+        charts.setPreferredSize(new java.awt.Dimension(520, 400));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, figureScroll, charts);
+        split.setResizeWeight(0.5);
         split.setBorder(null);
         add(top, BorderLayout.NORTH);
         add(split, BorderLayout.CENTER);
@@ -201,7 +205,7 @@ final class CompareView extends JPanel {
     private void redraw() {
         figures.fireTableStructureChanged();
         for (int i = 0; i < figureTable.getColumnCount(); i++) {
-            figureTable.getColumnModel().getColumn(i).setPreferredWidth(i == 0 ? 220 : 215);
+            figureTable.getColumnModel().getColumn(i).setPreferredWidth(200);
         }
         int selected = Math.max(0, charts.getSelectedIndex());
         charts.removeAll();

@@ -147,11 +147,16 @@ class SizingWindowTest {
                 && fixture.robot.finder().findByName(view, "search.progress", false).isShowing()
                 && ((javax.swing.JProgressBar) fixture.robot.finder().findByName(view, "search.progress", false))
                 .getString().contains(" of 100,000 bars"));
-        // the window answers while the search runs: another tab can be chosen and back
-        sizing.tabbedPane("sizing.tabs").selectTab(SizingWindow.Tab.MAP.title);
-        sizing.tabbedPane("sizing.tabs").selectTab(SizingWindow.Tab.SEARCH.title);
-        assertThat(GuiActionRunner.execute(() -> view.work().isIdle())).as("still searching").isFalse();
-        sizing.button("search.cancel").click();
+        // the window answers while the search runs (another tab chosen and back), then Cancel is pressed at once:
+        // no robot travel between the first progress and the cancel, so the search cannot finish in between
+        boolean idleMeanwhile = GuiActionRunner.execute(() -> {
+            fixture.views().tabs().setSelectedIndex(SizingWindow.Tab.MAP.ordinal());
+            fixture.views().tabs().setSelectedIndex(SizingWindow.Tab.SEARCH.ordinal());
+            boolean idle = view.work().isIdle();
+            ((javax.swing.AbstractButton) fixture.robot.finder().findByName(view, "search.cancel", false)).doClick();
+            return idle;
+        });
+        assertThat(idleMeanwhile).as("still searching when Cancel was pressed").isFalse();
         fixture.waitFor("the cancel", () -> view.work().isIdle());
         assertThat(GuiActionRunner.execute(() -> view.work().message())).contains("cancelled");
         assertThat(sizing.table("search.results").rowCount()).isZero();
