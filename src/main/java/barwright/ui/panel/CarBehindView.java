@@ -90,7 +90,7 @@ public final class CarBehindView extends JComponent {
         // the car takes the upper part; the road's push on each tyre hangs below the ground line as columns
         int ground = top + (int) ((bottom - top) * 0.58);
         double track = Math.max(result.vehicle().front().track(), result.vehicle().rear().track());
-        double scale = Math.min(width * 0.78 / (track + 0.3), (ground - top) / 1.45); // px per metre
+        double scale = Math.min(width * 0.66 / (track + 0.3), (ground - top) / 1.45); // px per metre
         double centre = width / 2.0;
         boolean left = turn == TurnDirection.LEFT;
         // seen from behind the car's left is on the left; the outside of a left turn is on the right
