@@ -73,6 +73,7 @@ public final class MainWindow extends JFrame {
         editor = new VehicleEditor(document, view);
         figures = new FiguresPanel(results, format, this::showWork);
         tabs = new ResultsTabs(results, probe, format, analysis, files::exportChart);
+        tabs.addTab("Lift, balance, chassis", new barwright.ui.insight.InsightPanel(results, view));
         setContentPane(new PaintWatchingPanel());
         layoutWindow();
         Menus menus = new Menus(this);

@@ -174,8 +174,8 @@ public final class ResultsTabs extends JTabbedPane {
     /** @return the chart on the selected tab (made now if it is the first time), or null on the car picture */
     public ResultChart selectedChart() {
         int index = getSelectedIndex() - 1;
-        if (index < 0) {
-            return null;
+        if (index < 0 || index >= built.length) {
+            return null; // the car picture, or a tab added after the charts that is not one
         }
         if (built[index] == null) {
             built[index] = make(index);
