@@ -12,9 +12,17 @@ public final class Main {
 
     public static void main(String[] args) {
         if (args.length == 0) {
-            System.out.print(Cli.usage()); // the desktop program is being built (issue 4)
+            int status = openWindow();
+            if (status != 0) {
+                System.exit(status);
+            }
             return;
         }
         System.exit(Cli.run(args, System.out, System.err));
+    }
+
+    /** Kept apart so that the window's classes (and AWT) load only when no command is given. */
+    private static int openWindow() {
+        return barwright.ui.app.DesktopApp.launch();
     }
 }

@@ -18,7 +18,15 @@ public final class Cli {
     public static final int REFUSED = 2;
 
     private static final List<Command> COMMANDS = List.of(
-            new AnalyzeCommand());
+            new AnalyzeCommand(),
+            new EnvelopeCommand(),
+            new SensitivityCommand(),
+            new ChassisCommand(),
+            new SizeCommand(),
+            new MapCommand(),
+            new CompareCommand(),
+            new PreloadCommand(),
+            new SheetCommand());
 
     private Cli() {
     }

@@ -77,6 +77,7 @@ final class BarReader {
             return null;
         }
         String shape = reader.text(sectionNode, sectionPath, "shape", true);
+        int beforeDiameter = reader.problems().size();
         double diameter = reader.number(sectionNode, sectionPath, "outerDiameterMm", DIAMETER);
         switch (shape) {
             case "solid" -> {
@@ -87,8 +88,9 @@ final class BarReader {
                 return new SolidSection(diameter * 1e-3);
             }
             case "tube" -> {
-                int before = reader.problems().size();
+                // the wall is judged against the diameter only where both were accepted
                 double wall = reader.number(sectionNode, sectionPath, "wallMm", Range.above(0, 100, "mm"));
+                int before = beforeDiameter;
                 if (reader.problems().size() == before && !(wall < diameter / 2)) {
                     reader.problem(sectionPath + ".wallMm", "= " + Range.format(wall) + " mm: must be less than half "
                             + "of outerDiameterMm (" + Range.format(diameter / 2) + " mm)");

@@ -5,13 +5,16 @@ import barwright.model.CornerMasses;
 import barwright.model.Tyre;
 import barwright.model.Vehicle;
 import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonParseException;
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
+import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import com.fasterxml.jackson.databind.json.JsonMapper;
 
 import java.io.IOException;
@@ -45,6 +48,8 @@ public final class VehicleFileReader {
             // NaN and Infinity are read so that they can be refused by key path like any other bad value
             .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
             .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            // one JSON object and nothing after it: "{...} {...}" or "{...} junk" is not a vehicle file
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .build();
 
     private VehicleFileReader() {
@@ -87,13 +92,20 @@ public final class VehicleFileReader {
         } catch (StreamConstraintsException tooDeep) {
             throw new VehicleFileException("the file is nested too deeply to be a vehicle file (over "
                     + MAX_NESTING + " levels)");
-        } catch (JsonParseException bad) {
-            throw new VehicleFileException("not valid JSON at line " + bad.getLocation().getLineNr() + ", column "
-                    + bad.getLocation().getColumnNr() + ": " + bad.getOriginalMessage());
+        } catch (MismatchedInputException trailing) {
+            // with FAIL_ON_TRAILING_TOKENS, readTree reports text after the object this way
+            throw new VehicleFileException("not valid JSON" + at(trailing.getLocation())
+                    + ": there is more text after the end of the object; a vehicle file holds one JSON object");
+        } catch (JsonProcessingException bad) {
+            throw new VehicleFileException("not valid JSON" + at(bad.getLocation()) + ": " + bad.getOriginalMessage());
         } catch (IOException bad) {
             throw new VehicleFileException("not valid JSON: " + bad.getMessage());
         }
         return fromTree(tree);
+    }
+
+    private static String at(JsonLocation where) {
+        return where == null ? "" : " at line " + where.getLineNr() + ", column " + where.getColumnNr();
     }
 
     /** Validates a tree (for example the open document after an edit) and builds the car from it. */
@@ -139,21 +151,24 @@ public final class VehicleFileReader {
         JsonNode analysis = reader.object(tree, "", "analysis", false);
         double travelMm = analysis == null ? DEFAULT_DIFFERENTIAL_TRAVEL_MM
                 : reader.optionalNumber(analysis, "analysis", "differentialWheelTravelMm",
-                Range.between(0, 500, "mm"), DEFAULT_DIFFERENTIAL_TRAVEL_MM);
+                Range.above(0, 500, "mm"), DEFAULT_DIFFERENTIAL_TRAVEL_MM);
 
         Axle front = frontNode == null ? null : AxleReader.read(frontNode, "front", reader);
         Axle rear = rearNode == null ? null : AxleReader.read(rearNode, "rear", reader);
         if (body == null) {
             return null;
         }
+        int beforeCorners = reader.problems().size();
         CornerMasses corners = readCornerMasses(body, reader);
+        boolean cornersAccepted = reader.problems().size() == beforeCorners;
         double mass;
         double frontFraction;
         if (corners != null) {
             mass = corners.total();
             frontFraction = corners.frontFraction();
-            checkAgrees(body, "massKg", mass, Range.between(50, 20000, "kg"), reader);
-            checkAgrees(body, "frontMassFraction", frontFraction, Range.between(0.05, 0.95, ""), reader);
+            checkAgrees(body, "massKg", mass, Range.between(50, 20000, "kg"), cornersAccepted, reader);
+            checkAgrees(body, "frontMassFraction", frontFraction, Range.between(0.05, 0.95, ""), cornersAccepted,
+                    reader);
         } else {
             mass = reader.number(body, "vehicle", "massKg", Range.between(50, 20000, "kg"));
             frontFraction = reader.number(body, "vehicle", "frontMassFraction", Range.between(0.05, 0.95, ""));
@@ -185,12 +200,16 @@ public final class VehicleFileReader {
     }
 
     /** Where corner masses are given, massKg and frontMassFraction may be absent or must agree within 0.5 %. */
-    private static void checkAgrees(JsonNode body, String key, double fromCorners, Range range, NodeReader reader) {
+    private static void checkAgrees(JsonNode body, String key, double fromCorners, Range range,
+                                    boolean cornersAccepted, NodeReader reader) {
         if (NodeReader.isAbsent(body, key)) {
             return;
         }
+        int before = reader.problems().size();
         double given = reader.number(body, "vehicle", key, range);
-        if (!reader.hasProblems() && Math.abs(given - fromCorners) > 0.005 * fromCorners) {
+        // compared only where both the value and the corner masses were accepted, whatever else is wrong
+        if (cornersAccepted && reader.problems().size() == before
+                && Math.abs(given - fromCorners) > 0.005 * fromCorners) {
             reader.problem("vehicle." + key, "= " + Range.format(given) + ": must agree within 0.5 % with the "
                     + "corner masses, which give " + Range.format(Math.round(fromCorners * 1e4) / 1e4)
                     + " (or leave it out)");

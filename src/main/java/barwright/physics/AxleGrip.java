@@ -44,15 +44,16 @@ public final class AxleGrip {
         if (requiredForce <= 0) {
             return 0;
         }
-        UnivariateFunction surplus = slip -> tyre.lateralForce(slip, outsideLoad)
-                + tyre.lateralForce(slip, insideLoad) - requiredForce;
-        double firstPeak = Math.min(peakOf(outsideLoad), peakOf(insideLoad));
+        TyreModel.LoadedCurve outside = tyre.atLoad(outsideLoad);
+        TyreModel.LoadedCurve inside = tyre.atLoad(insideLoad);
+        UnivariateFunction surplus = slip -> outside.lateralForce(slip) + inside.lateralForce(slip) - requiredForce;
+        double firstPeak = Math.min(outside.peakSlipAngle(), inside.peakSlipAngle());
         BrentSolver solver = new BrentSolver(SLIP_ACCURACY);
         if (surplus.value(firstPeak) >= 0) {
             // both curves still rise up to the first tyre's peak: the root is unique there
             return solver.solve(200, surplus, 0, firstPeak);
         }
-        double lastPeak = Math.max(peakOf(outsideLoad), peakOf(insideLoad));
+        double lastPeak = Math.max(outside.peakSlipAngle(), inside.peakSlipAngle());
         if (lastPeak <= firstPeak) {
             return Double.NaN;
         }
@@ -64,9 +65,5 @@ public final class AxleGrip {
             return Double.NaN;
         }
         return solver.solve(200, surplus, firstPeak, top);
-    }
-
-    private double peakOf(double load) {
-        return load > 0 ? tyre.peakSlipAngle(load) : TyreModel.MAX_SLIP;
     }
 }

@@ -41,6 +41,22 @@ public record AxleStiffness(double wheelRate, double springRollStiffness, double
                 wheelRate, wheelRate + barWheelRate, rideRate, rideFrequency);
     }
 
+    /**
+     * @param axleLoad the axle's static load (N)
+     * @return the corner sprung mass, half of (static axle load / g - unsprung axle mass) (kg), model.md 3
+     * @throws ImpossibleVehicleException where the unsprung mass is not less than the axle's static mass
+     */
+    public static double cornerSprungMass(Axle axle, barwright.model.AxlePosition position, double axleLoad) {
+        double gravity = barwright.units.Constants.STANDARD_GRAVITY;
+        double cornerSprungMass = (axleLoad / gravity - axle.unsprungMass()) / 2;
+        if (!(cornerSprungMass > 0)) {
+            throw new ImpossibleVehicleException(String.format(
+                    "The %s unsprung mass %.1f kg is not less than the static mass on the %s axle %.1f kg.",
+                    position.key(), axle.unsprungMass(), position.key(), axleLoad / gravity));
+        }
+        return cornerSprungMass;
+    }
+
     /** @return two springs in series: 1 / (1/a + 1/b) */
     public static double inSeries(double first, double second) {
         return 1 / (1 / first + 1 / second);

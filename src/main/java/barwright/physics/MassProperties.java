@@ -46,6 +46,11 @@ public record MassProperties(double mass, double frontMassFraction, double cgToF
             return turn == TurnDirection.LEFT ? rightRear : leftRear;
         }
 
+        /** @return true where each axle's two wheels carry exactly the same static load */
+        public boolean symmetric() {
+            return leftFront == rightFront && leftRear == rightRear;
+        }
+
         public double frontAxle() {
             return leftFront + rightFront;
         }
@@ -74,6 +79,12 @@ public record MassProperties(double mass, double frontMassFraction, double cgToF
         }
         double sprungCgHeight = (mass * vehicle.cgHeight() - unsprungFront * vehicle.front().unsprungCgHeight()
                 - unsprungRear * vehicle.rear().unsprungCgHeight()) / sprungMass;
+        if (!(sprungCgHeight > 0)) {
+            throw new ImpossibleVehicleException(String.format(
+                    "The sprung mass's centre comes out %.0f mm above the ground, at or below it: the unsprung "
+                            + "masses and their heights do not fit the car's CG height of %.0f mm.",
+                    sprungCgHeight * 1e3, vehicle.cgHeight() * 1e3));
+        }
         double sprungCgToFront = (mass * cgToFront - unsprungRear * wheelbase) / sprungMass;
         if (sprungCgToFront < 0 || sprungCgToFront > wheelbase) {
             throw new ImpossibleVehicleException(String.format(
@@ -96,6 +107,24 @@ public record MassProperties(double mass, double frontMassFraction, double cgToF
                 mass * g * (1 - frontFraction) / 2, mass * g * (1 - frontFraction) / 2);
         return new MassProperties(mass, frontFraction, cgToFront, cgToRear, sprungMass, sprungCgHeight,
                 sprungCgToFront, frontSprung, rearSprung, rollAxisHeight, rollArm, loads);
+    }
+
+    /**
+     * The same car under a steady longitudinal acceleration as well: m a_x h / l of load moves from the front
+     * axle to the rear, half from each wheel, before the lateral calculation (model.md 7, lift envelope only).
+     * The masses, the roll axis and so the lateral load transfer per a_y stay as they are.
+     *
+     * @param longitudinalAcceleration a_x, forward positive (m/s^2)
+     * @param cgHeight                 height of the car's centre of mass h (m)
+     */
+    public MassProperties withLongitudinalAcceleration(double longitudinalAcceleration, double cgHeight) {
+        double wheelbase = cgToFrontAxle + cgToRearAxle;
+        double perWheel = mass * longitudinalAcceleration * cgHeight / wheelbase / 2;
+        StaticWheelLoads shifted = new StaticWheelLoads(staticLoads.leftFront() - perWheel,
+                staticLoads.rightFront() - perWheel, staticLoads.leftRear() + perWheel,
+                staticLoads.rightRear() + perWheel);
+        return new MassProperties(mass, frontMassFraction, cgToFrontAxle, cgToRearAxle, sprungMass, sprungCgHeight,
+                sprungCgToFrontAxle, frontSprungMass, rearSprungMass, rollAxisHeightAtCg, rollArm, shifted);
     }
 
     /** @return m_s g h', the roll stiffness the gravity term takes away (N m/rad) */

@@ -24,6 +24,12 @@ public record TurnResult(SteadyCornering cornering, double frontInsideLift, doub
         handlingCurve = List.copyOf(handlingCurve);
     }
 
+    /** @return the same figures with the wheel loads and roll of another turn (a mirror-image car's other turn) */
+    TurnResult withCornering(SteadyCornering mirrored) {
+        return new TurnResult(mirrored, frontInsideLift, rearInsideLift, rollover, frontLimit, rearLimit, limit, balance,
+                handlingCurve);
+    }
+
     /** @return true where the car rolls over (both inside wheels lifted) at or below its grip limit */
     public boolean rollsOverBeforeSliding() {
         return rollover <= limit;

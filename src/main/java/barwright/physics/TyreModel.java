@@ -32,6 +32,10 @@ public final class TyreModel {
         double upper = 1;
         while (upper - curvature * (upper - Math.atan(upper)) < tangent) {
             upper *= 2;
+            if (Double.isInfinite(upper)) {
+                // E = 1 leaves atan x < pi/2: with C below about 1.565 the argument never reaches the peak
+                return Double.POSITIVE_INFINITY;
+            }
         }
         return new BrentSolver(1e-12, 1e-14).solve(200,
                 x -> x - curvature * (x - Math.atan(x)) - tangent, 0, upper);
@@ -62,23 +66,46 @@ public final class TyreModel {
 
     /** @return the Magic Formula lateral force F_y at a slip angle (N) */
     public double lateralForce(double slipAngle, double load) {
-        double peak = peakForce(load);
-        if (peak <= 0) {
-            return 0;
-        }
-        double shape = tyre.shapeFactor();
-        double stiffnessFactor = corneringStiffness(load) / (shape * peak);
-        double x = stiffnessFactor * slipAngle;
-        return peak * Math.sin(shape * Math.atan(x - tyre.curvatureFactor() * (x - Math.atan(x))));
+        return atLoad(load).lateralForce(slipAngle);
     }
 
     /** @return the slip angle at which the force peaks for this load (rad), at most {@link #MAX_SLIP} */
     public double peakSlipAngle(double load) {
+        return atLoad(load).peakSlipAngle();
+    }
+
+    /**
+     * @return the force curve at one load, its Magic Formula factors worked out once: a root search over the
+     *     slip angle evaluates the curve many times at the same load
+     */
+    public LoadedCurve atLoad(double load) {
         double peak = peakForce(load);
         if (peak <= 0) {
-            return MAX_SLIP;
+            return new LoadedCurve(0, 0, tyre.shapeFactor(), tyre.curvatureFactor(), MAX_SLIP);
         }
         double stiffnessFactor = corneringStiffness(load) / (tyre.shapeFactor() * peak);
-        return Math.min(MAX_SLIP, peakSlipTimesB / stiffnessFactor);
+        return new LoadedCurve(peak, stiffnessFactor, tyre.shapeFactor(), tyre.curvatureFactor(),
+                Math.min(MAX_SLIP, peakSlipTimesB / stiffnessFactor));
+    }
+
+    /**
+     * The tyre's lateral force curve at one vertical load (Magic Formula, model.md 8).
+     *
+     * @param peak            D = mu F_z (N); zero for an unloaded tyre, which gives no force
+     * @param stiffnessFactor B (1/rad)
+     * @param shape           C
+     * @param curvature       E
+     * @param peakSlipAngle   the slip angle of the peak (rad), at most {@link #MAX_SLIP}
+     */
+    public record LoadedCurve(double peak, double stiffnessFactor, double shape, double curvature,
+                              double peakSlipAngle) {
+        /** @return F_y = D sin(C atan(B alpha - E (B alpha - atan(B alpha)))) (N) */
+        public double lateralForce(double slipAngle) {
+            if (peak <= 0) {
+                return 0;
+            }
+            double x = stiffnessFactor * slipAngle;
+            return peak * Math.sin(shape * Math.atan(x - curvature * (x - Math.atan(x))));
+        }
     }
 }

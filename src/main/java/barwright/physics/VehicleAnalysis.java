@@ -25,8 +25,8 @@ public final class VehicleAnalysis {
     public static AnalysisResult analyse(Vehicle vehicle) {
         MassProperties masses = MassProperties.of(vehicle);
         MassProperties.StaticWheelLoads loads = masses.staticLoads();
-        double frontCornerSprung = cornerSprungMass(vehicle.front(), AxlePosition.FRONT, loads.frontAxle());
-        double rearCornerSprung = cornerSprungMass(vehicle.rear(), AxlePosition.REAR, loads.rearAxle());
+        double frontCornerSprung = AxleStiffness.cornerSprungMass(vehicle.front(), AxlePosition.FRONT, loads.frontAxle());
+        double rearCornerSprung = AxleStiffness.cornerSprungMass(vehicle.rear(), AxlePosition.REAR, loads.rearAxle());
         BarResult frontBar = barResult(vehicle.front(), vehicle);
         BarResult rearBar = barResult(vehicle.rear(), vehicle);
         AxleStiffness frontStiffness = AxleStiffness.of(vehicle.front(), frontBar, frontCornerSprung);
@@ -38,9 +38,9 @@ public final class VehicleAnalysis {
         RollResponse roll = RollResponse.of(masses, frontRoll, rearRoll, chassis);
         RollResponse suspensionRoll = RollResponse.of(masses, frontStiffness.suspensionRollStiffness(),
                 rearStiffness.suspensionRollStiffness(), chassis);
-        LoadTransferParts frontParts = transferParts(vehicle.front(), masses.frontSprungMass(), frontRoll,
+        LoadTransferParts frontParts = LoadTransferParts.of(vehicle.front(), masses.frontSprungMass(), frontRoll,
                 roll.frontRollPerAccel());
-        LoadTransferParts rearParts = transferParts(vehicle.rear(), masses.rearSprungMass(), rearRoll,
+        LoadTransferParts rearParts = LoadTransferParts.of(vehicle.rear(), masses.rearSprungMass(), rearRoll,
                 roll.rearRollPerAccel());
         double frontTransfer = frontParts.total();
         double rearTransfer = rearParts.total();
@@ -58,8 +58,14 @@ public final class VehicleAnalysis {
             SteadyCornering cornering = new SteadyCornering(direction, masses, vehicle.cgHeight(),
                     vehicle.front().track(), vehicle.rear().track(), frontTransfer, rearTransfer, roll,
                     frontRoll, rearRoll, chassis);
-            turns[direction.ordinal()] = TurnAnalysis.analyse(cornering, masses.mass(), masses.frontMassFraction(),
-                    frontGrip, rearGrip, HANDLING_CURVE_POINTS);
+            if (direction == TurnDirection.RIGHT && loads.symmetric()) {
+                // the same on both sides, the car turns right exactly as it turns left: the limits and the
+                // handling curve are the left turn's, number for number (half the work of an analysis)
+                turns[direction.ordinal()] = turns[TurnDirection.LEFT.ordinal()].withCornering(cornering);
+            } else {
+                turns[direction.ordinal()] = TurnAnalysis.analyse(cornering, masses.mass(),
+                        masses.frontMassFraction(), frontGrip, rearGrip, HANDLING_CURVE_POINTS);
+            }
         }
         AxleResult front = new AxleResult(frontStiffness, frontBar, frontParts, frontCornering, frontCornerSprung);
         AxleResult rear = new AxleResult(rearStiffness, rearBar, rearParts, rearCornering, rearCornerSprung);
@@ -71,26 +77,25 @@ public final class VehicleAnalysis {
                 understeer, turns[0], turns[1], Warnings.of(withoutWarnings));
     }
 
+    /**
+     * The steady turn of an analysed car with a steady longitudinal acceleration as well (model.md 7): the
+     * static wheel loads shifted by m a_x h / l from the front axle to the rear, then the lateral calculation of
+     * the analysis. With a_x = 0 it is the analysis's own turn.
+     *
+     * @param longitudinalAcceleration a_x, forward positive (m/s^2)
+     */
+    public static SteadyCornering cornering(AnalysisResult result, TurnDirection direction,
+                                            double longitudinalAcceleration) {
+        Vehicle vehicle = result.vehicle();
+        MassProperties shifted = result.masses().withLongitudinalAcceleration(longitudinalAcceleration,
+                vehicle.cgHeight());
+        return new SteadyCornering(direction, shifted, vehicle.cgHeight(), vehicle.front().track(),
+                vehicle.rear().track(), result.front().loadTransfer().total(), result.rear().loadTransfer().total(),
+                result.roll(), result.front().stiffness().rollStiffness(), result.rear().stiffness().rollStiffness(),
+                vehicle.chassisTorsionalStiffness());
+    }
+
     private static BarResult barResult(Axle axle, Vehicle vehicle) {
         return axle.hasBar() ? BarAnalysis.analyse(axle.bar(), vehicle.differentialWheelTravel()) : null;
-    }
-
-    /** @return half of (static axle load / g - unsprung axle mass) (kg), model.md 3 */
-    private static double cornerSprungMass(Axle axle, AxlePosition position, double axleLoad) {
-        double cornerSprungMass = (axleLoad / STANDARD_GRAVITY - axle.unsprungMass()) / 2;
-        if (!(cornerSprungMass > 0)) {
-            throw new ImpossibleVehicleException(String.format(
-                    "The %s unsprung mass %.1f kg is not less than the static mass on the %s axle %.1f kg.",
-                    position.key(), axle.unsprungMass(), position.key(), axleLoad / STANDARD_GRAVITY));
-        }
-        return cornerSprungMass;
-    }
-
-    /** Load transfer per a_y in three parts: unsprung, geometric, elastic (model.md 5). */
-    private static LoadTransferParts transferParts(Axle axle, double axleSprungMass, double rollStiffness,
-                                                   double axleRollPerAccel) {
-        double track = axle.track();
-        return new LoadTransferParts(axle.unsprungMass() * axle.unsprungCgHeight() / track,
-                axleSprungMass * axle.rollCentreHeight() / track, rollStiffness * axleRollPerAccel / track);
     }
 }

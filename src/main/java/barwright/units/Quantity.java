@@ -38,6 +38,13 @@ public enum Quantity {
     CORNERING_STIFFNESS(new DisplayUnit("N/deg", 1 / RADIANS_PER_DEGREE),
             new DisplayUnit("lbf/deg", NEWTONS_PER_POUND_FORCE / RADIANS_PER_DEGREE)),
     FREQUENCY(new DisplayUnit("Hz", 1), new DisplayUnit("Hz", 1)),
+    /** Cross-section area (SI base: m^2). */
+    AREA(new DisplayUnit("mm²", 1e-6), new DisplayUnit("in²", METRES_PER_INCH * METRES_PER_INCH)),
+    /** Second moment of area of a section, polar or about a diameter (SI base: m^4). */
+    SECOND_MOMENT_OF_AREA(new DisplayUnit("mm⁴", 1e-12),
+            new DisplayUnit("in⁴", METRES_PER_INCH * METRES_PER_INCH * METRES_PER_INCH * METRES_PER_INCH)),
+    /** A share of a whole, shown in percent in both systems (SI base: a fraction, 1 = 100 %). */
+    SHARE(new DisplayUnit("%", 0.01), new DisplayUnit("%", 0.01)),
     /** A plain number: fractions, ratios, friction, factors. */
     RATIO(new DisplayUnit("", 1), new DisplayUnit("", 1));
 

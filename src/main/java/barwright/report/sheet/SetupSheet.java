@@ -1,0 +1,272 @@
+package barwright.report.sheet;
+
+import barwright.model.AxlePosition;
+import barwright.model.TurnDirection;
+import barwright.physics.AnalysisResult;
+import barwright.physics.AxleResult;
+import barwright.physics.TurnResult;
+import barwright.physics.Warning;
+import barwright.report.Cautions;
+import barwright.sizing.compare.Chart;
+import barwright.sizing.compare.Comparison;
+import barwright.sizing.compare.Configuration;
+import barwright.sizing.map.AdjustmentMap;
+import barwright.sizing.preload.LinkPreload;
+import barwright.units.Figures;
+import barwright.units.Quantity;
+import barwright.units.UnitSystem;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDPage;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.apache.pdfbox.pdmodel.common.PDRectangle;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
+
+/**
+ * The setup sheet to take to the track, as PDF (Apache PDFBox): the car, both bars drawn to scale, the key
+ * figures, the adjustment map, the main charts, the date and the cautions. Charts and drawings are vector
+ * lines; the text uses the standard Helvetica fonts, so the sheet needs no font files.
+ */
+public final class SetupSheet {
+    /*
+     * PDFBox reports through commons-logging (java.util.logging here) that it maps the standard Helvetica onto
+     * a system font and builds a font cache: notes for its developers, noise for a person printing a sheet.
+     * Held in a field so the setting is not lost when the logger is collected.
+     */
+    private static final java.util.logging.Logger PDFBOX_LOG = quietPdfBox();
+    private static final float MARGIN = 40;
+    private static final float PAGE_WIDTH = PDRectangle.A4.getWidth();
+    private static final float PAGE_HEIGHT = PDRectangle.A4.getHeight();
+    private static final float CONTENT_WIDTH = PAGE_WIDTH - 2 * MARGIN;
+
+    private final SheetContent content;
+    private final PDDocument document = new PDDocument();
+    private PDPageContentStream stream;
+    private PdfCanvas canvas;
+    private float y;
+    private int pageNumber;
+
+    private SetupSheet(SheetContent content) {
+        this.content = content;
+    }
+
+    /** @return the usual content for a car: its map, and the charts of its analysis */
+    public static SheetContent contentFor(AnalysisResult result, LocalDate date, UnitSystem units) {
+        AdjustmentMap map = AdjustmentMap.of(result.vehicle());
+        List<Chart> charts = Comparison.charts(List.of(new Configuration(result.vehicle().name(), result.vehicle())),
+                List.of(result));
+        return new SheetContent(result, map, result.masses().frontMassFraction() + SheetContent.RULE_OF_THUMB_OFFSET,
+                charts, date, units);
+    }
+
+    /** @return the sheet as PDF bytes */
+    public static byte[] toPdf(SheetContent content) throws IOException {
+        SetupSheet sheet = new SetupSheet(content);
+        try (PDDocument pdf = sheet.document) {
+            sheet.write();
+            ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+            pdf.save(bytes);
+            return bytes.toByteArray();
+        }
+    }
+
+    /** Writes the sheet to a file atomically: a temporary file beside it, then moved into place. */
+    public static void save(SheetContent content, Path target) throws IOException {
+        byte[] pdf = toPdf(content);
+        Path absolute = target.toAbsolutePath();
+        Path temporary = Files.createTempFile(absolute.getParent(), "." + absolute.getFileName(), ".tmp");
+        try {
+            Files.write(temporary, pdf);
+            Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } finally {
+            Files.deleteIfExists(temporary);
+        }
+    }
+
+    private void write() throws IOException {
+        AnalysisResult result = content.result();
+        document.getDocumentInformation().setTitle("Barwright setup sheet: " + result.vehicle().name());
+        document.getDocumentInformation().setCreator("Barwright");
+        newPage();
+        carBlock(result);
+        figuresTable(result);
+        bars(result);
+        warnings(result);
+        y = canvas.paragraph(Cautions.SHORT, MARGIN, Math.min(y - 6, MARGIN + 60), CONTENT_WIDTH, PdfCanvas.BOLD, 7.5f);
+
+        newPage();
+        heading("Adjustment map: every front hole against every rear hole");
+        float used = MapDrawing.draw(canvas, content.map(), content.referenceShare(), content.units(), MARGIN, y,
+                CONTENT_WIDTH);
+        y -= used + 12;
+        y = canvas.paragraph(String.format(Locale.ROOT, "Tint: blue where the front share of load transfer is above "
+                        + "%.1f %%, amber where below (pale: near it). The reference is the static front weight plus 5 "
+                        + "points, a rule of thumb for a slight understeer, unless a target was given. Red frame: an inside "
+                        + "wheel lifts before the limit. Heavy frame: the current setting. Holes count from 1 (the first "
+                        + "arm length).", content.referenceShare() * 100), MARGIN, y, CONTENT_WIDTH,
+                PdfCanvas.REGULAR, 7);
+        y -= 8;
+        charts();
+        ensure(120);
+        heading("Cautions");
+        y = canvas.paragraph(Cautions.SHORT, MARGIN, y, CONTENT_WIDTH, PdfCanvas.REGULAR, 7.5f);
+        y = canvas.paragraph(Cautions.NOT_MODELLED, MARGIN, y - 3, CONTENT_WIDTH, PdfCanvas.REGULAR, 7.5f);
+        y = canvas.paragraph("Bar links: " + LinkPreload.ADVICE, MARGIN, y - 3, CONTENT_WIDTH, PdfCanvas.REGULAR, 7.5f);
+        stream.close();
+    }
+
+    private void carBlock(AnalysisResult result) throws IOException {
+        canvas.text("Barwright setup sheet", MARGIN, y, PdfCanvas.BOLD, 16);
+        canvas.textRight(content.date().toString(), PAGE_WIDTH - MARGIN, y, PdfCanvas.REGULAR, 10);
+        y -= 18;
+        canvas.text(result.vehicle().name(), MARGIN, y, PdfCanvas.BOLD, 11);
+        y -= 14;
+        canvas.text(String.format(Locale.ROOT, "Mass %s, static front weight %.1f %%, CG height %s, wheelbase %s; "
+                        + "bar check travel %s (left minus right wheel). Units: %s.",
+                f(result.masses().mass(), Quantity.MASS, 1), result.masses().frontMassFraction() * 100,
+                f(result.vehicle().cgHeight(), Quantity.LENGTH, 0), f(result.vehicle().wheelbase(), Quantity.LENGTH, 0),
+                f(result.vehicle().differentialWheelTravel(), Quantity.LENGTH, 0), content.units().label()),
+                MARGIN, y, PdfCanvas.REGULAR, 8);
+        y -= 16;
+    }
+
+    private void figuresTable(AnalysisResult result) throws IOException {
+        heading("Key figures");
+        row("front share of load transfer", percent(result.frontLoadTransferShare()), "", true);
+        row("front share of roll stiffness", percent(result.frontRollStiffnessShare()), "", true);
+        row("roll gradient", f(result.rollGradient(), Quantity.ROLL_GRADIENT, 2), "", true);
+        row("understeer gradient", f(result.understeerGradient(), Quantity.ROLL_GRADIENT, 2), "", true);
+        for (TurnDirection direction : TurnDirection.values()) {
+            TurnResult turn = result.turn(direction);
+            row("limit, " + direction.word() + " turn", f(turn.limit(), Quantity.ACCELERATION, 2) + " "
+                    + turn.balance().key(), "", true);
+            row("inside wheel lifts (front / rear), " + direction.word() + " turn", lift(turn.frontInsideLift())
+                    + " / " + lift(turn.rearInsideLift()), "", true);
+        }
+        y -= 4;
+        row("", "front", "rear", false);
+        axleRow("roll stiffness", a -> f(a.stiffness().rollStiffness(), Quantity.ROLL_STIFFNESS, 0));
+        axleRow("bar roll stiffness", a -> a.bar() == null ? "no bar" : f(a.stiffness().barRollStiffness(),
+                Quantity.ROLL_STIFFNESS, 0));
+        axleRow("spring roll stiffness", a -> f(a.stiffness().springRollStiffness(), Quantity.ROLL_STIFFNESS, 0));
+        axleRow("load transfer per g", a -> f(a.loadTransfer().total(), Quantity.FORCE_PER_G, 0));
+        axleRow("bar link rate", a -> a.bar() == null ? "-" : f(a.bar().linkRate(), Quantity.LINEAR_RATE, 1));
+        axleRow("bar mass", a -> a.bar() == null ? "-" : f(a.bar().mass(), Quantity.MASS, 2));
+        axleRow("bar largest stress at check travel", a -> a.bar() == null ? "-"
+                : f(a.bar().maxVonMisesStress(), Quantity.STRESS, 0));
+        axleRow("bar safety factor (static, yield)", a -> a.bar() == null ? "-"
+                : String.format(Locale.ROOT, "%.2f", a.bar().safetyFactor()));
+        axleRow("ride frequency", a -> f(a.stiffness().rideFrequency(), Quantity.FREQUENCY, 2));
+        y -= 8;
+    }
+
+    private void bars(AnalysisResult result) throws IOException {
+        heading("Bars, seen from above (to scale; filled circle: the hole in use)");
+        float boxWidth = (CONTENT_WIDTH - 20) / 2;
+        float boxHeight = 170;
+        for (AxlePosition axle : AxlePosition.values()) {
+            float x = MARGIN + (axle == AxlePosition.FRONT ? 0 : boxWidth + 20);
+            BarDrawing.draw(canvas, axle == AxlePosition.FRONT ? "Front bar" : "Rear bar",
+                    result.vehicle().axle(axle).bar(), content.units(), x, y - boxHeight, boxWidth, boxHeight);
+        }
+        y -= boxHeight + 10;
+    }
+
+    private void warnings(AnalysisResult result) throws IOException {
+        heading("Warnings");
+        if (result.warnings().isEmpty()) {
+            y = canvas.paragraph("none", MARGIN, y, CONTENT_WIDTH, PdfCanvas.REGULAR, 8);
+        }
+        for (Warning warning : result.warnings()) {
+            y = canvas.paragraph("! " + warning.message(), MARGIN, y, CONTENT_WIDTH, PdfCanvas.REGULAR, 8);
+        }
+        y -= 6;
+    }
+
+    private void charts() throws IOException {
+        float width = (CONTENT_WIDTH - 20) / 2;
+        float height = 175;
+        List<Chart> charts = content.charts();
+        for (int i = 0; i < charts.size(); i += 2) {
+            ensure(height + 10);
+            for (int j = i; j < Math.min(i + 2, charts.size()); j++) {
+                ChartDrawing.draw(canvas, charts.get(j), content.units(), MARGIN + (j - i) * (width + 20), y - height,
+                        width, height);
+            }
+            y -= height + 14;
+        }
+    }
+
+    private void heading(String text) throws IOException {
+        ensure(30);
+        canvas.black();
+        canvas.text(text, MARGIN, y, PdfCanvas.BOLD, 10);
+        y -= 14;
+    }
+
+    private void row(String label, String first, String second, boolean wide) throws IOException {
+        canvas.text(label, MARGIN, y, PdfCanvas.REGULAR, 8);
+        if (wide) {
+            canvas.text(first, MARGIN + 230, y, PdfCanvas.REGULAR, 8);
+        } else {
+            canvas.textRight(first, MARGIN + 330, y, PdfCanvas.BOLD, 8);
+            canvas.textRight(second, MARGIN + 440, y, PdfCanvas.BOLD, 8);
+        }
+        y -= 11;
+    }
+
+    private void axleRow(String label, Function<AxleResult, String> figure) throws IOException {
+        canvas.text(label, MARGIN, y, PdfCanvas.REGULAR, 8);
+        canvas.textRight(figure.apply(content.result().front()), MARGIN + 330, y, PdfCanvas.REGULAR, 8);
+        canvas.textRight(figure.apply(content.result().rear()), MARGIN + 440, y, PdfCanvas.REGULAR, 8);
+        y -= 11;
+    }
+
+    private void ensure(float height) throws IOException {
+        if (y - height < MARGIN + 20) {
+            newPage();
+        }
+    }
+
+    private void newPage() throws IOException {
+        if (stream != null) {
+            stream.close();
+        }
+        PDPage page = new PDPage(PDRectangle.A4);
+        document.addPage(page);
+        stream = new PDPageContentStream(document, page);
+        canvas = new PdfCanvas(stream);
+        pageNumber++;
+        canvas.black();
+        canvas.text("Barwright setup sheet, " + content.result().vehicle().name() + ", " + content.date()
+                + ", page " + pageNumber, MARGIN, MARGIN - 16, PdfCanvas.REGULAR, 7);
+        y = PAGE_HEIGHT - MARGIN;
+    }
+
+    private String f(double si, Quantity quantity, int decimals) {
+        return Figures.format(si, quantity, content.units(), decimals);
+    }
+
+    private String lift(double accel) {
+        return accel <= 3 * barwright.units.Constants.STANDARD_GRAVITY
+                ? f(accel, Quantity.ACCELERATION, 2) : "stays down";
+    }
+
+    private static String percent(double share) {
+        return String.format(Locale.ROOT, "%.1f %%", share * 100);
+    }
+
+    private static java.util.logging.Logger quietPdfBox() {
+        java.util.logging.Logger logger = java.util.logging.Logger.getLogger("org.apache.pdfbox");
+        logger.setLevel(java.util.logging.Level.SEVERE);
+        return logger;
+    }
+}

@@ -1,0 +1,123 @@
+package barwright.report.work;
+
+import barwright.model.Axle;
+import barwright.model.AxlePosition;
+import barwright.physics.AnalysisResult;
+import barwright.physics.LoadTransferParts;
+import barwright.physics.MassProperties;
+import barwright.units.Quantity;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import static barwright.units.Constants.STANDARD_GRAVITY;
+
+/** The working of the roll gradient, the front share of load transfer and the understeer gradient. */
+final class BalanceWork {
+    private static final String ROLL_SOURCE = "model.md section 5: Milliken & Milliken, Race Car Vehicle Dynamics, "
+            + "ch. 18; Gillespie, Fundamentals of Vehicle Dynamics, ch. 8";
+    private static final String FLEXIBLE_SOURCE = ROLL_SOURCE + "; flexible chassis model.md section 6: Deakin et "
+            + "al., SAE 2000-01-3554; Milliken & Milliken ch. 16";
+
+    private BalanceWork() {
+    }
+
+    static Derivation rollGradient(AnalysisResult result) {
+        MassProperties masses = result.masses();
+        double front = result.front().stiffness().rollStiffness();
+        double rear = result.rear().stiffness().rollStiffness();
+        List<WorkValue> inputs = new ArrayList<>(List.of(
+                new WorkValue("m_s", "sprung mass", masses.sprungMass(), Quantity.MASS),
+                new WorkValue("h'", "roll arm: sprung centre of mass above the roll axis", masses.rollArm(),
+                        Quantity.LENGTH),
+                new WorkValue("K_f", "front roll stiffness (springs, bar, tyres)", front, Quantity.ROLL_STIFFNESS),
+                new WorkValue("K_r", "rear roll stiffness (springs, bar, tyres)", rear, Quantity.ROLL_STIFFNESS)));
+        List<Step> steps = new ArrayList<>();
+        steps.add(new Step("m_s g h'  (the roll moment of the body's own weight, per radian of roll)",
+                new WorkValue("m_s g h'", "gravity's roll moment per radian", masses.gravityRollMoment(),
+                        Quantity.ROLL_STIFFNESS)));
+        WorkValue gradient = new WorkValue("φ/a_y", "body roll per g", result.rollGradient(), Quantity.ROLL_GRADIENT);
+        String note = "Per g of lateral acceleration (g = 9.80665 m/s²). Without the tyres (springs and bars "
+                + "only) the same formula gives " + "the suspension roll gradient.";
+        Double chassis = result.vehicle().chassisTorsionalStiffness();
+        if (chassis == null) {
+            return new Derivation("Roll gradient", "φ / a_y = m_s h' / (K_f + K_r − m_s g h')", inputs, steps,
+                    gradient, ROLL_SOURCE, note);
+        }
+        inputs.add(new WorkValue("K_c", "body twist stiffness between the axles", chassis, Quantity.ROLL_STIFFNESS));
+        inputs.add(new WorkValue("m_sf", "sprung mass carried at the front", masses.frontSprungMass(), Quantity.MASS));
+        inputs.add(new WorkValue("m_sr", "sprung mass carried at the rear", masses.rearSprungMass(), Quantity.MASS));
+        steps.add(new Step("(K_f + K_c − m_sf g h') φ_f − K_c φ_r = m_sf h' a_y, and the same at the rear",
+                new WorkValue("φ_f/a_y", "front body end's roll per g", result.roll().frontRollPerAccel(),
+                        Quantity.ROLL_GRADIENT)));
+        steps.add(new Step("solved together with the front equation",
+                new WorkValue("φ_r/a_y", "rear body end's roll per g", result.roll().rearRollPerAccel(),
+                        Quantity.ROLL_GRADIENT)));
+        return new Derivation("Roll gradient (flexible body)", "φ = (m_sf φ_f + m_sr φ_r) / m_s", inputs, steps,
+                gradient, FLEXIBLE_SOURCE, note);
+    }
+
+    static Derivation frontShare(AnalysisResult result) {
+        List<WorkValue> inputs = new ArrayList<>();
+        List<Step> steps = new ArrayList<>();
+        for (AxlePosition position : AxlePosition.values()) {
+            String s = position == AxlePosition.FRONT ? "f" : "r";
+            String word = position.key();
+            Axle axle = result.vehicle().axle(position);
+            double sprung = position == AxlePosition.FRONT ? result.masses().frontSprungMass()
+                    : result.masses().rearSprungMass();
+            double roll = position == AxlePosition.FRONT ? result.roll().frontRollPerAccel()
+                    : result.roll().rearRollPerAccel();
+            inputs.add(new WorkValue("m_u" + s, word + " unsprung mass", axle.unsprungMass(), Quantity.MASS));
+            inputs.add(new WorkValue("h_u" + s, word + " unsprung centre height", axle.unsprungCgHeight(), Quantity.LENGTH));
+            inputs.add(new WorkValue("m_s" + s, "sprung mass carried at the " + word, sprung, Quantity.MASS));
+            inputs.add(new WorkValue("z_" + s, word + " roll centre height", axle.rollCentreHeight(), Quantity.LENGTH));
+            inputs.add(new WorkValue("K_" + s, word + " roll stiffness", result.axle(position).stiffness().rollStiffness(),
+                    Quantity.ROLL_STIFFNESS));
+            inputs.add(new WorkValue("t_" + s, word + " track", axle.track(), Quantity.LENGTH));
+            inputs.add(new WorkValue("φ_" + s + "/a_y", "body roll at the " + word + " per g", roll,
+                    Quantity.ROLL_GRADIENT));
+            LoadTransferParts parts = result.axle(position).loadTransfer();
+            steps.add(new Step("m_u" + s + " h_u" + s + " / t_" + s, new WorkValue("ΔF_u" + s,
+                    word + " unsprung part", parts.unsprung(), Quantity.FORCE_PER_G)));
+            steps.add(new Step("m_s" + s + " z_" + s + " / t_" + s, new WorkValue("ΔF_g" + s,
+                    word + " geometric part (through the roll centre)", parts.geometric(), Quantity.FORCE_PER_G)));
+            steps.add(new Step("K_" + s + " φ_" + s + " / t_" + s, new WorkValue("ΔF_e" + s,
+                    word + " elastic part (through springs, bar, tyres)", parts.elastic(), Quantity.FORCE_PER_G)));
+            steps.add(new Step("ΔF_" + s + " = ΔF_u" + s + " + ΔF_g" + s + " + ΔF_e" + s, new WorkValue("ΔF_" + s,
+                    word + " load transfer", parts.total(), Quantity.FORCE_PER_G)));
+        }
+        return new Derivation("Front share of lateral load transfer", "share = ΔF_f / (ΔF_f + ΔF_r)", inputs, steps,
+                new WorkValue("share", "front share of the load transfer", result.frontLoadTransferShare(),
+                        Quantity.SHARE),
+                ROLL_SOURCE,
+                "Each load transfer is the outside wheel's gain per g (the inside wheel's loss), before any wheel "
+                        + "lifts. Compare the share with the static front weight, "
+                        + String.format(java.util.Locale.ROOT, "%.1f %%", result.masses().frontMassFraction() * 100)
+                        + ": a front share above it loads the front tyres harder in a corner and leans the car "
+                        + "toward understeer; below it, toward oversteer.");
+    }
+
+    static Derivation understeer(AnalysisResult result) {
+        MassProperties.StaticWheelLoads loads = result.masses().staticLoads();
+        double frontStiffness = result.front().corneringStiffness();
+        double rearStiffness = result.rear().corneringStiffness();
+        return new Derivation("Understeer gradient", "K_us = W_f / C_f − W_r / C_r   (per g)",
+                List.of(new WorkValue("W_f", "static load on the front axle", loads.frontAxle(), Quantity.FORCE),
+                        new WorkValue("C_f", "cornering stiffness of both front tyres at static load",
+                                frontStiffness, Quantity.CORNERING_STIFFNESS),
+                        new WorkValue("W_r", "static load on the rear axle", loads.rearAxle(), Quantity.FORCE),
+                        new WorkValue("C_r", "cornering stiffness of both rear tyres at static load",
+                                rearStiffness, Quantity.CORNERING_STIFFNESS)),
+                List.of(new Step("α_f = W_f / C_f", new WorkValue("α_f", "front slip angle at 1 g, linear",
+                                loads.frontAxle() / frontStiffness, Quantity.ANGLE)),
+                        new Step("α_r = W_r / C_r", new WorkValue("α_r", "rear slip angle at 1 g, linear",
+                                loads.rearAxle() / rearStiffness, Quantity.ANGLE))),
+                new WorkValue("K_us", "understeer gradient", result.understeerGradient(), Quantity.ROLL_GRADIENT),
+                "model.md section 8: Gillespie, Fundamentals of Vehicle Dynamics, ch. 6; SAE J670 defines the term",
+                "Positive is understeer: the front tyres need more slip angle than the rear for the same g, so "
+                        + "the driver adds steering as the corner tightens. The cornering stiffnesses include the "
+                        + "tyres' load sensitivity at the static loads. Per g: g = "
+                        + STANDARD_GRAVITY + " m/s².");
+    }
+}

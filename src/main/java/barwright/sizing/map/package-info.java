@@ -1,0 +1,2 @@
+/** The adjustment map: every front arm hole against every rear one, for the car's bars or candidate bars. */
+package barwright.sizing.map;

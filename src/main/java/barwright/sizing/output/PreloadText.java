@@ -1,0 +1,46 @@
+package barwright.sizing.output;
+
+import barwright.sizing.preload.CornerLoads;
+import barwright.sizing.preload.LinkPreload;
+import barwright.sizing.preload.PreloadResult;
+import barwright.units.Constants;
+import barwright.units.Quantity;
+import barwright.units.UnitSystem;
+
+import java.util.Locale;
+
+/** Link preload as the command line prints it. */
+public final class PreloadText {
+    private PreloadText() {
+    }
+
+    public static String of(PreloadResult result, UnitSystem units) {
+        StringBuilder out = new StringBuilder();
+        out.append(result.inWords()).append("\n\n");
+        double perMm = result.lockedMomentPerLength() * 1e-3;
+        out.append(units == UnitSystem.US
+                ? String.format(Locale.ROOT, "Locked roll moment: %.2f lbf·ft per mm of link length%n",
+                perMm / (Constants.NEWTONS_PER_POUND_FORCE * Constants.METRES_PER_FOOT))
+                : String.format(Locale.ROOT, "Locked roll moment: %.1f N·m per mm of link length%n", perMm));
+        TextTable table = new TextTable("wheel", "static load", "change per mm",
+                String.format(Locale.ROOT, "with the link %+.1f mm", result.linkChange() * 1e3));
+        CornerLoads change = result.changePerLength().times(1e-3);
+        row(table, "left front", result.staticLoads().leftFront(), change.leftFront(), result.loads().leftFront(), units);
+        row(table, "right front", result.staticLoads().rightFront(), change.rightFront(), result.loads().rightFront(),
+                units);
+        row(table, "left rear", result.staticLoads().leftRear(), change.leftRear(), result.loads().leftRear(), units);
+        row(table, "right rear", result.staticLoads().rightRear(), change.rightRear(), result.loads().rightRear(), units);
+        out.append(table.render());
+        out.append(String.format(Locale.ROOT, "Cross weight (left front + right rear): %.2f %% -> %.2f %% (%+.3f "
+                        + "percentage points per mm)%n%n", result.staticLoads().crossWeight() * 100,
+                result.loads().crossWeight() * 100, result.crossWeightChangePerLength() * 1e-1));
+        out.append(LinkPreload.ADVICE).append('\n');
+        return out.toString();
+    }
+
+    private static void row(TextTable table, String wheel, double load, double change, double after, UnitSystem units) {
+        table.add(wheel, TextTable.figure(load, Quantity.FORCE, units, 0),
+                (change >= 0 ? "+" : "") + TextTable.figure(change, Quantity.FORCE, units, 1),
+                TextTable.figure(after, Quantity.FORCE, units, 0));
+    }
+}

@@ -1,0 +1,81 @@
+package barwright.sizing.output;
+
+import barwright.sizing.DiameterSweep;
+import barwright.sizing.SetupFigures;
+import barwright.sizing.compare.Chart;
+import barwright.sizing.compare.Series;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+
+/** CSV of sweeps: figures against solid bar diameter, and a chart's lines against their abscissa. */
+public final class SweepOutput {
+    public static final List<String> DIAMETER_COLUMNS = List.of("diameterMm", "frontLoadTransferShare",
+            "rollGradientDegPerG", "limitG", "limitBalance", "frontInsideLiftG", "rearInsideLiftG", "barMassKg",
+            "barSafetyFactor", "barRollStiffnessNmPerDeg");
+
+    private SweepOutput() {
+    }
+
+    /**
+     * @param points a diameter sweep of one axle's bar
+     * @param axleIsFront which axle's bar was swept
+     */
+    public static void diameterCsv(List<DiameterSweep.Point> points, boolean axleIsFront, Appendable out)
+            throws IOException {
+        try (CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder()
+                .setHeader(DIAMETER_COLUMNS.toArray(String[]::new)).get())) {
+            for (DiameterSweep.Point point : points) {
+                List<Object> row = new ArrayList<>();
+                row.add(point.diameter() * 1e3);
+                SetupFigures figures = point.figures();
+                if (figures == null) {
+                    for (int i = 1; i < DIAMETER_COLUMNS.size(); i++) {
+                        row.add("");
+                    }
+                } else {
+                    var bar = axleIsFront ? figures.frontBar() : figures.rearBar();
+                    row.add(figures.frontLoadTransferShare());
+                    row.add(Json.degPerG(figures.rollGradient()));
+                    row.add(Json.inG(figures.limit()));
+                    row.add(figures.balance().key());
+                    row.add(MapOutput.orEmpty(Json.liftInG(figures.frontInsideLift())));
+                    row.add(MapOutput.orEmpty(Json.liftInG(figures.rearInsideLift())));
+                    row.add(bar.mass());
+                    row.add(bar.safetyFactor());
+                    row.add(Json.nmPerDeg(bar.rollStiffness()));
+                }
+                printer.printRecord(row);
+            }
+        }
+    }
+
+    /** The columns of {@link #chartsCsv}. */
+    public static final List<String> CHART_COLUMNS = List.of("chart", "series", "xName", "x", "xUnit", "yName", "y",
+            "yUnit");
+
+    /**
+     * Writes charts' lines as long-form CSV: one line per point, with the chart's title, the series name and
+     * each coordinate in the SI display unit named beside it (mm, g, deg, N...).
+     */
+    public static void chartsCsv(List<Chart> charts, Appendable out) throws IOException {
+        try (CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder()
+                .setHeader(CHART_COLUMNS.toArray(String[]::new)).get())) {
+            for (Chart chart : charts) {
+                var xUnit = chart.x().unit(barwright.units.UnitSystem.SI);
+                var yUnit = chart.y().unit(barwright.units.UnitSystem.SI);
+                for (Series series : chart.series()) {
+                    double[] x = series.x();
+                    double[] y = series.y();
+                    for (int i = 0; i < x.length; i++) {
+                        printer.printRecord(chart.title(), series.name(), chart.xLabel(), xUnit.fromSi(x[i]),
+                                xUnit.symbol(), chart.yLabel(), yUnit.fromSi(y[i]), yUnit.symbol());
+                    }
+                }
+            }
+        }
+    }
+}

@@ -1,0 +1,24 @@
+package barwright.ui.action;
+
+import java.nio.file.Path;
+
+/** The questions the commands ask a person; a test answers them without a window. */
+public interface Dialogs {
+    enum UnsavedChoice { SAVE, DISCARD, CANCEL }
+
+    /** @return the vehicle file to open, or null when the person cancels */
+    Path chooseFileToOpen();
+
+    /**
+     * @param suggested a file name to start from
+     * @param extension "json", "png" or "svg"
+     * @return where to save, or null when the person cancels
+     */
+    Path chooseFileToSave(String suggested, String extension);
+
+    /** @return what to do with unsaved changes to the named document */
+    UnsavedChoice askAboutUnsavedChanges(String documentName);
+
+    /** Tells the person something went wrong, and why. */
+    void showError(String title, String message);
+}

@@ -1,0 +1,254 @@
+package barwright.ui.app;
+
+import barwright.report.work.KeyFigure;
+import barwright.ui.action.Dialogs;
+import barwright.ui.action.FileCommands;
+import barwright.ui.action.RecentFiles;
+import barwright.ui.action.Settings;
+import barwright.ui.document.OpenDocument;
+import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.CautionNote;
+import barwright.ui.panel.FigureFormat;
+import barwright.ui.panel.FiguresPanel;
+import barwright.ui.panel.ResultsTabs;
+import barwright.ui.panel.StaleBanner;
+import barwright.ui.panel.VehicleEditor;
+import barwright.ui.panel.WarningsPanel;
+import barwright.ui.panel.WorkDialog;
+import barwright.ui.task.AnalysisController;
+import barwright.ui.task.CorneringProbe;
+import barwright.ui.task.ResultsModel;
+import barwright.units.UnitSystem;
+
+import javax.swing.JFrame;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.WindowConstants;
+import java.awt.BorderLayout;
+import java.awt.Dimension;
+import java.awt.Graphics;
+import java.awt.event.WindowAdapter;
+import java.awt.event.WindowEvent;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * The main window: the vehicle editor on the left, the charts and the car picture in the middle, the key
+ * figures on the right, the warnings under the charts. Event thread only.
+ */
+public final class MainWindow extends JFrame {
+    /** The key figures column's width at the system text size (pixels): room for "1417 N·m/deg" twice. */
+    static final int FIGURES_WIDTH = 390;
+    private final OpenDocument document;
+    private final Settings settings;
+    private final ViewSettings view;
+    private final ResultsModel results = new ResultsModel();
+    private final AnalysisController analysis;
+    private final CorneringProbe probe = new CorneringProbe();
+    private final FileCommands files;
+    private final FiguresPanel figures;
+    private final ResultsTabs tabs;
+    private final VehicleEditor editor;
+    private final List<Runnable> firstPaint = new ArrayList<>();
+    private final Runnable onClosed;
+    private boolean painted;
+
+    /**
+     * @param dialogs  how questions are asked; null for ordinary Swing dialogs
+     * @param onClosed run after the window closes (the program exits there)
+     */
+    public MainWindow(OpenDocument document, Settings settings, Dialogs dialogs, Runnable onClosed) {
+        super("Barwright");
+        this.document = document;
+        this.settings = settings;
+        this.onClosed = onClosed;
+        setName("barwright.main");
+        this.view = new ViewSettings(UnitSystem.parse(settings.get("units", "si")), Locale.getDefault(Locale.Category.FORMAT));
+        this.files = new FileCommands(document, dialogs != null ? dialogs : new SwingDialogs(this),
+                new RecentFiles(settings));
+        this.analysis = new AnalysisController(document, results);
+        FigureFormat format = new FigureFormat(view);
+        editor = new VehicleEditor(document, view);
+        figures = new FiguresPanel(results, format, this::showWork);
+        tabs = new ResultsTabs(results, probe, format, analysis, files::exportChart);
+        tabs.addTab("Lift, balance, chassis", new barwright.ui.insight.InsightPanel(results, view));
+        setContentPane(new PaintWatchingPanel());
+        layoutWindow();
+        Menus menus = new Menus(this);
+        setJMenuBar(menus.menuBar());
+        getContentPane().add(menus.toolBar(), BorderLayout.NORTH);
+        document.addListener(event -> updateTitle());
+        updateTitle();
+        setDefaultCloseOperation(WindowConstants.DO_NOTHING_ON_CLOSE);
+        addWindowListener(new WindowAdapter() {
+            @Override
+            public void windowClosing(WindowEvent event) {
+                close();
+            }
+        });
+        setMinimumSize(new Dimension(960, 640));
+        setSize(new Dimension(1280, 880));
+        analysis.refresh();
+    }
+
+    private void layoutWindow() {
+        JPanel centre = new JPanel(new BorderLayout());
+        centre.setPreferredSize(new Dimension(520, 500));
+        centre.setMinimumSize(new Dimension(360, 300));
+        centre.add(tabs, BorderLayout.CENTER);
+        JScrollPane warnings = new JScrollPane(new WarningsPanel(results));
+        warnings.setBorder(javax.swing.BorderFactory.createMatteBorder(1, 0, 0, 0,
+                javax.swing.UIManager.getColor("Component.borderColor")));
+        warnings.setPreferredSize(new Dimension(400, 78));
+        centre.add(warnings, BorderLayout.SOUTH);
+
+        JPanel right = new barwright.ui.panel.PagePanel(new BorderLayout());
+        right.add(figures, BorderLayout.NORTH);
+        results.addListener(right::revalidate);
+        right.add(new CautionNote(), BorderLayout.SOUTH);
+        JScrollPane rightScroll = new JScrollPane(right) {
+            @Override
+            public Dimension getPreferredSize() {
+                // as wide as the figures need at the current text size, never narrower than the column
+                int needed = right.getPreferredSize().width + getVerticalScrollBar().getPreferredSize().width + 6;
+                return new Dimension(Math.max(needed, FIGURES_WIDTH * textScale() / 100), 500);
+            }
+        };
+        rightScroll.setBorder(javax.swing.BorderFactory.createMatteBorder(0, 1, 0, 0,
+                javax.swing.UIManager.getColor("Component.borderColor")));
+        rightScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
+        rightScroll.getVerticalScrollBar().setUnitIncrement(16);
+        JPanel resultsSplit = new JPanel(new BorderLayout());
+        resultsSplit.add(centre, BorderLayout.CENTER);
+        resultsSplit.add(rightScroll, BorderLayout.EAST);
+        JPanel resultsArea = new JPanel(new BorderLayout());
+        resultsArea.add(new StaleBanner(results), BorderLayout.NORTH);
+        resultsArea.add(resultsSplit, BorderLayout.CENTER);
+
+        JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, editor, resultsArea);
+        main.setResizeWeight(0);
+        main.setDividerLocation(editor.getPreferredSize().width);
+        main.setBorder(null);
+        main.setName("main.split");
+        getContentPane().add(main, BorderLayout.CENTER);
+    }
+
+    private void showWork(KeyFigure figure) {
+        var shown = results.shown();
+        if (shown != null && shown.result() != null) {
+            WorkDialog.show(this, shown.result(), figure, view, results.isStale());
+        }
+    }
+
+    void updateTitle() {
+        String name = document.displayName();
+        setTitle(document.isDirty() ? name + " \u2022 unsaved changes \u2014 Barwright" : name + " \u2014 Barwright");
+        getRootPane().putClientProperty("Window.documentModified", document.isDirty());
+    }
+
+    /** Closes the window unless the person cancels at the unsaved-changes question. */
+    public void close() {
+        if (files.mayDiscard()) {
+            dispose();
+            onClosed.run();
+        }
+    }
+
+    /** Switches every field, figure, chart and export to the unit system, and remembers the choice. */
+    public void setUnits(UnitSystem units) {
+        settings.put("units", units.name().toLowerCase(Locale.ROOT));
+        view.setUnits(units);
+    }
+
+    /** Applies the theme and text size settings to this window. */
+    void applyLook() {
+        Themes.apply(theme(), textSize());
+        tabs.restyle();
+        repaint();
+    }
+
+    /** @return the text size as a percentage of the system's */
+    private int textScale() {
+        int size = textSize();
+        return size > 0 ? Math.max(100, size * 100 / Themes.systemTextSize()) : 100;
+    }
+
+    Themes.Theme theme() {
+        return "dark".equals(settings.get("theme", "light")) ? Themes.Theme.DARK : Themes.Theme.LIGHT;
+    }
+
+    int textSize() {
+        try {
+            return Integer.parseInt(settings.get("textSize", "0"));
+        } catch (NumberFormatException notANumber) {
+            return 0;
+        }
+    }
+
+    /** Runs once the window has first been painted (the start-up benchmark's mark). */
+    public void whenFirstPainted(Runnable action) {
+        if (painted) {
+            action.run();
+        } else {
+            firstPaint.add(action);
+        }
+    }
+
+    private final class PaintWatchingPanel extends JPanel {
+        PaintWatchingPanel() {
+            super(new BorderLayout());
+        }
+
+        @Override
+        public void paint(Graphics graphics) {
+            super.paint(graphics);
+            if (!painted) {
+                painted = true;
+                firstPaint.forEach(Runnable::run);
+                firstPaint.clear();
+            }
+        }
+    }
+
+    public OpenDocument document() {
+        return document;
+    }
+
+    public Settings settings() {
+        return settings;
+    }
+
+    public ViewSettings view() {
+        return view;
+    }
+
+    public ResultsModel results() {
+        return results;
+    }
+
+    public AnalysisController analysis() {
+        return analysis;
+    }
+
+    public FileCommands files() {
+        return files;
+    }
+
+    public FiguresPanel figures() {
+        return figures;
+    }
+
+    public ResultsTabs tabs() {
+        return tabs;
+    }
+
+    public VehicleEditor editor() {
+        return editor;
+    }
+
+    public CorneringProbe probe() {
+        return probe;
+    }
+}

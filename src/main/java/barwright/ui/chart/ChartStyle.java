@@ -1,0 +1,105 @@
+package barwright.ui.chart;
+
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.Axis;
+import org.jfree.chart.block.BlockBorder;
+import org.jfree.chart.plot.CategoryPlot;
+import org.jfree.chart.plot.Plot;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.title.LegendTitle;
+import org.jfree.chart.title.TextTitle;
+
+import javax.swing.UIManager;
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+
+/**
+ * Dresses a chart in the window's theme: its background, text colour and text size, so that charts follow
+ * light and dark themes and the text-size setting. Series colours come from the theme's properties too.
+ */
+public final class ChartStyle {
+    private ChartStyle() {
+    }
+
+    /** @return a series colour of the theme: 0 front outside, 1 front inside, 2 rear outside, 3 rear inside... */
+    public static Color series(int index) {
+        Color colour = UIManager.getColor("Barwright.chart.series" + index);
+        if (colour != null) {
+            return colour;
+        }
+        Color[] fallback = {new Color(0x1F6FB5), new Color(0x6FA8DC), new Color(0xC24E1A), new Color(0xE6A06F),
+                new Color(0x3C8D3C), new Color(0x7A4FB0)};
+        return fallback[index % fallback.length];
+    }
+
+    public static void apply(JFreeChart chart) {
+        Color background = colour("Panel.background", Color.WHITE);
+        Color text = colour("Label.foreground", Color.BLACK);
+        Color grid = colour("Barwright.chart.grid", new Color(0xCCCCCC));
+        Font base = UIManager.getFont("defaultFont") != null ? UIManager.getFont("defaultFont")
+                : UIManager.getFont("Label.font");
+        float size = base == null ? 13f : base.getSize2D();
+        chart.setBackgroundPaint(background);
+        chart.setAntiAlias(true);
+        TextTitle title = chart.getTitle();
+        if (title != null) {
+            title.setPaint(text);
+            title.setFont(new Font(Font.SANS_SERIF, Font.BOLD, Math.round(size * 1.1f)));
+        }
+        for (int i = 0; i < chart.getSubtitleCount(); i++) {
+            if (chart.getSubtitle(i) instanceof LegendTitle legend) {
+                legend.setBackgroundPaint(background);
+                legend.setItemPaint(text);
+                legend.setItemFont(new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size * 0.95f)));
+                legend.setFrame(BlockBorder.NONE);
+            } else if (chart.getSubtitle(i) instanceof TextTitle subtitle) {
+                subtitle.setPaint(text);
+                subtitle.setFont(new Font(Font.SANS_SERIF, Font.ITALIC, Math.round(size * 0.95f)));
+            }
+        }
+        Plot plot = chart.getPlot();
+        plot.setBackgroundPaint(colour("Barwright.chart.plotBackground", background));
+        plot.setOutlinePaint(grid);
+        Font axisFont = new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size));
+        Font tickFont = new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size * 0.9f));
+        if (plot instanceof XYPlot xy) {
+            xy.setDomainGridlinePaint(grid);
+            xy.setRangeGridlinePaint(grid);
+            xy.setDomainGridlineStroke(new BasicStroke(0.6f));
+            xy.setRangeGridlineStroke(new BasicStroke(0.6f));
+            for (int i = 0; i < xy.getDomainAxisCount(); i++) {
+                axis(xy.getDomainAxis(i), text, axisFont, tickFont);
+            }
+            for (int i = 0; i < xy.getRangeAxisCount(); i++) {
+                axis(xy.getRangeAxis(i), text, axisFont, tickFont);
+            }
+        } else if (plot instanceof CategoryPlot category) {
+            category.setRangeGridlinePaint(grid);
+            axis(category.getDomainAxis(), text, axisFont, tickFont);
+            axis(category.getRangeAxis(), text, axisFont, tickFont);
+        }
+    }
+
+    private static void axis(Axis axis, Color text, Font label, Font ticks) {
+        if (axis == null) {
+            return;
+        }
+        axis.setLabelPaint(text);
+        axis.setTickLabelPaint(text);
+        axis.setLabelFont(label);
+        axis.setTickLabelFont(ticks);
+        axis.setAxisLinePaint(text);
+        axis.setTickMarkPaint(text);
+    }
+
+    /** @return the text colour of the theme, for annotations */
+    public static Color text() {
+        return colour("Label.foreground", Color.BLACK);
+    }
+
+    private static Color colour(String key, Color fallback) {
+        Color colour = UIManager.getColor(key);
+        return colour != null ? colour : fallback;
+    }
+}

@@ -1,0 +1,125 @@
+package barwright.ui.insight;
+
+import barwright.insight.ChassisStudy;
+import barwright.insight.LiftEnvelope;
+import barwright.insight.LiftEnvelopeResult;
+import barwright.insight.Sensitivity;
+import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.Palette;
+import barwright.ui.task.AnalysisOutcome;
+import barwright.ui.task.ResultsModel;
+
+import javax.swing.BorderFactory;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JTabbedPane;
+import java.awt.BorderLayout;
+
+/**
+ * The setter's questions: one tab each for the lift envelope, the sensitivity and the chassis study. After every
+ * analysis the window accepts, the three are computed again off the event thread; the envelope keeps the one
+ * before as the previous setting. Event thread.
+ */
+public final class InsightPanel extends JPanel {
+    private final ResultsModel results;
+    private final EnvelopeView envelope;
+    private final SensitivityView sensitivity;
+    private final ChassisView chassis;
+    private final JLabel status = new JLabel(" ");
+    private final JTabbedPane tabs = new JTabbedPane();
+    private final LatestOnly<AnalysisOutcome, InsightResults> worker;
+    private AnalysisOutcome submitted;
+    private InsightResults current;
+
+    public InsightPanel(ResultsModel results, ViewSettings view) {
+        super(new BorderLayout());
+        setName("insight.panel");
+        this.results = results;
+        envelope = new EnvelopeView(view);
+        sensitivity = new SensitivityView(view);
+        chassis = new ChassisView(view);
+        tabs.setName("insight.tabs");
+        tabs.addTab("Where a wheel lifts", envelope);
+        tabs.setToolTipTextAt(0, "The lateral acceleration at which each inside wheel lifts, under braking and power");
+        tabs.addTab("What moves the balance", sensitivity);
+        tabs.setToolTipTextAt(1, "One small change of each setting, the car analysed again each time");
+        tabs.addTab("Chassis stiffness", chassis);
+        tabs.setToolTipTextAt(2, "How much of a bar change a flexible chassis lets reach the tyres");
+        status.setName("insight.status");
+        status.setBorder(BorderFactory.createEmptyBorder(2, 8, 2, 8));
+        status.setForeground(Palette.warning());
+        add(status, BorderLayout.NORTH);
+        add(tabs, BorderLayout.CENTER);
+        worker = new LatestOnly<>(InsightPanel::compute, this::arrived, this::failed);
+        results.addListener(this::resultsChanged);
+        view.addListener(this::redraw);
+        resultsChanged();
+    }
+
+    /** The work, off the event thread: the three views from one accepted analysis. */
+    static InsightResults compute(AnalysisOutcome outcome) {
+        return new InsightResults(outcome.vehicle(), LiftEnvelope.of(outcome.result()),
+                Sensitivity.of(outcome.vehicle(), outcome.result()),
+                ChassisStudy.of(outcome.vehicle(), outcome.result()).compute());
+    }
+
+    private void resultsChanged() {
+        AnalysisOutcome shown = results.shown();
+        status.setText(results.isStale() ? "Out of date: " + results.staleReason() : " ");
+        if (shown == null || !shown.succeeded() || shown == submitted) {
+            return;
+        }
+        submitted = shown;
+        worker.submit(shown);
+    }
+
+    private void arrived(InsightResults next) {
+        LiftEnvelopeResult previous = envelope.previous();
+        if (current != null && !current.vehicle().equals(next.vehicle())) {
+            previous = current.envelope();
+        }
+        current = next;
+        envelope.show(next.envelope(), previous);
+        sensitivity.show(next.sensitivity());
+        chassis.show(next.chassis());
+    }
+
+    private void failed(String message) {
+        status.setText("These views could not be computed for this car: " + message);
+    }
+
+    private void redraw() {
+        if (current != null) {
+            envelope.redraw();
+            sensitivity.show(current.sensitivity());
+            chassis.show(current.chassis());
+        }
+    }
+
+    /** @return true when no computation runs or waits and the views show the newest accepted analysis */
+    public boolean isSettled() {
+        return worker.isIdle() && current != null && submitted != null
+                && current.vehicle().equals(submitted.vehicle());
+    }
+
+    /** @return what the views show, or null before the first computation */
+    public InsightResults current() {
+        return current;
+    }
+
+    public JTabbedPane tabs() {
+        return tabs;
+    }
+
+    public EnvelopeView envelope() {
+        return envelope;
+    }
+
+    public SensitivityView sensitivity() {
+        return sensitivity;
+    }
+
+    public ChassisView chassis() {
+        return chassis;
+    }
+}

@@ -1,0 +1,220 @@
+package barwright.ui.insight;
+
+import barwright.insight.SensitivityResult;
+import barwright.insight.SensitivityRow;
+import barwright.insight.SensitivityText;
+import barwright.insight.Tendency;
+import barwright.ui.chart.ChartStyle;
+import barwright.ui.field.ViewSettings;
+import barwright.units.Figures;
+import barwright.units.Quantity;
+import org.jfree.chart.ChartFactory;
+import org.jfree.chart.ChartPanel;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
+import org.jfree.chart.plot.CategoryPlot;
+import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.renderer.category.BarRenderer;
+import org.jfree.chart.renderer.category.StandardBarPainter;
+import org.jfree.data.category.DefaultCategoryDataset;
+
+import javax.swing.BorderFactory;
+import javax.swing.JComboBox;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTable;
+import javax.swing.table.DefaultTableModel;
+import java.awt.BorderLayout;
+import java.awt.Color;
+import java.awt.FlowLayout;
+import java.awt.Paint;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * What moves the balance most: a bar per change of the figure chosen, coloured by the way it moves the balance,
+ * and a table of every figure with the step used. Event thread.
+ */
+public final class SensitivityView extends JPanel {
+    /** The figures the chart can show. */
+    enum Measure {
+        LIMIT_MARGIN("limit margin, front minus rear limit (g)"),
+        FRONT_SHARE("front share of load transfer (points of %)"),
+        ROLL_GRADIENT("roll gradient"),
+        INSIDE_LIFT("first inside lift (g)");
+
+        private final String words;
+
+        Measure(String words) {
+            this.words = words;
+        }
+    }
+
+    static final String[] COLUMNS = {"Change", "Step", "Front share", "Roll gradient", "Limit margin",
+        "First inside lift", "Balance"};
+    private final ViewSettings view;
+    private final DefaultCategoryDataset data = new DefaultCategoryDataset();
+    private final JFreeChart chart;
+    private final List<Tendency> tendencies = new ArrayList<>();
+    private final DefaultTableModel table = new DefaultTableModel(COLUMNS, 0) {
+        @Override
+        public boolean isCellEditable(int row, int column) {
+            return false;
+        }
+    };
+    private final JComboBox<String> measure = new JComboBox<>();
+    private final JLabel basis = new JLabel(" ");
+    private SensitivityResult shown;
+
+    SensitivityView(ViewSettings view) {
+        super(new BorderLayout());
+        this.view = view;
+        setName("insight.sensitivity");
+        chart = ChartFactory.createBarChart("What one small change does", "", "", data, PlotOrientation.HORIZONTAL,
+                true, true, false);
+        chart.getCategoryPlot().setRenderer(new TendencyRenderer());
+        ChartPanel panel = InsightCharts.panel(chart, "insight.sensitivity.chart");
+        JTable rows = new JTable(table) {
+            @Override
+            public String getToolTipText(java.awt.event.MouseEvent event) {
+                int row = rowAtPoint(event.getPoint());
+                int column = columnAtPoint(event.getPoint());
+                return row >= 0 && column >= 0 ? String.valueOf(getValueAt(row, column)) : null;
+            }
+        };
+        rows.setAutoResizeMode(JTable.AUTO_RESIZE_OFF);
+        rows.setName("insight.sensitivity.table");
+        rows.setAutoCreateRowSorter(false);
+        int[] widths = {240, 300, 90, 110, 100, 110, 420};
+        for (int i = 0; i < widths.length; i++) {
+            rows.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
+        }
+        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, panel, new JScrollPane(rows));
+        split.setResizeWeight(0.6);
+        split.setBorder(null);
+        add(split, BorderLayout.CENTER);
+        for (Measure choice : Measure.values()) {
+            measure.addItem(choice.words);
+        }
+        measure.setName("insight.sensitivity.measure");
+        measure.addActionListener(event -> {
+            if (shown != null) {
+                show(shown);
+            }
+        });
+        JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        JLabel label = new JLabel("Bars show the change of the");
+        label.setLabelFor(measure);
+        bar.add(label);
+        bar.add(measure);
+        basis.setName("insight.sensitivity.basis");
+        bar.add(basis);
+        bar.setBorder(BorderFactory.createEmptyBorder(0, 2, 0, 2));
+        add(bar, BorderLayout.SOUTH);
+    }
+
+    void show(SensitivityResult result) {
+        shown = result;
+        SensitivityText text = new SensitivityText(view.units());
+        Measure chosen = Measure.values()[Math.max(0, measure.getSelectedIndex())];
+        chart.setNotify(false);
+        try {
+            data.clear();
+            tendencies.clear();
+            table.setRowCount(0);
+            for (SensitivityRow row : result.rows()) {
+                String label = row.change().effect();
+                if (row.analysed()) {
+                    data.addValue(value(row, chosen), "change", label);
+                    tendencies.add(row.tendency());
+                    table.addRow(new Object[]{label, text.step(row.change()),
+                        String.format(Locale.ROOT, "%+.2f pt", row.frontShareChange() * 100),
+                        signed(row.rollGradientChange(), Quantity.ROLL_GRADIENT, 3),
+                        signed(row.limitMarginChange(), Quantity.ACCELERATION, 4),
+                        row.insideLiftChange().isPresent()
+                                ? signed(row.insideLiftChange().getAsDouble(), Quantity.ACCELERATION, 3) : "no lift",
+                        row.tendency().words()});
+                } else {
+                    table.addRow(new Object[]{label, text.step(row.change()), "", "", "", "",
+                        "not analysed: " + row.refusal()});
+                }
+            }
+            CategoryPlot plot = chart.getCategoryPlot();
+            String unit = chosen == Measure.ROLL_GRADIENT
+                    ? " (" + Quantity.ROLL_GRADIENT.unit(view.units()).symbol() + ")" : "";
+            plot.getRangeAxis().setLabel("Change of the " + chosen.words + unit);
+            chart.setTitle("One small change at a time, turning " + result.turn().word() + " (largest on top)");
+            plot.getDomainAxis().setMaximumCategoryLabelWidthRatio(0.5f);
+            basis.setText("Each change re-analysed in full; steps in the table.");
+            ChartStyle.apply(chart);
+            ((BarRenderer) plot.getRenderer()).setBarPainter(new StandardBarPainter());
+            ((BarRenderer) plot.getRenderer()).setShadowVisible(false);
+        } finally {
+            chart.setNotify(true);
+        }
+    }
+
+    private double value(SensitivityRow row, Measure chosen) {
+        return switch (chosen) {
+            case LIMIT_MARGIN -> row.limitMarginChange() / barwright.units.Constants.STANDARD_GRAVITY;
+            case FRONT_SHARE -> row.frontShareChange() * 100;
+            case ROLL_GRADIENT -> Quantity.ROLL_GRADIENT.unit(view.units()).fromSi(row.rollGradientChange());
+            case INSIDE_LIFT -> row.insideLiftChange().orElse(0) / barwright.units.Constants.STANDARD_GRAVITY;
+        };
+    }
+
+    private String signed(double si, Quantity quantity, int decimals) {
+        String figure = Figures.format(si, quantity, view.units(), decimals);
+        return figure.startsWith("-") ? figure : "+" + figure;
+    }
+
+    DefaultTableModel table() {
+        return table;
+    }
+
+    JFreeChart chart() {
+        return chart;
+    }
+
+    /** Bars coloured by where the change moves the balance; the legend names the colours. */
+    private final class TendencyRenderer extends BarRenderer {
+        @Override
+        public Paint getItemPaint(int row, int column) {
+            return column < tendencies.size() ? colour(tendencies.get(column)) : ChartStyle.text();
+        }
+
+        @Override
+        public LegendItemCollection getLegendItems() {
+            LegendItemCollection items = new LegendItemCollection();
+            items.add(new LegendItem("towards understeer", colour(Tendency.TOWARDS_UNDERSTEER)));
+            items.add(new LegendItem("towards oversteer", colour(Tendency.TOWARDS_OVERSTEER)));
+            items.add(new LegendItem("towards understeer below the limit only",
+                    colour(Tendency.TOWARDS_UNDERSTEER_BELOW_LIMIT)));
+            items.add(new LegendItem("towards oversteer below the limit only",
+                    colour(Tendency.TOWARDS_OVERSTEER_BELOW_LIMIT)));
+            return items;
+        }
+
+        private Color colour(Tendency tendency) {
+            return switch (tendency) {
+                case TOWARDS_UNDERSTEER -> ChartStyle.series(0);
+                case TOWARDS_OVERSTEER -> ChartStyle.series(2);
+                case TOWARDS_UNDERSTEER_BELOW_LIMIT -> ChartStyle.series(1);
+                case TOWARDS_OVERSTEER_BELOW_LIMIT -> ChartStyle.series(3);
+                case NO_CHANGE -> java.awt.Color.GRAY;
+            };
+        }
+    }
+
+    @Override
+    public void updateUI() {
+        super.updateUI();
+        if (chart != null) {
+            ChartStyle.apply(chart);
+        }
+    }
+}

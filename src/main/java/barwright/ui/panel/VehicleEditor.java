@@ -1,0 +1,35 @@
+package barwright.ui.panel;
+
+import barwright.model.AxlePosition;
+import barwright.ui.document.OpenDocument;
+import barwright.ui.field.ViewSettings;
+
+import javax.swing.JComponent;
+import javax.swing.JScrollPane;
+import javax.swing.JTabbedPane;
+import java.awt.Dimension;
+
+/** Everything in the vehicle file, on five pages: the car, each axle, each bar. */
+public final class VehicleEditor extends JTabbedPane {
+    public VehicleEditor(OpenDocument document, ViewSettings view) {
+        setName("editor.tabs");
+        setTabLayoutPolicy(SCROLL_TAB_LAYOUT);
+        page("Car", "Weight, wheelbase, centre of mass, body stiffness, bar check travel", new CarPage(document, view));
+        page("Front axle", "Track, roll centre, unsprung parts, springs and tyres at the front",
+                new AxlePage(document, view, AxlePosition.FRONT));
+        page("Front bar", "The front anti-roll bar", new BarPage(document, view, AxlePosition.FRONT));
+        page("Rear axle", "Track, roll centre, unsprung parts, springs and tyres at the rear",
+                new AxlePage(document, view, AxlePosition.REAR));
+        page("Rear bar", "The rear anti-roll bar", new BarPage(document, view, AxlePosition.REAR));
+        setPreferredSize(new Dimension(370, 600));
+        setMinimumSize(new Dimension(320, 300));
+    }
+
+    private void page(String title, String tip, JComponent page) {
+        JScrollPane scroll = new JScrollPane(page);
+        scroll.setBorder(null);
+        scroll.getVerticalScrollBar().setUnitIncrement(16);
+        scroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
+        addTab(title, null, scroll, tip);
+    }
+}

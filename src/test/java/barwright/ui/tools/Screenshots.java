@@ -1,0 +1,140 @@
+package barwright.ui.tools;
+
+import barwright.ui.action.Settings;
+import barwright.ui.app.DesktopApp;
+import barwright.ui.app.MainWindow;
+
+import javax.imageio.ImageIO;
+import javax.swing.JComponent;
+import javax.swing.SwingUtilities;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.atomic.AtomicReference;
+
+/**
+ * Writes screenshots of the main views to docs/images/ (used in the README). Run under a display, e.g.
+ * {@code xvfb-run -a -s "-screen 0 1280x1024x24" mvn -B -q test-compile exec:java
+ * -Dexec.classpathScope=test -Dexec.mainClass=barwright.ui.tools.Screenshots}.
+ */
+public final class Screenshots {
+    private Screenshots() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path folder = Path.of(args.length > 0 ? args[0] : "docs/images");
+        Files.createDirectories(folder);
+        Settings settings = Settings.inMemory();
+        if (args.length > 1) {
+            settings.put("theme", args[1]);
+        }
+        if (args.length > 2) {
+            settings.put("textSize", args[2]);
+        }
+        AtomicReference<MainWindow> holder = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            MainWindow window = DesktopApp.open(settings, () -> { });
+            window.setLocation(0, 0);
+            window.setSize(1280, 880);
+            holder.set(window);
+        });
+        MainWindow window = holder.get();
+        settle(window);
+        String suffix = (args.length > 1 ? "-" + args[1] : "") + (args.length > 2 ? "-text" + args[2] : "");
+        String[] names = {"car-from-behind", "wheel-loads", "body-roll", "load-transfer-parts", "handling", "bar-sweep"};
+        for (int tab = 0; tab < names.length; tab++) {
+            int index = tab;
+            SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedIndex(index));
+            settle(window);
+            write(window.getRootPane(), folder.resolve("main-" + names[tab] + suffix + ".png"));
+        }
+        SwingUtilities.invokeAndWait(() -> {
+            window.tabs().setSelectedIndex(0);
+            window.editor().setSelectedIndex(2);
+        });
+        settle(window);
+        write(window.getRootPane(), folder.resolve("main-front-bar" + suffix + ".png"));
+
+        // the working behind the front share, as an instructor opens it
+        SwingUtilities.invokeAndWait(() -> ((javax.swing.AbstractButton) find(window, "figure.frontShare")).doClick());
+        settle(window);
+        write(dialog("work.dialog"), folder.resolve("show-the-work" + suffix + ".png"));
+        SwingUtilities.invokeAndWait(() -> javax.swing.SwingUtilities.getWindowAncestor(dialog("work.dialog")).dispose());
+
+        // a refused tube wall: the field is marked, the results are out of date
+        SwingUtilities.invokeAndWait(() -> window.editor().setSelectedIndex(4));
+        settle(window);
+        SwingUtilities.invokeAndWait(() -> ((javax.swing.JTextField) find(window, "rear.bar.section.wallMm")).setText("14"));
+        settle(window);
+        write(window.getRootPane(), folder.resolve("refused-value" + suffix + ".png"));
+        SwingUtilities.invokeAndWait(() -> window.document().undo());
+        settle(window);
+
+        // US customary units and a larger text for a projector
+        SwingUtilities.invokeAndWait(() -> {
+            window.setUnits(barwright.units.UnitSystem.US);
+            window.editor().setSelectedIndex(1);
+            window.tabs().setSelectedIndex(1);
+        });
+        settle(window);
+        write(window.getRootPane(), folder.resolve("us-units" + suffix + ".png"));
+        SwingUtilities.invokeAndWait(window::dispose);
+        System.exit(0);
+    }
+
+    private static java.awt.Component find(java.awt.Container root, String name) {
+        for (java.awt.Component child : root.getComponents()) {
+            if (name.equals(child.getName())) {
+                return child;
+            }
+            if (child instanceof java.awt.Container container) {
+                java.awt.Component found = find(container, name);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
+    }
+
+    private static JComponent dialog(String name) {
+        for (java.awt.Window open : java.awt.Window.getWindows()) {
+            if (open.isShowing() && name.equals(open.getName()) && open instanceof javax.swing.RootPaneContainer pane) {
+                return pane.getRootPane();
+            }
+        }
+        throw new IllegalStateException("no open window " + name);
+    }
+
+    private static void settle(MainWindow window) throws Exception {
+        for (int i = 0; i < 200; i++) {
+            boolean[] idle = new boolean[1];
+            SwingUtilities.invokeAndWait(() -> idle[0] = window.analysis().isIdle() && window.results().shown() != null);
+            if (idle[0]) {
+                break;
+            }
+            Thread.sleep(20);
+        }
+        SwingUtilities.invokeAndWait(() -> { });
+        Thread.sleep(200);
+    }
+
+    static void write(JComponent component, Path file) throws Exception {
+        AtomicReference<BufferedImage> image = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            BufferedImage picture = new BufferedImage(component.getWidth(), component.getHeight(),
+                    BufferedImage.TYPE_INT_RGB);
+            var graphics = picture.createGraphics();
+            component.printAll(graphics);
+            graphics.dispose();
+            image.set(picture);
+        });
+        try {
+            ImageIO.write(image.get(), "png", file.toFile());
+        } catch (IOException failed) {
+            throw new IOException("could not write " + file, failed);
+        }
+        System.out.println("wrote " + file);
+    }
+}

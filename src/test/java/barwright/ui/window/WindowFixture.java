@@ -1,0 +1,62 @@
+package barwright.ui.window;
+
+import barwright.ui.Display;
+import barwright.ui.ScriptedDialogs;
+import barwright.ui.action.Settings;
+import barwright.ui.app.MainWindow;
+import barwright.ui.app.Themes;
+import barwright.ui.document.Samples;
+import org.assertj.swing.core.BasicRobot;
+import org.assertj.swing.core.Robot;
+import org.assertj.swing.edt.GuiActionRunner;
+import org.assertj.swing.fixture.FrameFixture;
+import org.assertj.swing.timing.Condition;
+import org.assertj.swing.timing.Pause;
+import org.assertj.swing.timing.Timeout;
+
+/**
+ * Opens the main window on the sample for a test, placed at (100,100) inside the EDT task that creates it
+ * (toolchain.md: clicks then land reliably under Xvfb), with in-memory settings and scripted dialogs.
+ */
+final class WindowFixture implements AutoCloseable {
+    final Robot robot;
+    final MainWindow window;
+    final FrameFixture frame;
+    final ScriptedDialogs dialogs = new ScriptedDialogs();
+
+    WindowFixture() {
+        Display.require();
+        robot = BasicRobot.robotWithNewAwtHierarchy();
+        window = GuiActionRunner.execute(() -> {
+            Themes.apply(Themes.Theme.LIGHT, 0);
+            MainWindow created = new MainWindow(Samples.open(Samples.CLUB_HATCHBACK), Settings.inMemory(), dialogs,
+                    () -> { });
+            created.setSize(1150, 880);
+            created.setLocation(100, 100);
+            return created;
+        });
+        frame = new FrameFixture(robot, window);
+        frame.show();
+        settle();
+    }
+
+    /** Waits until no analysis runs or waits and results are on screen. */
+    void settle() {
+        Pause.pause(new Condition("the analysis to settle") {
+            @Override
+            public boolean test() {
+                return GuiActionRunner.execute(() -> window.analysis().isIdle() && window.results().shown() != null);
+            }
+        }, Timeout.timeout(20_000));
+        robot.waitForIdle();
+    }
+
+    String figure(String name) {
+        return GuiActionRunner.execute(() -> window.figures().figureText(name));
+    }
+
+    @Override
+    public void close() {
+        frame.cleanUp();
+    }
+}
