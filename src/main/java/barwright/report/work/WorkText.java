@@ -3,8 +3,6 @@ package barwright.report.work;
 import barwright.units.DisplayUnit;
 import barwright.units.UnitSystem;
 
-import java.text.DecimalFormat;
-import java.text.DecimalFormatSymbols;
 import java.util.Locale;
 
 /** A derivation as plain text for people, in their unit system and locale. */
@@ -57,11 +55,7 @@ public final class WorkText {
     static String significant(double value, Locale locale) {
         int magnitude = value == 0 ? 0 : (int) Math.floor(Math.log10(Math.abs(value)));
         int decimals = Math.max(0, Math.min(8, SIGNIFICANT_DIGITS - 1 - magnitude));
-        DecimalFormat format = new DecimalFormat("0", DecimalFormatSymbols.getInstance(locale));
-        format.setMinimumFractionDigits(decimals);
-        format.setMaximumFractionDigits(decimals);
-        format.setGroupingUsed(false);
-        String text = format.format(value);
+        String text = String.format(locale, "%." + decimals + "f", value); // no grouping, as Figures.format
         return text.matches("-0([.,]0*)?") ? text.substring(1) : text;
     }
 }

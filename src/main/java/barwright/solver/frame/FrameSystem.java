@@ -147,7 +147,7 @@ public final class FrameSystem {
         StiffnessPattern pattern = StiffnessPattern.of(model, dofs);
         double[] block = new double[9];
         double[] global = new double[144];
-        double[] scratch = new double[9];
+        double[] scratch = new double[45];
         for (int index = 0; index < matrices.size(); index++) {
             BeamElement element = model.elements().get(index);
             matrices.get(index).global(global, scratch);

@@ -1,5 +1,6 @@
 package barwright.ui.chart;
 
+import org.jfree.chart.ChartPanel;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.Axis;
 import org.jfree.chart.block.BlockBorder;
@@ -94,6 +95,19 @@ public final class ChartStyle {
     }
 
     /** @return the text colour of the theme, for annotations */
+    /** @return the chart in a panel that redraws at any size (no buffer, no zoom, no pop-up menu) */
+    public static ChartPanel panel(JFreeChart chart, String name) {
+        ChartPanel panel = new ChartPanel(chart, false, false, false, true, true);
+        panel.setName(name);
+        panel.setMouseWheelEnabled(false);
+        panel.setPopupMenu(null);
+        panel.setMinimumDrawWidth(200);
+        panel.setMinimumDrawHeight(150);
+        panel.setMaximumDrawWidth(4000);
+        panel.setMaximumDrawHeight(3000);
+        return panel;
+    }
+
     public static Color text() {
         return colour("Label.foreground", Color.BLACK);
     }

@@ -22,14 +22,7 @@ public abstract class ResultChart {
         this.probe = probe;
         this.chart = chart;
         chart.addSubtitle(0, staleNote);
-        this.panel = new ChartPanel(chart, false, false, false, true, true);
-        panel.setName(name);
-        panel.setMouseWheelEnabled(false);
-        panel.setPopupMenu(null);
-        panel.setMinimumDrawWidth(200);
-        panel.setMinimumDrawHeight(150);
-        panel.setMaximumDrawWidth(4000);
-        panel.setMaximumDrawHeight(3000);
+        this.panel = ChartStyle.panel(chart, name);
         ChartStyle.apply(chart);
     }
 

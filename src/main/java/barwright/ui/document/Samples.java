@@ -19,7 +19,9 @@ public final class Samples {
     public static final Sample CLUB_HATCHBACK = new Sample("club-hatchback.json", "Club hatchback");
     public static final List<Sample> ALL = List.of(CLUB_HATCHBACK,
             new Sample("road-saloon.json", "Road saloon"),
-            new Sample("sprint-roadster.json", "Sprint roadster"));
+            new Sample("sprint-roadster.json", "Sprint roadster"),
+            new Sample("estate-dropped-rear-bar.json", "Estate, dropped rear bar (shaped)"),
+            new Sample("hillclimb-special-swept-bar.json", "Hill-climb special, swept front bar (shaped)"));
 
     private static final String FOLDER = "/barwright/samples/";
 

@@ -58,16 +58,6 @@ public final class NumberText {
         return text.equals("-0") ? "0" : text;
     }
 
-    /** @return the value with exactly this many decimals, in the locale */
-    public static String fixed(double value, int decimals, Locale locale) {
-        DecimalFormat format = new DecimalFormat("0", DecimalFormatSymbols.getInstance(locale));
-        format.setMinimumFractionDigits(decimals);
-        format.setMaximumFractionDigits(decimals);
-        format.setGroupingUsed(false);
-        String text = format.format(value);
-        return text.matches("-0([.,]0*)?") ? text.substring(1) : text;
-    }
-
     /** @return the value rounded to 12 significant digits, so that unit conversions leave no 0.1+0.2 noise */
     public static double forFile(double value) {
         return value == 0 ? 0 : new BigDecimal(value).round(FILE_DIGITS).doubleValue();

@@ -57,7 +57,7 @@ public final class ChassisView extends JPanel {
         plot.setRangeAxis(1, rollAxis);
         plot.setDataset(1, roll);
         plot.mapDatasetToRangeAxis(1, 1);
-        ChartPanel panel = InsightCharts.panel(chart, "insight.chassis.chart");
+        ChartPanel panel = ChartStyle.panel(chart, "insight.chassis.chart");
         JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, panel, new JScrollPane(statement));
         split.setResizeWeight(0.75);
         split.setBorder(null);

@@ -1,5 +1,6 @@
 package barwright.ui.insight;
 
+import barwright.ui.chart.ChartStyle;
 import barwright.insight.EnvelopeText;
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
@@ -47,7 +48,7 @@ public final class EnvelopeView extends JPanel {
         super(new BorderLayout());
         this.view = view;
         setName("insight.envelope");
-        ChartPanel panel = InsightCharts.panel(chart.chart(), "insight.envelope.chart");
+        ChartPanel panel = ChartStyle.panel(chart.chart(), "insight.envelope.chart");
         JScrollPane text = new JScrollPane(sentences);
         text.setBorder(BorderFactory.createEmptyBorder());
         JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, panel, text);

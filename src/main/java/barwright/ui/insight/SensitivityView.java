@@ -77,7 +77,7 @@ public final class SensitivityView extends JPanel {
         chart = ChartFactory.createBarChart("What one small change does", "", "", data, PlotOrientation.HORIZONTAL,
                 true, true, false);
         chart.getCategoryPlot().setRenderer(new TendencyRenderer());
-        ChartPanel panel = InsightCharts.panel(chart, "insight.sensitivity.chart");
+        ChartPanel panel = ChartStyle.panel(chart, "insight.sensitivity.chart");
         JTable rows = new JTable(table) {
             @Override
             public String getToolTipText(java.awt.event.MouseEvent event) {

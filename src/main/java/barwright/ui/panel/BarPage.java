@@ -19,7 +19,6 @@ import com.fasterxml.jackson.databind.node.TextNode;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
-import javax.swing.JLabel;
 import javax.swing.JPanel;
 import java.awt.FlowLayout;
 import java.util.ArrayList;

@@ -10,7 +10,6 @@ import barwright.ui.task.ResultsModel;
 import barwright.units.Quantity;
 
 import javax.swing.JComponent;
-import javax.swing.UIManager;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Dimension;
@@ -62,7 +61,7 @@ public final class CarBehindView extends JComponent {
         try {
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            g.setColor(colour("Panel.background", Color.WHITE));
+            g.setColor(Palette.colour("Panel.background", Color.WHITE));
             g.fillRect(0, 0, getWidth(), getHeight());
             if (result != null) {
                 paintCar(g, result);
@@ -80,7 +79,7 @@ public final class CarBehindView extends JComponent {
         WheelLoads loads = cornering.wheelLoads(accel);
         WheelLoads atLimit = cornering.wheelLoads(turnResult.limit());
         double roll = cornering.rollAngle(accel);
-        Color text = colour("Label.foreground", Color.BLACK);
+        Color text = Palette.colour("Label.foreground", Color.BLACK);
         Font font = getFont() != null ? getFont() : new Font(Font.SANS_SERIF, Font.PLAIN, 13);
         int line = g.getFontMetrics(font).getHeight();
 
@@ -90,7 +89,7 @@ public final class CarBehindView extends JComponent {
         // the car takes the upper part; the road's push on each tyre hangs below the ground line as columns
         int ground = top + (int) ((bottom - top) * 0.58);
         double track = Math.max(result.vehicle().front().track(), result.vehicle().rear().track());
-        double scale = Math.min(width * 0.78 / (track + 0.3), (ground - top) / 1.45); // px per metre
+        double scale = Math.min(width * 0.66 / (track + 0.3), (ground - top) / 1.45); // px per metre
         double centre = width / 2.0;
         boolean left = turn == TurnDirection.LEFT;
         // seen from behind the car's left is on the left; the outside of a left turn is on the right
@@ -126,7 +125,7 @@ public final class CarBehindView extends JComponent {
         body.lineTo(centre + bodyHalf, waist);
         body.lineTo(centre + bodyHalf, sill);
         body.closePath();
-        g.setColor(colour("Barwright.bodyFill", new Color(0xDDE3EA)));
+        g.setColor(Palette.colour("Barwright.bodyFill", new Color(0xDDE3EA)));
         g.fill(body);
         g.setColor(text);
         g.draw(body);
@@ -201,7 +200,7 @@ public final class CarBehindView extends JComponent {
     private static void tyre(Graphics2D g, double centreX, double bottom, double width, double height, Color text) {
         RoundRectangle2D shape = new RoundRectangle2D.Double(centreX - width / 2, bottom - height, width, height,
                 width * 0.5, width * 0.5);
-        g.setColor(colour("Barwright.tyreFill", new Color(0x3A3A3A)));
+        g.setColor(Palette.colour("Barwright.tyreFill", new Color(0x3A3A3A)));
         g.fill(shape);
         g.setColor(text);
         g.draw(shape);
@@ -215,10 +214,5 @@ public final class CarBehindView extends JComponent {
         double head = Math.signum(length) * 9;
         g.fillPolygon(new int[]{(int) end, (int) (end - head), (int) (end - head)},
                 new int[]{(int) y, (int) y - 6, (int) y + 6}, 3);
-    }
-
-    private static Color colour(String key, Color fallback) {
-        Color colour = UIManager.getColor(key);
-        return colour != null ? colour : fallback;
     }
 }

@@ -49,7 +49,7 @@ final class CarPage extends EditorPage {
         group.add(four);
         JPanel choice = new JPanel();
         choice.setOpaque(false);
-        choice.setLayout(new BoxLayout(choice, BoxLayout.X_AXIS));
+        choice.setLayout(new BoxLayout(choice, BoxLayout.Y_AXIS));
         choice.add(total);
         choice.add(four);
         form.field("Weighed as", choice, null, null);

@@ -18,6 +18,8 @@ import javax.swing.JPanel;
 import javax.swing.JSeparator;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
+
+import static barwright.ui.panel.Grid.at;
 import java.awt.Insets;
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -200,15 +202,5 @@ public final class FiguresPanel extends JPanel {
     public String figureText(String name) {
         return figures.keySet().stream().filter(b -> name.equals(b.getName())).findFirst()
                 .map(FigureButton::getText).orElseThrow(() -> new IllegalArgumentException("no figure " + name));
-    }
-
-    private static GridBagConstraints at(int x, int y, int width) {
-        GridBagConstraints constraints = new GridBagConstraints();
-        constraints.gridx = x;
-        constraints.gridy = y;
-        constraints.gridwidth = width;
-        constraints.fill = GridBagConstraints.HORIZONTAL;
-        constraints.anchor = GridBagConstraints.WEST;
-        return constraints;
     }
 }

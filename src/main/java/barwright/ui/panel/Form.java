@@ -7,6 +7,8 @@ import javax.swing.JPanel;
 import javax.swing.JSeparator;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
+
+import static barwright.ui.panel.Grid.at;
 import java.awt.Insets;
 import java.util.ArrayList;
 import java.util.List;
@@ -99,15 +101,5 @@ final class Form extends PagePanel {
     void detach() {
         detachers.forEach(Runnable::run);
         detachers.clear();
-    }
-
-    private static GridBagConstraints at(int x, int y, int width) {
-        GridBagConstraints constraints = new GridBagConstraints();
-        constraints.gridx = x;
-        constraints.gridy = y;
-        constraints.gridwidth = width;
-        constraints.fill = GridBagConstraints.HORIZONTAL;
-        constraints.anchor = GridBagConstraints.WEST;
-        return constraints;
     }
 }

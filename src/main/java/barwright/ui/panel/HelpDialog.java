@@ -2,18 +2,8 @@ package barwright.ui.panel;
 
 import barwright.report.Cautions;
 
-import javax.swing.BorderFactory;
-import javax.swing.JButton;
-import javax.swing.JComponent;
-import javax.swing.JDialog;
-import javax.swing.JPanel;
-import javax.swing.JScrollPane;
 import javax.swing.JTextArea;
-import javax.swing.KeyStroke;
-import java.awt.BorderLayout;
-import java.awt.FlowLayout;
 import java.awt.Window;
-import java.awt.event.KeyEvent;
 
 /** Help: what the program does, how to use it, what it leaves out, and the cautions. */
 public final class HelpDialog {
@@ -46,26 +36,8 @@ public final class HelpDialog {
     }
 
     public static void show(Window owner) {
-        JDialog dialog = new JDialog(owner, "Barwright help and cautions", java.awt.Dialog.ModalityType.MODELESS);
-        dialog.setName("help.dialog");
         JTextArea area = new JTextArea(TEXT, 30, 80);
         area.setName("help.text");
-        area.setEditable(false);
-        area.setLineWrap(true);
-        area.setWrapStyleWord(true);
-        area.setBorder(BorderFactory.createEmptyBorder(10, 12, 10, 12));
-        JButton close = new JButton("Close");
-        close.addActionListener(event -> dialog.dispose());
-        JPanel buttons = new JPanel(new FlowLayout(FlowLayout.RIGHT));
-        buttons.add(close);
-        dialog.getContentPane().add(new JScrollPane(area), BorderLayout.CENTER);
-        dialog.getContentPane().add(buttons, BorderLayout.SOUTH);
-        dialog.getRootPane().setDefaultButton(close);
-        dialog.getRootPane().registerKeyboardAction(event -> dialog.dispose(),
-                KeyStroke.getKeyStroke(KeyEvent.VK_ESCAPE, 0), JComponent.WHEN_IN_FOCUSED_WINDOW);
-        dialog.pack();
-        dialog.setLocationRelativeTo(owner);
-        area.setCaretPosition(0);
-        dialog.setVisible(true);
+        TextDialog.show(owner, "Barwright help and cautions", "help.dialog", area);
     }
 }

@@ -10,6 +10,7 @@ import barwright.ui.field.Precision;
 import barwright.ui.field.ViewSettings;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.DoubleNode;
+import com.fasterxml.jackson.databind.node.IntNode;
 import com.fasterxml.jackson.databind.node.LongNode;
 import com.fasterxml.jackson.databind.node.TextNode;
 
@@ -147,7 +148,11 @@ public final class NumberField extends JTextField {
         document.edit(path, value, typingSession, this);
     }
 
+    /** A whole number is written as the file reader reads one (an int), so that typing back a value undoes dirt. */
     private static JsonNode fileNumber(double value) {
+        if (value == Math.rint(value) && Math.abs(value) <= Integer.MAX_VALUE) {
+            return IntNode.valueOf((int) value);
+        }
         return value == Math.rint(value) && Math.abs(value) < 1e15 ? LongNode.valueOf((long) value)
                 : DoubleNode.valueOf(value);
     }

@@ -41,7 +41,8 @@ public final class Palette {
         return colour("Label.disabledForeground", Color.GRAY);
     }
 
-    private static Color colour(String key, Color fallback) {
+    /** @return the theme's colour for the key, or the fallback where the theme has none */
+    static Color colour(String key, Color fallback) {
         Color colour = UIManager.getColor(key);
         return colour != null ? colour : fallback;
     }

@@ -15,7 +15,6 @@ import barwright.ui.task.SweepParameter;
 import barwright.ui.task.SweepRequest;
 
 import javax.swing.BorderFactory;
-import javax.swing.Box;
 import javax.swing.JButton;
 import javax.swing.JComboBox;
 import javax.swing.JLabel;
@@ -109,7 +108,7 @@ public final class ResultsTabs extends JTabbedPane {
         JPanel left = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 0));
         left.add(turn);
         left.add(label);
-        controls.add(left, BorderLayout.WEST);
+        controls.add(left, BorderLayout.NORTH);
         controls.add(slider, BorderLayout.CENTER);
         return controls;
     }
@@ -200,13 +199,18 @@ public final class ResultsTabs extends JTabbedPane {
         JPanel tab = new JPanel(new BorderLayout());
         tab.add(chart.component(), BorderLayout.CENTER);
         JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
-        if (isSweep) {
-            sweepControls(bar, analysis);
-        }
-        bar.add(Box.createHorizontalStrut(12));
         bar.add(exportButton(chart, "png", "Save as PNG…", export));
         bar.add(exportButton(chart, "svg", "Save as SVG…", export));
-        tab.add(bar, BorderLayout.SOUTH);
+        if (isSweep) {
+            JPanel rows = new JPanel(new BorderLayout());
+            JPanel choice = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+            sweepControls(choice, analysis);
+            rows.add(choice, BorderLayout.NORTH);
+            rows.add(bar, BorderLayout.SOUTH);
+            tab.add(rows, BorderLayout.SOUTH);
+        } else {
+            tab.add(bar, BorderLayout.SOUTH);
+        }
         return tab;
     }
 

@@ -58,6 +58,9 @@ final class TextValueField extends JTextField {
             reloading = true;
             try {
                 setText(text);
+                if (!hasFocus()) {
+                    setCaretPosition(0); // show the start of a long name, not its end
+                }
             } finally {
                 reloading = false;
             }

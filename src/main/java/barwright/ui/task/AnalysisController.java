@@ -15,23 +15,42 @@ public final class AnalysisController {
     private SweepRequest sweep = new SweepRequest(AxlePosition.FRONT, SweepParameter.DIAMETER);
     private long lastDelivered;
     private boolean sweepWanted;
+    /** How long a refused value may stand before the results are marked out of date (ms). */
+    static final int STALE_GRACE_MS = 400;
+    private final javax.swing.Timer staleGrace = new javax.swing.Timer(STALE_GRACE_MS, event -> markRefused());
 
     public AnalysisController(OpenDocument document, ResultsModel results) {
         this.document = document;
         this.results = results;
         this.scheduler = new AnalysisScheduler(this::arrived);
+        staleGrace.setRepeats(false);
         document.addListener(event -> refresh());
     }
 
     /** Analyses the document as it stands, or marks the results out of date where the core refuses it. */
     public void refresh() {
         if (document.isValid()) {
+            staleGrace.stop();
             scheduler.submit(document.lastValid().vehicle(), sweepWanted ? sweep : null);
+        } else if (!results.isStale()) {
+            staleGrace.restart();
         } else {
-            Problem first = document.problems().get(0);
-            int more = document.problems().size() - 1;
-            results.markStale("A value is refused: " + first + (more > 0 ? " (and " + more + " more)" : ""));
+            markRefused();
         }
+    }
+
+    /**
+     * Typing "25" passes through "2", which is refused: the results are marked out of date only when a refused
+     * value stays a moment, so that the window does not flash while a person types (the field itself shows
+     * the message at once).
+     */
+    private void markRefused() {
+        if (document.isValid()) {
+            return;
+        }
+        Problem first = document.problems().get(0);
+        int more = document.problems().size() - 1;
+        results.markStale("A value is refused: " + first + (more > 0 ? " (and " + more + " more)" : ""));
     }
 
     /** Chooses what the sweep chart varies, and analyses again. */
@@ -57,9 +76,9 @@ public final class AnalysisController {
         return sweep;
     }
 
-    /** @return true when no analysis runs or waits */
+    /** @return true when no analysis runs or waits, and no out-of-date mark is pending */
     public boolean isIdle() {
-        return scheduler.isIdle();
+        return scheduler.isIdle() && !staleGrace.isRunning();
     }
 
     private void arrived(AnalysisOutcome outcome) {

@@ -6,9 +6,11 @@ import barwright.model.BarSection;
 import barwright.model.SolidSection;
 import barwright.model.TubeSection;
 import barwright.model.Vehicle;
-import barwright.physics.AnalysisResult;
+import barwright.model.AxlePosition;
 import barwright.physics.ImpossibleVehicleException;
-import barwright.physics.VehicleAnalysis;
+import barwright.sizing.AxleState;
+import barwright.sizing.RollBalance;
+import barwright.sizing.SetupEvaluator;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -93,12 +95,20 @@ public final class BarSweep {
         return new SweepResult(request, points, bar.selectedArmLength(), null);
     }
 
+    /**
+     * Front share and roll gradient are the linear part of the analysis (model.md 5-6): the evaluator works out
+     * just that part, the same numbers as a full analysis without its limits and handling curves.
+     */
     private static void point(Vehicle vehicle, SweepRequest request, AntiRollBar bar, double value,
                               List<SweepResult.Point> points) {
-        Vehicle changed = vehicle.withAxle(request.axle(), vehicle.axle(request.axle()).withBar(bar));
         try {
-            AnalysisResult result = VehicleAnalysis.analyse(changed);
-            points.add(new SweepResult.Point(value, result.frontLoadTransferShare(), result.rollGradient()));
+            SetupEvaluator evaluator = new SetupEvaluator(vehicle);
+            AxlePosition swept = request.axle();
+            AxleState sweptAxle = evaluator.axle(swept, bar);
+            AxleState otherAxle = evaluator.axle(swept.other());
+            RollBalance balance = swept == AxlePosition.FRONT ? evaluator.balance(sweptAxle, otherAxle)
+                    : evaluator.balance(otherAxle, sweptAxle);
+            points.add(new SweepResult.Point(value, balance.frontLoadTransferShare(), balance.rollGradient()));
         } catch (ImpossibleVehicleException impossible) {
             // no stable roll with this bar: the point is left out
         }

@@ -29,6 +29,9 @@ public final class Screenshots {
         if (args.length > 1) {
             settings.put("theme", args[1]);
         }
+        if (args.length > 2) {
+            settings.put("textSize", args[2]);
+        }
         AtomicReference<MainWindow> holder = new AtomicReference<>();
         SwingUtilities.invokeAndWait(() -> {
             MainWindow window = DesktopApp.open(settings, () -> { });
@@ -38,7 +41,7 @@ public final class Screenshots {
         });
         MainWindow window = holder.get();
         settle(window);
-        String suffix = args.length > 1 ? "-" + args[1] : "";
+        String suffix = (args.length > 1 ? "-" + args[1] : "") + (args.length > 2 ? "-text" + args[2] : "");
         String[] names = {"car-from-behind", "wheel-loads", "body-roll", "load-transfer-parts", "handling", "bar-sweep"};
         for (int tab = 0; tab < names.length; tab++) {
             int index = tab;
