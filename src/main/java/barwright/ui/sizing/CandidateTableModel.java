@@ -10,7 +10,6 @@ import barwright.sizing.SetupFigures;
 import barwright.ui.panel.FigureFormat;
 import barwright.units.Quantity;
 
-import javax.swing.table.AbstractTableModel;
 import java.util.List;
 import java.util.function.Function;
 
@@ -18,7 +17,7 @@ import java.util.function.Function;
  * The ranked candidates of a search as table rows, written in the units chosen when they are drawn. Where both
  * bars were sized each cell holds the front's value, then the rear's.
  */
-final class CandidateTableModel extends AbstractTableModel {
+final class CandidateTableModel extends TextTableModel {
     static final String[] COLUMNS = {"Rank", "Stock size", "Material", "Arm hole", "Front share", "Roll gradient",
         "Limit and balance", "Inside wheel lifts (front / rear)", "Bar mass", "Safety factor", "Miss (steps)"};
     static final String[] TOOLTIPS = {"Best first: closest to the target, then lightest",
@@ -33,6 +32,7 @@ final class CandidateTableModel extends AbstractTableModel {
     private Vehicle vehicle;
 
     CandidateTableModel(FigureFormat format) {
+        super(COLUMNS);
         this.format = format;
     }
 
@@ -55,16 +55,6 @@ final class CandidateTableModel extends AbstractTableModel {
     @Override
     public int getRowCount() {
         return candidates.size();
-    }
-
-    @Override
-    public int getColumnCount() {
-        return COLUMNS.length;
-    }
-
-    @Override
-    public String getColumnName(int column) {
-        return COLUMNS[column];
     }
 
     @Override

@@ -211,7 +211,7 @@ final class CompareView extends JPanel {
         charts.removeAll();
         if (shown != null) {
             for (Chart chart : shown.charts()) {
-                charts.addTab(chart.title().replaceFirst(",.*", ""), ComparisonCharts.panel(
+                charts.addTab(chart.title().replaceFirst(",.*", ""), barwright.ui.chart.ChartStyle.panel(
                         ComparisonCharts.draw(chart, shown.configurations().size(), context.view()),
                         "compare.chart." + charts.getTabCount()));
             }
@@ -264,20 +264,14 @@ final class CompareView extends JPanel {
     }
 
     /** The setups added, one per row. */
-    private final class Setups extends AbstractTableModel {
+    private final class Setups extends TextTableModel {
+        Setups() {
+            super("Setup", "From");
+        }
+
         @Override
         public int getRowCount() {
             return entries.size();
-        }
-
-        @Override
-        public int getColumnCount() {
-            return 2;
-        }
-
-        @Override
-        public String getColumnName(int column) {
-            return column == 0 ? "Setup" : "From";
         }
 
         @Override

@@ -5,7 +5,6 @@ import barwright.sizing.compare.Series;
 import barwright.ui.chart.ChartStyle;
 import barwright.ui.field.ViewSettings;
 import org.jfree.chart.ChartFactory;
-import org.jfree.chart.ChartPanel;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
@@ -53,15 +52,6 @@ final class ComparisonCharts {
         drawn.getXYPlot().setRenderer(renderer);
         ChartStyle.apply(drawn);
         return drawn;
-    }
-
-    /** @return the chart in a panel that redraws at any size, with no zoom or pop-up menu */
-    static ChartPanel panel(JFreeChart chart, String name) {
-        ChartPanel panel = new ChartPanel(chart, 400, 300, 200, 150, 4000, 3000, false, false, false, false, false,
-                true);
-        panel.setName(name);
-        panel.setPopupMenu(null);
-        return panel;
     }
 
     private static String label(String words, String unit) {

@@ -4,7 +4,6 @@ import barwright.model.AxlePosition;
 import barwright.model.Vehicle;
 import barwright.sizing.map.AdjustmentMap;
 import barwright.sizing.map.BarOption;
-import barwright.ui.document.DocumentEvent;
 import barwright.ui.panel.FigureFormat;
 import barwright.ui.panel.WrappingText;
 import barwright.units.Quantity;
@@ -108,13 +107,10 @@ final class MapView extends JPanel {
         add(top, BorderLayout.NORTH);
         add(scroll, BorderLayout.CENTER);
         add(under, BorderLayout.SOUTH);
-        context.document().addListener(this::documentChanged);
+        WhileShown updates = new WhileShown(this, this::carChanged);
+        context.document().addListener(event -> updates.request());
         context.view().addListener(this::redraw);
-        carChanged();
-    }
-
-    private void documentChanged(DocumentEvent event) {
-        carChanged();
+        updates.request();
     }
 
     /** Works the map out again for the car as it stands. */

@@ -17,7 +17,6 @@ import javax.swing.JComboBox;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.table.AbstractTableModel;
 import java.awt.BorderLayout;
 import java.awt.Font;
 import java.util.function.ToDoubleFunction;
@@ -90,6 +89,7 @@ final class PreloadView extends JPanel {
         add(new JScrollPane(results), BorderLayout.CENTER);
         add(work, BorderLayout.SOUTH);
 
+        WhileShown updates = new WhileShown(this, this::recompute);
         axle.addActionListener(event -> recompute());
         diagonal.addActionListener(event -> recompute());
         change.addActionListener(event -> recompute());
@@ -99,9 +99,9 @@ final class PreloadView extends JPanel {
                 recompute();
             }
         });
-        context.document().addListener(event -> recompute());
+        context.document().addListener(event -> updates.request());
         context.view().addListener(this::describe);
-        recompute();
+        updates.request();
     }
 
     /** Works the preload out again for the settings and the car as they stand. */
@@ -174,24 +174,18 @@ final class PreloadView extends JPanel {
     }
 
     /** The four corners: load at rest, change per length, load with the change. */
-    private final class Wheels extends AbstractTableModel {
+    private final class Wheels extends TextTableModel {
         private static final String[] NAMES = {"left front", "right front", "left rear", "right rear"};
         private static final java.util.List<ToDoubleFunction<CornerLoads>> CORNERS = java.util.List.of(
                 CornerLoads::leftFront, CornerLoads::rightFront, CornerLoads::leftRear, CornerLoads::rightRear);
 
+        Wheels() {
+            super(COLUMNS);
+        }
+
         @Override
         public int getRowCount() {
             return shown == null ? 0 : 4;
-        }
-
-        @Override
-        public int getColumnCount() {
-            return COLUMNS.length;
-        }
-
-        @Override
-        public String getColumnName(int column) {
-            return COLUMNS[column];
         }
 
         @Override

@@ -21,7 +21,6 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JRadioButton;
 import javax.swing.JScrollPane;
-import javax.swing.table.AbstractTableModel;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.util.List;
@@ -248,20 +247,14 @@ final class TubeView extends JPanel {
     }
 
     /** The tubes found, as rows in the units chosen. */
-    private final class Model extends AbstractTableModel {
+    private final class Model extends TextTableModel {
+        Model() {
+            super(COLUMNS);
+        }
+
         @Override
         public int getRowCount() {
             return shown == null ? 0 : shown.comparison().matches().size();
-        }
-
-        @Override
-        public int getColumnCount() {
-            return COLUMNS.length;
-        }
-
-        @Override
-        public String getColumnName(int column) {
-            return COLUMNS[column];
         }
 
         @Override

@@ -59,29 +59,11 @@ final class SizingScreens {
         until("the analysis", () -> window.analysis().isIdle() && window.results().shown() != null);
     }
 
-    /** @return the component of that name under the container (event thread), or an error naming it */
+    /** @return the component of that name under the container (AssertJ Swing's finder), or an error naming it */
     @SuppressWarnings("unchecked")
     static <T extends java.awt.Component> T find(java.awt.Container root, String name) {
-        java.awt.Component found = search(root, name);
-        if (found == null) {
-            throw new AssertionError("no component named " + name);
-        }
-        return (T) found;
-    }
-
-    private static java.awt.Component search(java.awt.Container root, String name) {
-        for (java.awt.Component child : root.getComponents()) {
-            if (name.equals(child.getName())) {
-                return child;
-            }
-            if (child instanceof java.awt.Container container) {
-                java.awt.Component found = search(container, name);
-                if (found != null) {
-                    return found;
-                }
-            }
-        }
-        return null;
+        return (T) org.assertj.swing.core.BasicComponentFinder.finderWithCurrentAwtHierarchy()
+                .findByName(root, name, false);
     }
 
     /** Captures a window from the screen as a person sees it (toolchain.md: Robot.createScreenCapture). */

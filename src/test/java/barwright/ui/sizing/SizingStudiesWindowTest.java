@@ -15,7 +15,6 @@ import barwright.sizing.catalogue.StockSize;
 import barwright.sizing.preload.GainingDiagonal;
 import barwright.sizing.preload.LinkPreload;
 import barwright.sizing.preload.PreloadResult;
-import barwright.ui.document.Samples;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.assertj.swing.data.TableCell;
 import org.assertj.swing.edt.GuiActionRunner;
@@ -31,6 +30,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import static barwright.ui.sizing.SizingWindowFixture.number;
+import static barwright.ui.sizing.SizingWindowFixture.sample;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
@@ -55,19 +56,6 @@ class SizingStudiesWindowTest {
         }
     }
 
-    private static Vehicle sample() {
-        return Samples.load(Samples.CLUB_HATCHBACK).vehicle();
-    }
-
-    private JsonNode tree() {
-        return GuiActionRunner.execute(() -> fixture.window.document().tree().deepCopy());
-    }
-
-    /** @return the number at the start of a shown figure, e.g. 52.3 from "52.3 %" */
-    private static double number(String text) {
-        return Double.parseDouble(text.trim().split(" ")[0].replace(',', '.'));
-    }
-
     /** @return the row of the table whose first cell is the text */
     private static int row(JTableFixture table, String first) {
         for (int row = 0; row < table.rowCount(); row++) {
@@ -80,7 +68,7 @@ class SizingStudiesWindowTest {
 
     @Test
     void the_tubes_of_the_front_bars_rate_are_the_cores_and_the_chosen_one_goes_into_the_car() {
-        JsonNode before = tree();
+        JsonNode before = fixture.tree();
         DialogFixture sizing = fixture.openTool("Tube or solid bar of the same rate…");
         sizing.checkBox("tubes.material.4130 chromoly").check();
         sizing.button("tubes.find").click();
@@ -106,10 +94,10 @@ class SizingStudiesWindowTest {
         table.selectRows(0);
         sizing.button("tubes.apply").click();
         fixture.waitFor("the analysis", () -> fixture.window.analysis().isIdle());
-        assertThat(tree().path("front").path("bar").path("section"))
+        assertThat(fixture.tree().path("front").path("bar").path("section"))
                 .isEqualTo(BarNodes.section(core.matches().get(0).size().section()));
         fixture.frame.menuItemWithPath("Edit", "Undo").click();
-        assertThat(tree()).isEqualTo(before);
+        assertThat(fixture.tree()).isEqualTo(before);
     }
 
     @Test

@@ -1,12 +1,11 @@
 package barwright.ui.sizing;
 
-import barwright.ui.Display;
+import barwright.model.Vehicle;
 import barwright.ui.ScriptedDialogs;
-import barwright.ui.action.Settings;
 import barwright.ui.app.MainWindow;
-import barwright.ui.app.Themes;
 import barwright.ui.document.Samples;
-import org.assertj.swing.core.BasicRobot;
+import barwright.ui.window.WindowFixture;
+import com.fasterxml.jackson.databind.JsonNode;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.assertj.swing.finder.WindowFinder;
@@ -19,31 +18,15 @@ import org.assertj.swing.timing.Timeout;
 import java.util.function.Supplier;
 
 /**
- * The main window on the club hatchback sample (invented) with scripted dialogs and in-memory settings, placed
- * at (100,100) inside the event-thread task that makes it (toolchain.md: clicks then land under Xvfb), and the
- * sizing views opened from its Tools menu as a person would.
+ * The main window as its own window tests open it (on the club hatchback sample, invented data), with the sizing
+ * views opened from its Tools menu as a person would, and the checks the sizing window tests share.
  */
 final class SizingWindowFixture implements AutoCloseable {
-    final Robot robot;
-    final MainWindow window;
-    final FrameFixture frame;
-    final ScriptedDialogs dialogs = new ScriptedDialogs();
-
-    SizingWindowFixture() {
-        Display.require();
-        robot = BasicRobot.robotWithNewAwtHierarchy();
-        window = GuiActionRunner.execute(() -> {
-            Themes.apply(Themes.Theme.LIGHT, 0);
-            MainWindow created = new MainWindow(Samples.open(Samples.CLUB_HATCHBACK), Settings.inMemory(), dialogs,
-                    () -> { });
-            created.setSize(1150, 880);
-            created.setLocation(100, 100);
-            return created;
-        });
-        frame = new FrameFixture(robot, window);
-        frame.show();
-        waitFor("the analysis", () -> window.analysis().isIdle() && window.results().shown() != null);
-    }
+    private final WindowFixture main = new WindowFixture();
+    final Robot robot = main.robot;
+    final MainWindow window = main.window;
+    final FrameFixture frame = main.frame;
+    final ScriptedDialogs dialogs = main.dialogs;
 
     /** Opens the sizing views through Tools > item and returns their window. */
     DialogFixture openTool(String item) {
@@ -68,8 +51,23 @@ final class SizingWindowFixture implements AutoCloseable {
         robot.waitForIdle();
     }
 
+    /** @return a copy of the open document's tree as it stands */
+    JsonNode tree() {
+        return GuiActionRunner.execute(() -> window.document().tree().deepCopy());
+    }
+
+    /** @return the car the window opens on, read by the core */
+    static Vehicle sample() {
+        return Samples.load(Samples.CLUB_HATCHBACK).vehicle();
+    }
+
+    /** @return the number at the start of a shown figure, e.g. 52.3 from "52.3 %" (either decimal sign) */
+    static double number(String text) {
+        return Double.parseDouble(text.trim().split(" ")[0].replace(',', '.'));
+    }
+
     @Override
     public void close() {
-        frame.cleanUp();
+        main.close();
     }
 }

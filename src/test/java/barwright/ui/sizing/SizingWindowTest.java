@@ -16,7 +16,6 @@ import barwright.sizing.catalogue.Catalogues;
 import barwright.sizing.catalogue.StockSize;
 import barwright.sizing.output.MapOutput;
 import barwright.solver.Progress;
-import barwright.ui.document.Samples;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
@@ -39,6 +38,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import static barwright.ui.sizing.SizingWindowFixture.number;
+import static barwright.ui.sizing.SizingWindowFixture.sample;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
@@ -62,19 +63,6 @@ class SizingWindowTest {
         if (fixture != null) {
             fixture.close();
         }
-    }
-
-    private JsonNode tree() {
-        return GuiActionRunner.execute(() -> fixture.window.document().tree().deepCopy());
-    }
-
-    private static Vehicle sample() {
-        return Samples.load(Samples.CLUB_HATCHBACK).vehicle();
-    }
-
-    /** @return the number at the start of a shown figure, e.g. 52.3 from "52.3 %" */
-    private static double number(String text) {
-        return Double.parseDouble(text.trim().split(" ")[0].replace(',', '.'));
     }
 
     private static List<StockSize> builtInSizes() {
@@ -166,7 +154,7 @@ class SizingWindowTest {
 
     @Test
     void the_chosen_candidate_goes_into_the_car_and_undo_takes_it_out() {
-        JsonNode before = tree();
+        JsonNode before = fixture.tree();
         DialogFixture sizing = searchRearFor52();
         sizing.table("search.results").selectRows(1);
         Candidate chosen = GuiActionRunner.execute(() -> {
@@ -175,7 +163,7 @@ class SizingWindowTest {
         });
         sizing.button("search.apply").click();
         fixture.waitFor("the analysis", () -> fixture.window.analysis().isIdle());
-        JsonNode rearBar = tree().path("rear").path("bar");
+        JsonNode rearBar = fixture.tree().path("rear").path("bar");
         assertThat(rearBar.path("section")).isEqualTo(BarNodes.section(chosen.bars().get(0).size().section()));
         assertThat(rearBar.path("selectedArm").asInt()).isEqualTo(chosen.bars().get(0).selectedArm());
         assertThat(fixture.window.getTitle()).contains("unsaved");
@@ -184,13 +172,13 @@ class SizingWindowTest {
                 .isCloseTo(chosen.figures().frontLoadTransferShare() * 100, within(0.05));
 
         fixture.frame.menuItemWithPath("Edit", "Undo").click();
-        assertThat(tree()).isEqualTo(before);
+        assertThat(fixture.tree()).isEqualTo(before);
     }
 
     @Test
     void the_map_has_one_cell_per_hole_pair_with_the_cars_setting_marked_and_the_full_analysis_figures()
             throws Exception {
-        JsonNode before = tree();
+        JsonNode before = fixture.tree();
         DialogFixture sizing = fixture.openTool("Arm-hole map…");
         MapView map = fixture.views().map();
         // the file's bars: 3 front arm holes, 4 rear; selectedArm 1 and 1
@@ -232,11 +220,11 @@ class SizingWindowTest {
         sizing.panel("map.cell.0.3").click();
         sizing.button("map.useHoles").requireEnabled().click();
         fixture.waitFor("the analysis", () -> fixture.window.analysis().isIdle());
-        assertThat(tree().path("front").path("bar").path("selectedArm").asInt()).isEqualTo(0);
-        assertThat(tree().path("rear").path("bar").path("selectedArm").asInt()).isEqualTo(3);
+        assertThat(fixture.tree().path("front").path("bar").path("selectedArm").asInt()).isEqualTo(0);
+        assertThat(fixture.tree().path("rear").path("bar").path("selectedArm").asInt()).isEqualTo(3);
         fixture.waitFor("the map again", () -> map.work().isIdle() && map.cells().get(3).cell().current());
         fixture.frame.menuItemWithPath("Edit", "Undo").click();
-        assertThat(tree()).isEqualTo(before);
+        assertThat(fixture.tree()).isEqualTo(before);
     }
 
     @Test

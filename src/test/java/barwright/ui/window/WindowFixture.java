@@ -16,15 +16,16 @@ import org.assertj.swing.timing.Timeout;
 
 /**
  * Opens the main window on the sample for a test, placed at (100,100) inside the EDT task that creates it
- * (toolchain.md: clicks then land reliably under Xvfb), with in-memory settings and scripted dialogs.
+ * (toolchain.md: clicks then land reliably under Xvfb), with in-memory settings and scripted dialogs. Public
+ * so that the window tests of other views (barwright.ui.sizing) open the window the same way.
  */
-final class WindowFixture implements AutoCloseable {
-    final Robot robot;
-    final MainWindow window;
-    final FrameFixture frame;
-    final ScriptedDialogs dialogs = new ScriptedDialogs();
+public final class WindowFixture implements AutoCloseable {
+    public final Robot robot;
+    public final MainWindow window;
+    public final FrameFixture frame;
+    public final ScriptedDialogs dialogs = new ScriptedDialogs();
 
-    WindowFixture() {
+    public WindowFixture() {
         Display.require();
         robot = BasicRobot.robotWithNewAwtHierarchy();
         window = GuiActionRunner.execute(() -> {
@@ -41,7 +42,7 @@ final class WindowFixture implements AutoCloseable {
     }
 
     /** Waits until no analysis runs or waits and results are on screen. */
-    void settle() {
+    public void settle() {
         Pause.pause(new Condition("the analysis to settle") {
             @Override
             public boolean test() {
