@@ -56,7 +56,7 @@ final class CompareView extends JPanel {
     private final WrappingText hint = new WrappingText("Add two to four setups. To see what a change does, add the "
             + "open car, change it in the main window, and add it again; or add a variant by key paths of the "
             + "vehicle file (arm holes count from 0 there). Each setup's figures show their difference from the first "
-            + "in brackets.");
+            + "in brackets, in the same unit.");
     private final WorkStrip work = new WorkStrip("compare");
     private Comparison shown;
 
@@ -71,7 +71,7 @@ final class CompareView extends JPanel {
                 + "front.bar.section.outerDiameterMm=24; rear.bar.selectedArm=3");
         setupTable = new FigureTable("compare.setups", setups, new String[]{"What the setup is called",
             "Where it came from"}, new int[]{220, 640});
-        figureTable = new FigureTable("compare.figures", figures, new String[0], new int[]{200, 200, 200, 200, 200});
+        figureTable = new FigureTable("compare.figures", figures, new String[0], new int[]{180, 170, 170, 170, 170});
         charts.setName("compare.charts");
 
         JButton addOpen = button("compare.addOpen", "Add the open car as it is now", this::addOpenCar);
@@ -103,7 +103,7 @@ final class CompareView extends JPanel {
         charts.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
         charts.setPreferredSize(new java.awt.Dimension(520, 400));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, figureScroll, charts);
-        split.setResizeWeight(0.5);
+        split.setResizeWeight(0.6);
         split.setBorder(null);
         add(top, BorderLayout.NORTH);
         add(split, BorderLayout.CENTER);
@@ -205,7 +205,7 @@ final class CompareView extends JPanel {
     private void redraw() {
         figures.fireTableStructureChanged();
         for (int i = 0; i < figureTable.getColumnCount(); i++) {
-            figureTable.getColumnModel().getColumn(i).setPreferredWidth(200);
+            figureTable.getColumnModel().getColumn(i).setPreferredWidth(i == 0 ? 180 : 170);
         }
         int selected = Math.max(0, charts.getSelectedIndex());
         charts.removeAll();
@@ -239,6 +239,9 @@ final class CompareView extends JPanel {
             text = String.format(context.view().locale(), "%.2f", value);
         } else {
             text = format.text(value, row.quantity());
+            if (signed) {
+                text = text.split(" ")[0]; // the unit stands after the value beside it
+            }
         }
         return signed && !text.startsWith("-") ? "+" + text : text;
     }

@@ -12,12 +12,16 @@ import java.util.Map;
 
 /** Which materials to try: each bar's own, and any of the built-in library, as tick boxes. Event thread. */
 final class MaterialChoice extends JPanel {
-    private final JCheckBox own = new JCheckBox("Each bar's own material", true);
+    private final JCheckBox own;
     private final Map<Material, JCheckBox> library = new LinkedHashMap<>();
 
-    /** @param name a stem for the boxes' names, e.g. "search" gives "search.ownMaterial" */
-    MaterialChoice(String name) {
+    /**
+     * @param name     a stem for the boxes' names, e.g. "search" gives "search.ownMaterial"
+     * @param ownWords the first box's words, e.g. "Each bar's own material"
+     */
+    MaterialChoice(String name, String ownWords) {
         super(new java.awt.BorderLayout());
+        own = new JCheckBox(ownWords, true);
         setOpaque(false);
         own.setName(name + ".ownMaterial");
         own.setToolTipText("The material each bar has in the vehicle file");

@@ -34,7 +34,7 @@ final class SearchForm extends Rows {
     private final JCheckBox rearDown = new JCheckBox("Inside rear wheel stays down up to the limit");
     private final QuantityField maxMass;
     private final QuantityField maxDiameter;
-    private final MaterialChoice materials = new MaterialChoice("search");
+    private final MaterialChoice materials = new MaterialChoice("search", "Each bar's own material");
     private final CatalogueChoice catalogues = new CatalogueChoice("search", id -> true);
     private final QuantityField tubeDiameter;
     private final JSpinner count = new JSpinner(new SpinnerNumberModel(SizingRequest.DEFAULT_MAX_RESULTS, 1, 100, 1));

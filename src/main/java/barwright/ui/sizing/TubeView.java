@@ -44,7 +44,7 @@ final class TubeView extends JPanel {
     private final JRadioButton own = new JRadioButton("the car's own bar", true);
     private final JRadioButton given = new JRadioButton("a solid bar in its place of", false);
     private final QuantityField diameter;
-    private final MaterialChoice materials = new MaterialChoice("tubes");
+    private final MaterialChoice materials = new MaterialChoice("tubes", "The bar's own material");
     private final CatalogueChoice catalogues = new CatalogueChoice("tubes", id -> id.startsWith("tube"));
     private final JButton find = new JButton("Find tubes");
     private final JButton apply = new JButton("Put the chosen tube in the car");
@@ -77,7 +77,7 @@ final class TubeView extends JPanel {
         ButtonGroup which = new ButtonGroup();
         which.add(own);
         which.add(given);
-        table = new FigureTable("tubes.results", model, HELP, new int[]{170, 150, 95, 95, 70, 115, 100, 105, 95});
+        table = new FigureTable("tubes.results", model, HELP, new int[]{195, 140, 95, 95, 70, 115, 100, 105, 95});
         table.getSelectionModel().addListSelectionListener(event -> refreshApply());
         find.addActionListener(event -> find());
         apply.setToolTipText("Writes the chosen tube and its material into the open car (same hole); Edit > Undo "
