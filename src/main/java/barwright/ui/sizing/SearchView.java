@@ -23,7 +23,6 @@ import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 
 /**
  * Sizing a bar (or both) to a target: the settings on the left, the ranked stock sizes on the right with the
@@ -137,8 +136,11 @@ final class SearchView extends JPanel {
                 .append(String.format(format.view().locale(), "%,d", result.accepted()))
                 .append(pairs ? " of those checked in full" : "").append(" met every limit");
         List<String> left = new ArrayList<>();
-        for (Map.Entry<Rejection, Long> entry : result.rejections().entrySet()) {
-            left.add(String.format(format.view().locale(), "%,d", entry.getValue()) + " " + entry.getKey().words());
+        for (Rejection reason : Rejection.values()) { // in a fixed order, most basic check first
+            Long count = result.rejections().get(reason);
+            if (count != null) {
+                left.add(String.format(format.view().locale(), "%,d", count) + " " + reason.words());
+            }
         }
         text.append(left.isEmpty() ? "." : "; left out: " + String.join(", ", left) + ".");
         if (result.candidates().isEmpty()) {
