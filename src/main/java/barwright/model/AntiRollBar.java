@@ -55,8 +55,4 @@ public record AntiRollBar(Material material, BarSection section, UBarDimensions 
     public AntiRollBar withSelectedArm(int newArm) {
         return new AntiRollBar(material, section, dimensions, centreline, newArm, linkMotionRatio);
     }
-
-    public AntiRollBar withDimensions(UBarDimensions newDimensions) {
-        return new AntiRollBar(material, section, newDimensions, centreline, selectedArm, linkMotionRatio);
-    }
 }

@@ -33,12 +33,4 @@ public record UBarDimensions(double torsionLength, double bushingSpan, List<Doub
     public double longestArm() {
         return armLengths.stream().mapToDouble(Double::doubleValue).max().orElseThrow();
     }
-
-    public UBarDimensions withArmLengths(List<Double> newArms) {
-        return new UBarDimensions(torsionLength, bushingSpan, newArms);
-    }
-
-    public UBarDimensions withTorsionLength(double newLength) {
-        return new UBarDimensions(newLength, Math.min(bushingSpan, newLength), armLengths);
-    }
 }
