@@ -13,14 +13,14 @@ import static barwright.units.Constants.STANDARD_GRAVITY;
 
 /**
  * Warnings for a car whose every input is within its allowed range but whose answers leave what the model
- * describes or what a racer would believe (model.md 11): an axle that moves load onto its inside wheel, an
- * outside wheel that would carry less than nothing, a grip limit of almost nothing, a body that leans into
- * the turn or rolls past any suspension's travel.
+ * describes or what a racer would believe (model.md, "When the answer leaves the model"): an axle that
+ * moves load onto its inside wheel, an outside wheel that would carry less than nothing, a grip limit of
+ * almost nothing, a body that leans into the turn or rolls past any suspension's travel.
  */
 final class ModelRangeWarnings {
-    /** A grip limit below this (m/s^2) is called out: 0.05 g (model.md 11). */
+    /** A grip limit below this (m/s^2) is called out: 0.05 g (model.md, the same section). */
     static final double LOW_LIMIT = 0.05 * STANDARD_GRAVITY;
-    /** A roll gradient above this (rad per m/s^2) is called out: 15 deg/g (model.md 11). */
+    /** A roll gradient above this (rad per m/s^2) is called out: 15 deg/g (model.md, the same section). */
     static final double LARGE_ROLL_GRADIENT = 15 * RADIANS_PER_DEGREE / STANDARD_GRAVITY;
 
     private ModelRangeWarnings() {

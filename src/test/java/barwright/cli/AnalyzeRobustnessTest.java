@@ -20,7 +20,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /**
  * Files that used to get through the reader and then fail in the analysis, or give figures with no warning,
- * each run through {@code analyze} as a user would (the reproducers found by fuzzing, docs/model.md 11).
+ * each run through {@code analyze} as a user would (the reproducers found by fuzzing; docs/model.md, "When
+ * the answer leaves the model").
  */
 class AnalyzeRobustnessTest {
     private static final ObjectMapper MAPPER = new ObjectMapper();
