@@ -2,7 +2,7 @@ package barwright.ui.insight;
 
 import barwright.insight.ChassisPoint;
 import barwright.insight.ChassisStudyResult;
-import barwright.insight.ChassisText;
+import barwright.report.insight.ChassisText;
 import barwright.ui.chart.ChartStyle;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Quantity;

@@ -2,8 +2,8 @@ package barwright.ui.insight;
 
 import barwright.insight.SensitivityResult;
 import barwright.insight.SensitivityRow;
-import barwright.insight.SensitivityText;
 import barwright.insight.Tendency;
+import barwright.report.insight.SensitivityText;
 import barwright.ui.chart.ChartStyle;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Figures;

@@ -1,4 +1,4 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
 import barwright.sizing.preload.CornerLoads;
 import barwright.sizing.preload.LinkPreload;

@@ -1,5 +1,10 @@
-package barwright.insight;
+package barwright.report.insight;
 
+import barwright.insight.EnvelopePoint;
+import barwright.insight.LiftBoundary;
+import barwright.insight.LiftEnvelopeResult;
+import barwright.insight.LongitudinalRange;
+import barwright.insight.Wheel;
 import barwright.model.TurnDirection;
 import barwright.report.Cautions;
 import barwright.report.ReportJson;

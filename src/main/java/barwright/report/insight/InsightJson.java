@@ -1,5 +1,15 @@
-package barwright.insight;
+package barwright.report.insight;
 
+import barwright.insight.BalanceFigures;
+import barwright.insight.ChassisPoint;
+import barwright.insight.ChassisStudyResult;
+import barwright.insight.EnvelopePoint;
+import barwright.insight.InputChange;
+import barwright.insight.LiftBoundary;
+import barwright.insight.LiftEnvelopeResult;
+import barwright.insight.LongitudinalRange;
+import barwright.insight.SensitivityResult;
+import barwright.insight.SensitivityRow;
 import barwright.model.TurnDirection;
 import barwright.report.ReportJson;
 import barwright.units.DisplayUnit;

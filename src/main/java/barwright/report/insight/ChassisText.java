@@ -1,5 +1,8 @@
-package barwright.insight;
+package barwright.report.insight;
 
+import barwright.insight.ChassisPoint;
+import barwright.insight.ChassisStudy;
+import barwright.insight.ChassisStudyResult;
 import barwright.report.Cautions;
 import barwright.units.Figures;
 import barwright.units.Quantity;

@@ -1,5 +1,9 @@
-package barwright.insight;
+package barwright.report.insight;
 
+import barwright.insight.BalanceFigures;
+import barwright.insight.InputChange;
+import barwright.insight.SensitivityResult;
+import barwright.insight.SensitivityRow;
 import barwright.report.Cautions;
 import barwright.report.ReportJson;
 import barwright.units.DisplayUnit;
