@@ -10,6 +10,8 @@ import barwright.units.UnitSystem;
 
 import java.util.Locale;
 
+import static barwright.units.Conversions.toPercent;
+
 /** What a flexible chassis costs, in words and a table, for the command line and the window. */
 public final class ChassisText {
     /** The table shows every this many points of the sweep (ten a decade). */
@@ -77,10 +79,10 @@ public final class ChassisText {
     }
 
     private static String wholePercent(double fraction) {
-        return String.format(Locale.ROOT, "%.0f %%", fraction * 100);
+        return String.format(Locale.ROOT, "%.0f %%", toPercent(fraction));
     }
 
     private static String percent(double fraction) {
-        return String.format(Locale.ROOT, "%.1f %%", fraction * 100);
+        return String.format(Locale.ROOT, "%.1f %%", toPercent(fraction));
     }
 }
