@@ -76,7 +76,7 @@ final class SearchPlan {
         throw new IllegalArgumentException(String.format(Locale.ROOT, "Too many pairs to try: %,d front bars "
                         + "against %,d rear bars make %,d pairs, and one search tries at most %,d. Narrow it: tick "
                         + "fewer materials (%d ticked) or fewer catalogues (%d stock sizes), or size one bar at a "
-                        + "time (Size the: front bar, then rear bar).", front, rear,
+                        + "time (choose \"front bar\", then \"rear bar\", under Which bar).", front, rear,
                 front * rear, BarSearch.MAX_PAIRS, frontChoices.materials().size(), frontChoices.sizes().size()));
     }
 

@@ -245,8 +245,8 @@ final class SearchView extends JPanel {
     private void documentChanged(DocumentEvent event) {
         carShown.request();
         if (event.kind() == DocumentEvent.Kind.REPLACED && shown != null) {
-            clearResults("Another car was opened (" + context.document().displayName() + "): the results for the "
-                    + "car before it were cleared. Press Find bars to size this one.");
+            clearResults("Another car was opened: " + context.document().displayName() + ". The results for the "
+                    + "car before it were cleared; press Find bars to size this one.");
             return;
         }
         describe();

@@ -133,8 +133,8 @@ final class TubeView extends JPanel {
             shown = null;
             model.fireTableDataChanged();
             applied.setText(" ");
-            solid.setText("Another car was opened (" + context.document().displayName() + "): the tubes found for the "
-                    + "car before it were cleared. Press Find tubes to look again.");
+            solid.setText("Another car was opened: " + context.document().displayName() + ". The tubes found for the "
+                    + "car before it were cleared; press Find tubes to look again.");
         }
         describe();
         refreshApply();
