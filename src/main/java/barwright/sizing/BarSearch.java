@@ -5,6 +5,7 @@ import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.Vehicle;
 import barwright.physics.ImpossibleVehicleException;
+import barwright.physics.RollBalance;
 import barwright.sizing.catalogue.StockSize;
 import barwright.solver.Progress;
 

@@ -7,6 +7,7 @@ import barwright.model.Material;
 import barwright.model.SolidSection;
 import barwright.model.TubeSection;
 import barwright.physics.ImpossibleVehicleException;
+import barwright.physics.RollBalance;
 import barwright.solver.RootFinder;
 
 import java.util.function.DoubleFunction;
