@@ -95,13 +95,9 @@ public final class ChassisStudy {
     }
 
     /**
-     * @return the chassis stiffness above which the body of the car as it is has a stable roll position
-     *     (N m/rad): 0 where each body end can hold its share of the sprung mass on its own axle (model.md 6)
+     * @return the chassis stiffness above which the body of that car has a stable roll position (N m/rad): 0
+     *     where each body end can hold its share of the sprung mass on its own axle (model.md 6)
      */
-    public double stabilityLimit() {
-        return stabilityLimit(base);
-    }
-
     private static double stabilityLimit(AnalysisResult result) {
         return RollResponse.chassisStabilityLimit(result.masses(), result.front().stiffness().rollStiffness(),
                 result.rear().stiffness().rollStiffness());
@@ -165,7 +161,7 @@ public final class ChassisStudy {
     public ChassisStudyResult compute() {
         List<String> notes = new ArrayList<>();
         double total = totalRollStiffness();
-        double limit = stabilityLimit();
+        double limit = stabilityLimit(base);
         List<ChassisPoint> sweep = new ArrayList<>(POINTS);
         int leftOut = 0;
         for (int i = 0; i < POINTS; i++) {

@@ -64,17 +64,17 @@ public final class AnalysisPipeline {
     }
 
     /** @return the axle's tyre grip: the one place the turn stage takes its tyres from */
-    public AxleGrip grip(AxlePosition position) {
+    private AxleGrip grip(AxlePosition position) {
         return position == AxlePosition.FRONT ? frontGrip : rearGrip;
     }
 
     /** @return half of (static axle load / g - unsprung axle mass) (kg) */
-    public double cornerSprungMass(AxlePosition position) {
+    private double cornerSprungMass(AxlePosition position) {
         return position == AxlePosition.FRONT ? frontCornerSprungMass : rearCornerSprungMass;
     }
 
     /** @return the roll-centre height the linear stage uses for that axle (m): the one place it is read */
-    public double rollCentreHeight(AxlePosition position) {
+    private double rollCentreHeight(AxlePosition position) {
         return vehicle.axle(position).rollCentreHeight();
     }
 
@@ -82,7 +82,7 @@ public final class AnalysisPipeline {
      * The one symmetry rule: where the static wheel loads are the same left and right, the car turns right
      * exactly as it turns left, so the right turn's limits and handling curve are the left turn's.
      */
-    public boolean mirrorSymmetric() {
+    private boolean mirrorSymmetric() {
         return loads.symmetric();
     }
 
@@ -125,12 +125,14 @@ public final class AnalysisPipeline {
      * @param curvePoints points of each handling curve (at least 2)
      */
     public TurnPair turns(RollBalance balance, int curvePoints) {
+        AxleGrip front = grip(AxlePosition.FRONT);
+        AxleGrip rear = grip(AxlePosition.REAR);
         TurnResult left = TurnAnalysis.analyse(cornering(vehicle, masses, TurnDirection.LEFT, balance),
-                masses.mass(), masses.frontMassFraction(), frontGrip, rearGrip, curvePoints);
+                masses.mass(), masses.frontMassFraction(), front, rear, curvePoints);
         SteadyCornering rightCornering = cornering(vehicle, masses, TurnDirection.RIGHT, balance);
         TurnResult right = mirrorSymmetric() ? left.withCornering(rightCornering)
-                : TurnAnalysis.analyse(rightCornering, masses.mass(), masses.frontMassFraction(), frontGrip,
-                rearGrip, curvePoints);
+                : TurnAnalysis.analyse(rightCornering, masses.mass(), masses.frontMassFraction(), front, rear,
+                curvePoints);
         return new TurnPair(left, right);
     }
 
@@ -162,17 +164,17 @@ public final class AnalysisPipeline {
         RollResponse suspensionRoll = RollResponse.of(masses, frontStiffness.suspensionRollStiffness(),
                 rearStiffness.suspensionRollStiffness(), vehicle.chassisTorsionalStiffness());
 
-        double frontCornering = frontGrip.corneringStiffness(loads.leftFront(), loads.rightFront());
-        double rearCornering = rearGrip.corneringStiffness(loads.leftRear(), loads.rightRear());
+        double frontCornering = grip(AxlePosition.FRONT).corneringStiffness(loads.leftFront(), loads.rightFront());
+        double rearCornering = grip(AxlePosition.REAR).corneringStiffness(loads.leftRear(), loads.rightRear());
         // K = W_f/C_f - W_r/C_r in rad per g (Gillespie, Fundamentals of Vehicle Dynamics, ch. 6), per m/s^2 here
         double understeer = (loads.frontAxle() / frontCornering - loads.rearAxle() / rearCornering)
                 / STANDARD_GRAVITY;
         TurnPair turns = turns(balance, HANDLING_CURVE_POINTS);
 
         AxleResult front = new AxleResult(frontStiffness, frontBar, balance.front(), frontCornering,
-                frontCornerSprungMass);
+                cornerSprungMass(AxlePosition.FRONT));
         AxleResult rear = new AxleResult(rearStiffness, rearBar, balance.rear(), rearCornering,
-                rearCornerSprungMass);
+                cornerSprungMass(AxlePosition.REAR));
         double rollShare = balance.frontRollStiffness() / (balance.frontRollStiffness() + balance.rearRollStiffness());
         AnalysisResult withoutWarnings = new AnalysisResult(vehicle, masses, front, rear, balance.roll(),
                 suspensionRoll, balance.frontLoadTransferShare(), rollShare, understeer, turns.left(),

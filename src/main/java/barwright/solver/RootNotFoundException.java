@@ -18,18 +18,11 @@ public final class RootNotFoundException extends RuntimeException {
         BUDGET_SPENT
     }
 
-    private final String subject;
     private final Reason reason;
 
     public RootNotFoundException(String subject, Reason reason, String detail) {
         super("Could not solve for " + subject + ": " + detail + ".");
-        this.subject = subject;
         this.reason = reason;
-    }
-
-    /** @return what was being solved for */
-    public String subject() {
-        return subject;
     }
 
     public Reason reason() {

@@ -15,6 +15,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;
 
+import static barwright.units.Constants.STANDARD_GRAVITY;
+
 /**
  * Two to four setups side by side: their figures (with the difference of each from the first) and the main
  * charts with one line per setup (the turn to the left; a car with corner masses may differ to the right,
@@ -33,7 +35,7 @@ public record Comparison(List<Configuration> configurations, List<AnalysisResult
     /** Points of the roll and wheel-load lines. */
     static final int CHART_POINTS = 60;
     /** Lifts past this a_y are shown as staying down, as the report does (files.md): 3 g, in m/s^2. */
-    private static final double LIFT_CEILING = 3 * barwright.units.Constants.STANDARD_GRAVITY;
+    private static final double LIFT_CEILING = 3 * STANDARD_GRAVITY;
 
     public Comparison {
         configurations = List.copyOf(configurations);
