@@ -1,9 +1,11 @@
 package barwright.cli;
 
+import barwright.io.FileWriteException;
 import barwright.io.VehicleFileException;
 import barwright.physics.ImpossibleVehicleException;
 
 import java.io.PrintStream;
+import java.nio.file.NoSuchFileException;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
@@ -60,7 +62,10 @@ public final class Cli {
         } catch (ImpossibleVehicleException impossible) {
             err.println("barwright: this car cannot be analysed: " + impossible.getMessage());
             return REFUSED;
-        } catch (java.nio.file.NoSuchFileException missing) {
+        } catch (FileWriteException unwritable) {
+            err.println("barwright: " + unwritable.getMessage());
+            return REFUSED;
+        } catch (NoSuchFileException missing) {
             err.println("barwright: file not found: " + missing.getFile());
             return REFUSED;
         } catch (Exception | Error internal) {

@@ -1,9 +1,10 @@
 package barwright.cli;
 
+import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileWriter;
 import barwright.report.Cautions;
-import barwright.sizing.VehicleEdits;
+import barwright.io.VehicleEdits;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
 import barwright.sizing.output.ComparisonJson;
@@ -86,7 +87,7 @@ final class CompareCommand implements Command {
         if (csv != null) {
             StringWriter text = new StringWriter();
             SweepOutput.chartsCsv(comparison.charts(), text);
-            VehicleFileWriter.writeAtomically(Path.of(csv), text.toString());
+            AtomicFileWriter.writeText(Path.of(csv), text.toString());
         }
         if (parsed.has("json")) {
             out.print(VehicleFileWriter.toJson(ComparisonJson.of(comparison)));

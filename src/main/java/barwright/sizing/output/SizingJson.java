@@ -2,7 +2,7 @@ package barwright.sizing.output;
 
 import barwright.sizing.BarChoice;
 import barwright.sizing.BarFigures;
-import barwright.sizing.BarNodes;
+import barwright.io.BarNodes;
 import barwright.sizing.Candidate;
 import barwright.sizing.ExactSolution;
 import barwright.sizing.Rejection;
@@ -13,6 +13,10 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.Map;
+
+import static barwright.io.VehicleKeys.MATERIAL;
+import static barwright.io.VehicleKeys.SECTION;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
 
 /**
  * The sizing result for scripts ({@code size FILE --json}): each candidate holds the material, section and
@@ -84,9 +88,9 @@ public final class SizingJson {
 
     private static void putChoice(ObjectNode node, BarChoice choice, BarFigures bar) {
         node.put("sizeLabel", choice.size().label());
-        node.set("material", BarNodes.material(choice.material()));
-        node.set("section", BarNodes.section(choice.size().section()));
-        node.put("selectedArm", choice.selectedArm());
+        node.set(MATERIAL, BarNodes.material(choice.material()));
+        node.set(SECTION, BarNodes.section(choice.size().section()));
+        node.put(SELECTED_ARM, choice.selectedArm());
         Json.putBar(node, bar);
     }
 }

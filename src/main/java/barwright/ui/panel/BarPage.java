@@ -3,7 +3,7 @@ package barwright.ui.panel;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
-import barwright.ui.document.KeyPath;
+import barwright.io.KeyPath;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.FieldCatalogue;
 import barwright.ui.field.NumberText;
@@ -23,6 +23,18 @@ import javax.swing.JPanel;
 import java.awt.FlowLayout;
 import java.util.ArrayList;
 import java.util.List;
+
+import static barwright.io.VehicleKeys.DENSITY_KG_PER_M3;
+import static barwright.io.VehicleKeys.MATERIAL;
+import static barwright.io.VehicleKeys.OUTER_DIAMETER_MM;
+import static barwright.io.VehicleKeys.SECTION;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
+import static barwright.io.VehicleKeys.SHAPE;
+import static barwright.io.VehicleKeys.SHEAR_MODULUS_GPA;
+import static barwright.io.VehicleKeys.SOLID;
+import static barwright.io.VehicleKeys.WALL_MM;
+import static barwright.io.VehicleKeys.YIELD_STRENGTH_MPA;
+import static barwright.io.VehicleKeys.YOUNGS_MODULUS_GPA;
 
 /** One axle's anti-roll bar: fitted or not, material, section, lengths, arm holes and the link. */
 final class BarPage extends EditorPage {
@@ -123,10 +135,10 @@ final class BarPage extends EditorPage {
                 + "wall sets its strength).", 300));
         shape.addActionListener(event -> chooseShape(shape.getSelectedIndex() == 1));
         form.field("Shape", shape, null, null);
-        form.field(new NumberField(document, view, KeyPath.of(bar + ".section").child("outerDiameterMm"),
+        form.field(new NumberField(document, view, KeyPath.of(bar + "." + SECTION).child(OUTER_DIAMETER_MM),
                 FieldCatalogue.DIAMETER));
         if ("tube".equals(text(bar + ".section.shape"))) {
-            form.field(new NumberField(document, view, KeyPath.of(bar + ".section").child("wallMm"),
+            form.field(new NumberField(document, view, KeyPath.of(bar + "." + SECTION).child(WALL_MM),
                     FieldCatalogue.WALL));
         }
     }
@@ -188,12 +200,12 @@ final class BarPage extends EditorPage {
     /** A plain solid steel U-bar to start from when a bar is added where there was none. */
     private static ObjectNode defaultBar() {
         ObjectNode node = JsonNodeFactory.instance.objectNode();
-        node.putObject("material").put("name", MaterialLibrary.SPRING_STEEL.name());
-        node.putObject("section").put("shape", "solid").put("outerDiameterMm", 18);
+        node.putObject(MATERIAL).put("name", MaterialLibrary.SPRING_STEEL.name());
+        node.putObject(SECTION).put(SHAPE, SOLID).put(OUTER_DIAMETER_MM, 18);
         node.put("torsionLengthMm", 900);
         node.put("bushingSpanMm", 760);
         node.putArray("armLengthsMm").add(180).add(200).add(220);
-        node.put("selectedArm", 1);
+        node.put(SELECTED_ARM, 1);
         node.put("linkMotionRatio", 0.8);
         return node;
     }
@@ -208,10 +220,10 @@ final class BarPage extends EditorPage {
             Material base = currentMaterial();
             ObjectNode custom = JsonNodeFactory.instance.objectNode();
             custom.put("name", "custom " + base.name());
-            custom.put("youngsModulusGPa", NumberText.forFile(base.youngsModulus() / 1e9));
-            custom.put("shearModulusGPa", NumberText.forFile(base.shearModulus() / 1e9));
-            custom.put("densityKgPerM3", NumberText.forFile(base.density()));
-            custom.put("yieldStrengthMPa", NumberText.forFile(base.yieldStrength() / 1e6));
+            custom.put(YOUNGS_MODULUS_GPA, NumberText.forFile(base.youngsModulus() / 1e9));
+            custom.put(SHEAR_MODULUS_GPA, NumberText.forFile(base.shearModulus() / 1e9));
+            custom.put(DENSITY_KG_PER_M3, NumberText.forFile(base.density()));
+            custom.put(YIELD_STRENGTH_MPA, NumberText.forFile(base.yieldStrength() / 1e6));
             document.edit(path, custom, null, this);
         } else {
             document.edit(path, JsonNodeFactory.instance.objectNode().put("name", name), null, this);
@@ -229,14 +241,14 @@ final class BarPage extends EditorPage {
             return;
         }
         document.editAll(tree -> {
-            ObjectNode section = (ObjectNode) KeyPath.of(bar + ".section").get(tree);
+            ObjectNode section = (ObjectNode) KeyPath.of(bar + "." + SECTION).get(tree);
             section.set("shape", TextNode.valueOf(tube ? "tube" : "solid"));
             if (tube) {
-                JsonNode diameter = section.get("outerDiameterMm");
+                JsonNode diameter = section.get(OUTER_DIAMETER_MM);
                 double outside = diameter != null && diameter.isNumber() ? diameter.doubleValue() : 25;
-                section.put("wallMm", NumberText.forFile(Math.min(3.0, outside / 6)));
+                section.put(WALL_MM, NumberText.forFile(Math.min(3.0, outside / 6)));
             } else {
-                section.remove("wallMm");
+                section.remove(WALL_MM);
             }
         }, this);
     }
@@ -255,9 +267,9 @@ final class BarPage extends EditorPage {
             if (arms.size() > 1) {
                 arms.remove(arms.size() - 1);
                 ObjectNode barNode = (ObjectNode) KeyPath.of(bar).get(tree);
-                JsonNode selected = barNode.get("selectedArm");
+                JsonNode selected = barNode.get(SELECTED_ARM);
                 if (selected != null && selected.canConvertToInt() && selected.intValue() >= arms.size()) {
-                    barNode.put("selectedArm", arms.size() - 1);
+                    barNode.put(SELECTED_ARM, arms.size() - 1);
                 }
             }
         }, this);

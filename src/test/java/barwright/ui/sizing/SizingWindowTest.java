@@ -4,7 +4,7 @@ import barwright.io.VehicleFileReader;
 import barwright.model.AxlePosition;
 import barwright.model.Vehicle;
 import barwright.physics.VehicleAnalysis;
-import barwright.sizing.BarNodes;
+import barwright.io.BarNodes;
 import barwright.sizing.BarSearch;
 import barwright.sizing.Candidate;
 import barwright.sizing.Constraints;

@@ -1,10 +1,8 @@
-package barwright.sizing;
+package barwright.io;
 
-import barwright.io.Problem;
-import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileException;
 import org.junit.jupiter.api.Test;
 
+import java.nio.file.Path;
 import java.util.List;
 
 import static org.assertj.core.api.Assertions.assertThat;
@@ -14,10 +12,10 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 class VehicleEditsTest {
     @Test
     void aVariantKeepsUnknownKeysAndChangesWhatItNames() throws Exception {
-        VehicleDocument document = SizingFixtures.hatchback();
+        VehicleDocument document = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json"));
         var tree = document.editableTree();
         tree.put("myOwnKey", "kept");
-        VehicleDocument withKey = barwright.io.VehicleFileReader.fromTree(tree);
+        VehicleDocument withKey = VehicleFileReader.fromTree(tree);
         VehicleDocument changed = VehicleEdits.withEdits(withKey, List.of("rear.bar.selectedArm=3",
                 "front.bar.armLengthsMm[0]=185", "rear.bar.material={\"name\": \"spring steel\"}"));
         assertThat(changed.tree().path("myOwnKey").asText()).isEqualTo("kept");
@@ -28,7 +26,7 @@ class VehicleEditsTest {
 
     @Test
     void aBadValueIsRefusedWithItsKeyPath() throws Exception {
-        VehicleDocument document = SizingFixtures.hatchback();
+        VehicleDocument document = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json"));
         assertThatThrownBy(() -> VehicleEdits.withEdits(document, List.of("front.bar.section.outerDiameterMm=500")))
                 .isInstanceOfSatisfying(VehicleFileException.class, refused -> assertThat(refused.problems())
                         .extracting(Problem::path).contains("front.bar.section.outerDiameterMm"));
