@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonStreamContext;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.io.JsonEOFException;
@@ -183,12 +184,10 @@ public final class JsonInput {
         return true;
     }
 
-    /** One open object or list, for the key path of a message and the duplicate-key check. */
+    /** One open object or list, for the duplicate-key check. */
     private static final class Level {
         final boolean object;
         final Set<String> keys = new HashSet<>();
-        String key;
-        int index = -1;
 
         Level(boolean object) {
             this.object = object;
@@ -208,20 +207,18 @@ public final class JsonInput {
                             Level level = levels.peek();
                             String key = parser.currentName();
                             if (key.length() > MAX_KEY_LENGTH) {
-                                throw refused("refused", parser, levels, "a key of " + key.length() + " characters (\""
+                                throw refused("refused", parser, "a key of " + key.length() + " characters (\""
                                         + key.substring(0, 20) + "...\"): a key has at most " + MAX_KEY_LENGTH
                                         + " characters");
                             }
-                            level.key = key;
                             if (!level.keys.add(key)) {
-                                throw refused("not valid JSON", parser, levels, "the key \"" + key + "\" appears twice in the same "
+                                throw refused("not valid JSON", parser, "the key \"" + key + "\" appears twice in the same "
                                         + "object: give each key once");
                             }
                         }
                         case START_OBJECT, START_ARRAY -> {
-                            nextValue(levels);
                             if (levels.size() >= MAX_NESTING) {
-                                throw refused("refused", parser, levels, "the file is nested too deeply: more than "
+                                throw refused("refused", parser, "the file is nested too deeply: more than "
                                         + MAX_NESTING + " levels of {...} and [...]");
                             }
                             levels.push(new Level(token == JsonToken.START_OBJECT));
@@ -231,9 +228,8 @@ public final class JsonInput {
                             rootDone = levels.isEmpty();
                         }
                         default -> {
-                            nextValue(levels);
                             if (token.isNumeric() && parser.getTextLength() > MAX_NUMBER_LENGTH) {
-                                throw refused("refused", parser, levels, "a number of " + parser.getTextLength()
+                                throw refused("refused", parser, "a number of " + parser.getTextLength()
                                         + " characters: a number has at most " + MAX_NUMBER_LENGTH);
                             }
                             rootDone = levels.isEmpty();
@@ -241,10 +237,10 @@ public final class JsonInput {
                     }
                 }
             } catch (JsonEOFException cutShort) {
-                throw new JsonInputException("not valid JSON" + at(cutShort.getLocation(), path(levels))
+                throw new JsonInputException("not valid JSON" + at(cutShort.getLocation(), path(parser))
                         + ": the text ends before the JSON is complete (a closing }, ] or \" is missing)");
             } catch (JsonProcessingException bad) {
-                throw new JsonInputException("not valid JSON" + at(bad.getLocation(), path(levels)) + ": "
+                throw new JsonInputException("not valid JSON" + at(bad.getLocation(), path(parser)) + ": "
                         + describe(text, bad.getLocation()));
             }
             try {
@@ -262,43 +258,47 @@ public final class JsonInput {
         }
     }
 
-    private static void nextValue(Deque<Level> levels) {
-        Level level = levels.peek();
-        if (level != null && !level.object) {
-            level.index++;
-        }
+    private static JsonInputException refused(String prefix, JsonParser parser, String what) {
+        return new JsonInputException(prefix + at(parser.currentTokenLocation(), path(parser)) + ": " + what);
     }
 
-    private static JsonInputException refused(String prefix, JsonParser parser, Deque<Level> levels, String what) {
-        return new JsonInputException(prefix + at(parser.currentTokenLocation(), path(levels)) + ": " + what);
-    }
-
-    /** @return the key path of the value being read, e.g. {@code front.bar.armLengthsMm[1]} */
-    private static String path(Deque<Level> levels) {
-        StringBuilder path = new StringBuilder();
-        var outermostFirst = levels.descendingIterator();
-        while (outermostFirst.hasNext()) {
-            Level level = outermostFirst.next();
-            if (level.object && level.key != null) {
-                path.append(path.length() == 0 ? "" : ".").append(level.key);
-            } else if (!level.object && level.index >= 0) {
-                path.append('[').append(level.index).append(']');
+    /** @return the key path of the value the parser is at, e.g. {@code front.bar.armLengthsMm[1]} */
+    private static String path(JsonParser parser) {
+        Deque<String> steps = new ArrayDeque<>();
+        for (JsonStreamContext context = parser.getParsingContext(); context != null && !context.inRoot();
+             context = context.getParent()) {
+            if (context.inObject() && context.getCurrentName() != null) {
+                steps.push("." + context.getCurrentName());
+            } else if (context.inArray() && context.getCurrentIndex() >= 0) {
+                steps.push("[" + context.getCurrentIndex() + "]");
             }
         }
-        return path.toString();
+        String path = String.join("", steps);
+        return path.startsWith(".") ? path.substring(1) : path;
     }
 
     private static String at(JsonLocation where, String path) {
         String place = where == null ? "" : " at line " + where.getLineNr() + ", column " + where.getColumnNr();
-        return path.isEmpty() ? place : place + " (in " + path + ")";
+        return path.isEmpty() ? place : place + " (near " + path + ")";
+    }
+
+    /** @return the character at the location's line and column (where the parser stopped), or a space */
+    private static char characterAt(String text, JsonLocation where) {
+        if (where == null || where.getLineNr() < 1 || where.getColumnNr() < 1) {
+            return ' ';
+        }
+        int lineStart = 0;
+        for (int line = 1; line < where.getLineNr() && lineStart >= 0; line++) {
+            lineStart = text.indexOf('\n', lineStart);
+            lineStart = lineStart < 0 ? -1 : lineStart + 1;
+        }
+        int index = lineStart + where.getColumnNr() - 1;
+        return lineStart < 0 || index >= text.length() ? ' ' : text.charAt(index);
     }
 
     /** @return what is wrong at a syntax error, in plain words (the parser's own message is for developers) */
     static String describe(String text, JsonLocation where) {
-        long offset = where == null ? -1 : where.getCharOffset();
-        // the parser stands just past the character it could not take
-        int index = (int) Math.min(Math.max(offset - 1, 0), Math.max(text.length() - 1, 0));
-        char found = text.isEmpty() ? ' ' : text.charAt(index);
+        char found = characterAt(text, where);
         if (found == '\'') {
             return "texts and keys are written in double quotes \"...\", not single quotes";
         }
