@@ -14,8 +14,22 @@ import com.fasterxml.jackson.databind.JsonNode;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
-import static barwright.io.VehicleKeys.*;
+import static barwright.io.VehicleKeys.DENSITY_KG_PER_M3;
+import static barwright.io.VehicleKeys.MATERIAL;
+import static barwright.io.VehicleKeys.MATERIAL_PROPERTIES;
+import static barwright.io.VehicleKeys.NAME;
+import static barwright.io.VehicleKeys.OUTER_DIAMETER_MM;
+import static barwright.io.VehicleKeys.SECTION;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
+import static barwright.io.VehicleKeys.SHAPE;
+import static barwright.io.VehicleKeys.SHEAR_MODULUS_GPA;
+import static barwright.io.VehicleKeys.SOLID;
+import static barwright.io.VehicleKeys.TUBE;
+import static barwright.io.VehicleKeys.WALL_MM;
+import static barwright.io.VehicleKeys.YIELD_STRENGTH_MPA;
+import static barwright.io.VehicleKeys.YOUNGS_MODULUS_GPA;
 
 /** Reads a {@code bar} object: material, section, U-bar dimensions and/or a shaped centreline. */
 final class BarReader {
@@ -187,7 +201,7 @@ final class BarReader {
         for (int b = 0; b < bushings.size(); b++) {
             double distance = distanceToPolyline(bushings.get(b), points);
             if (distance > ON_CENTRELINE_TOLERANCE_MM) {
-                reader.problem(path + ".bushingsMm[" + b + "]", String.format(java.util.Locale.ROOT,
+                reader.problem(path + ".bushingsMm[" + b + "]", String.format(Locale.ROOT,
                         "is %.1f mm off the centreline: a bushing must lie on it (within %.0f mm)", distance,
                         ON_CENTRELINE_TOLERANCE_MM));
             }

@@ -268,7 +268,8 @@ public final class JsonInput {
         for (JsonStreamContext context = parser.getParsingContext(); context != null && !context.inRoot();
              context = context.getParent()) {
             if (context.inObject() && context.getCurrentName() != null) {
-                steps.push("." + context.getCurrentName());
+                String key = context.getCurrentName();
+                steps.push("." + (key.length() > 40 ? key.substring(0, 20) + "..." : key));
             } else if (context.inArray() && context.getCurrentIndex() >= 0) {
                 steps.push("[" + context.getCurrentIndex() + "]");
             }

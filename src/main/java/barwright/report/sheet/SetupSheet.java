@@ -16,6 +16,7 @@ import barwright.sizing.preload.LinkPreload;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
+import barwright.units.Constants;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
@@ -28,6 +29,8 @@ import java.time.LocalDate;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.Function;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 
 /**
  * The setup sheet to take to the track, as PDF (Apache PDFBox): the car, both bars drawn to scale, the key
@@ -40,7 +43,7 @@ public final class SetupSheet {
      * a system font and builds a font cache: notes for its developers, noise for a person printing a sheet.
      * Held in a field so the setting is not lost when the logger is collected.
      */
-    private static final java.util.logging.Logger PDFBOX_LOG = quietPdfBox();
+    private static final Logger PDFBOX_LOG = quietPdfBox();
     private static final float MARGIN = 40;
     private static final float PAGE_WIDTH = PDRectangle.A4.getWidth();
     private static final float PAGE_HEIGHT = PDRectangle.A4.getHeight();
@@ -247,7 +250,7 @@ public final class SetupSheet {
     }
 
     private String lift(double accel) {
-        return accel <= 3 * barwright.units.Constants.STANDARD_GRAVITY
+        return accel <= 3 * Constants.STANDARD_GRAVITY
                 ? f(accel, Quantity.ACCELERATION, 2) : "stays down";
     }
 
@@ -255,9 +258,9 @@ public final class SetupSheet {
         return String.format(Locale.ROOT, "%.1f %%", share * 100);
     }
 
-    private static java.util.logging.Logger quietPdfBox() {
-        java.util.logging.Logger logger = java.util.logging.Logger.getLogger("org.apache.pdfbox");
-        logger.setLevel(java.util.logging.Level.SEVERE);
+    private static Logger quietPdfBox() {
+        Logger logger = Logger.getLogger("org.apache.pdfbox");
+        logger.setLevel(Level.SEVERE);
         return logger;
     }
 }

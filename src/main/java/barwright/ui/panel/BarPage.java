@@ -1,21 +1,24 @@
 package barwright.ui.panel;
 
+import barwright.io.KeyPath;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
-import barwright.io.KeyPath;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.FieldCatalogue;
 import barwright.ui.field.NumberText;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Figures;
 import barwright.units.Quantity;
+import barwright.units.UnitSystem;
 import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.IntNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.node.TextNode;
 
+import javax.swing.Box;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
@@ -121,7 +124,7 @@ final class BarPage extends EditorPage {
         return "E " + Figures.format(material.youngsModulus(), Quantity.MODULUS, units, 1, locale)
                 + ", G " + Figures.format(material.shearModulus(), Quantity.MODULUS, units, 1, locale)
                 + ", density " + Figures.format(material.density(), Quantity.DENSITY, units,
-                units == barwright.units.UnitSystem.US ? 3 : 0, locale)
+                units == UnitSystem.US ? 3 : 0, locale)
                 + ", yield " + Figures.format(material.yieldStrength(), Quantity.STRESS, units, 0, locale)
                 + " (typical values; the maker's certificate wins)";
     }
@@ -160,7 +163,7 @@ final class BarPage extends EditorPage {
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         buttons.setOpaque(false);
         buttons.add(add);
-        buttons.add(javax.swing.Box.createHorizontalStrut(6));
+        buttons.add(Box.createHorizontalStrut(6));
         buttons.add(remove);
         form.note(buttons);
     }
@@ -255,7 +258,7 @@ final class BarPage extends EditorPage {
 
     private void addHole() {
         document.editAll(tree -> {
-            var arms = (com.fasterxml.jackson.databind.node.ArrayNode) KeyPath.of(bar + ".armLengthsMm").get(tree);
+            var arms = (ArrayNode) KeyPath.of(bar + ".armLengthsMm").get(tree);
             JsonNode last = arms.get(arms.size() - 1);
             arms.add(last != null && last.isNumber() ? last.doubleValue() + 20 : 200);
         }, this);
@@ -263,7 +266,7 @@ final class BarPage extends EditorPage {
 
     private void removeHole() {
         document.editAll(tree -> {
-            var arms = (com.fasterxml.jackson.databind.node.ArrayNode) KeyPath.of(bar + ".armLengthsMm").get(tree);
+            var arms = (ArrayNode) KeyPath.of(bar + ".armLengthsMm").get(tree);
             if (arms.size() > 1) {
                 arms.remove(arms.size() - 1);
                 ObjectNode barNode = (ObjectNode) KeyPath.of(bar).get(tree);
