@@ -2,14 +2,14 @@ package barwright.cli;
 
 import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
+import barwright.io.VehicleEdits;
 import barwright.io.VehicleFileWriter;
 import barwright.report.Cautions;
-import barwright.io.VehicleEdits;
+import barwright.report.sizing.ComparisonJson;
+import barwright.report.sizing.ComparisonText;
+import barwright.report.sizing.SweepOutput;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
-import barwright.sizing.output.ComparisonJson;
-import barwright.sizing.output.ComparisonText;
-import barwright.sizing.output.SweepOutput;
 
 import java.io.PrintStream;
 import java.io.StringWriter;

@@ -12,12 +12,13 @@ import barwright.io.VehicleFileWriter;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.report.Cautions;
+import barwright.report.sizing.MapOutput;
+import barwright.report.sizing.MapText;
+import barwright.report.sizing.SizingJson;
 import barwright.sizing.map.AdjustmentMap;
 import barwright.sizing.map.AdjustmentMap.LabelledBar;
-import barwright.sizing.output.MapOutput;
-import barwright.sizing.output.MapText;
-import barwright.sizing.output.SizingJson;
 import barwright.solver.Progress;
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 

@@ -8,7 +8,7 @@ import barwright.physics.AxleResult;
 import barwright.physics.TurnResult;
 import barwright.physics.Warning;
 import barwright.report.Cautions;
-import barwright.sizing.compare.Chart;
+import barwright.physics.curve.Chart;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
 import barwright.sizing.map.AdjustmentMap;
@@ -16,7 +16,6 @@ import barwright.sizing.preload.LinkPreload;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
-import barwright.units.Constants;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
@@ -31,6 +30,9 @@ import java.util.Locale;
 import java.util.function.Function;
 import java.util.logging.Level;
 import java.util.logging.Logger;
+
+import static barwright.units.Conversions.fromG;
+import static barwright.units.Conversions.toPercent;
 
 /**
  * The setup sheet to take to the track, as PDF (Apache PDFBox): the car, both bars drawn to scale, the key
@@ -105,7 +107,7 @@ public final class SetupSheet {
                         + "%.1f %%, amber where below (pale: near it). The reference is the static front weight plus 5 "
                         + "points, a rule of thumb for a slight understeer, unless a target was given. Red frame: an inside "
                         + "wheel lifts before the limit. Heavy frame: the current setting. Holes count from 1 (the first "
-                        + "arm length).", content.referenceShare() * 100), MARGIN, y, CONTENT_WIDTH,
+                        + "arm length).", toPercent(content.referenceShare())), MARGIN, y, CONTENT_WIDTH,
                 PdfCanvas.REGULAR, 7);
         y -= 8;
         charts();
@@ -125,7 +127,7 @@ public final class SetupSheet {
         y -= 14;
         canvas.text(String.format(Locale.ROOT, "Mass %s, static front weight %.1f %%, CG height %s, wheelbase %s; "
                         + "bar check travel %s (left minus right wheel). Units: %s.",
-                f(result.masses().mass(), Quantity.MASS, 1), result.masses().frontMassFraction() * 100,
+                f(result.masses().mass(), Quantity.MASS, 1), toPercent(result.masses().frontMassFraction()),
                 f(result.vehicle().cgHeight(), Quantity.LENGTH, 0), f(result.vehicle().wheelbase(), Quantity.LENGTH, 0),
                 f(result.vehicle().differentialWheelTravel(), Quantity.LENGTH, 0), content.units().label()),
                 MARGIN, y, PdfCanvas.REGULAR, 8);
@@ -250,12 +252,12 @@ public final class SetupSheet {
     }
 
     private String lift(double accel) {
-        return accel <= 3 * Constants.STANDARD_GRAVITY
+        return accel <= fromG(3)
                 ? f(accel, Quantity.ACCELERATION, 2) : "stays down";
     }
 
     private static String percent(double share) {
-        return String.format(Locale.ROOT, "%.1f %%", share * 100);
+        return String.format(Locale.ROOT, "%.1f %%", toPercent(share));
     }
 
     private static Logger quietPdfBox() {
