@@ -14,7 +14,7 @@ package barwright.io;
  */
 record PracticalMinimum(String key, double minimum, String unit, String reason, boolean zero) {
     /** A tube wall thinner than half a millimetre is foil (common practice for drawn steel tube). */
-    static final PracticalMinimum WALL = new PracticalMinimum("wallMm", 0.5, "mm",
+    static final PracticalMinimum WALL = new PracticalMinimum(VehicleKeys.WALL_MM, 0.5, "mm",
             "a tube wall under 0.5 mm is foil, not a bar", false);
     /** Two bushings closer than about their own width are one bushing (common practice). */
     static final PracticalMinimum BUSHING_SPAN = new PracticalMinimum("bushingSpanMm", 20, "mm",
