@@ -17,7 +17,7 @@ import static barwright.units.Constants.STANDARD_GRAVITY;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-/** The chassis stiffness study against full analyses, model.md 6 in closed form and checks.md. */
+/** The chassis stiffness study against full analyses, model.md 6 in closed form and docs/validation.md. */
 class ChassisStudyTest {
     /** Two routes to the same 2x2 solution (the study's and the full analysis's): round-off only. */
     private static final double SAME_MODEL = 1e-12;
@@ -109,7 +109,7 @@ class ChassisStudyTest {
     }
 
     /**
-     * checks.md, flexible chassis (grade B): K_f = 1000, K_r = 500, K_c = 3000 N m/deg, roll moment split
+     * docs/validation.md, section "Flexible chassis" (arithmetic): K_f = 1000, K_r = 500, K_c = 3000 N m/deg, roll moment split
      * 0.5/0.5, no gravity term: elastic front share 0.6500, rigid 0.6667, K_c -> 0 gives 0.5000. The car below
      * is built to be that case: no unsprung mass and roll centres on the ground (so all transfer is elastic),
      * half the sprung mass on each axle, equal tracks, tyres a million times stiffer than the springs, and a
@@ -124,13 +124,13 @@ class ChassisStudyTest {
         double rearRate = 2 * 500 / RADIANS_PER_DEGREE / (track * track);
         Axle front = new Axle(track, 0, 0, 0, frontRate, 1, frontRate * 1e6, base.front().tyre(), null);
         Axle rear = new Axle(track, 0, 0, 0, rearRate, 1, rearRate * 1e6, base.rear().tyre(), null);
-        Vehicle example = new Vehicle("checks.md flexible chassis example", 1000, 0.5, null, 1e-3, 2.5, null,
+        Vehicle example = new Vehicle("flexible chassis example (docs/validation.md)", 1000, 0.5, null, 1e-3, 2.5, null,
                 front, rear, 0.06);
         ChassisStudy study = ChassisStudy.of(example, VehicleAnalysis.analyse(example));
         assertThat(study.frontShare(3000 / RADIANS_PER_DEGREE)).isCloseTo(0.6500, within(1e-4));
         assertThat(study.frontShare(null)).isCloseTo(2.0 / 3.0, within(1e-4));
         assertThat(study.frontShare(0.0)).isCloseTo(0.5000, within(1e-4));
-        // the test's own no-gravity closed form of the same 2x2 system (Cramer's rule) gives the printed 0.65
+        // the test's own no-gravity closed form of the same 2x2 system (Cramer's rule) gives the listed 0.65
         assertThat(elasticFrontShareWithoutGravity(1000, 500, 3000, 0.5)).isCloseTo(0.65, within(1e-12));
     }
 

@@ -92,7 +92,7 @@ class LoadTransferTest {
 
     /**
      * Barton & Fieldhouse, Automotive Chassis Engineering (Springer), ch. 3, worked example on load transfer,
-     * p. 174 as read (publisher and year from memory; figures via shared/reference/checks.md, grade A). The
+     * p. 174 as read (publisher and year from memory; figures in docs/validation.md, section "Lateral load transfer"). The
      * example gives the sprung mass, its split and its height above the roll axis, not the wheelbase or the
      * total CG height: those are derived here so that the car has exactly the example's sprung values (the
      * wheelbase, 2.5 m, is free: no checked figure depends on it). The front/rear roll stiffness split could
@@ -132,7 +132,7 @@ class LoadTransferTest {
         assertThat(rearParts.geometric() * accel).isCloseTo(760, within(0.5));
         assertThat(frontParts.unsprung() * accel).isCloseTo(158, within(0.5));
         assertThat(rearParts.unsprung() * accel).isCloseTo(218, within(0.5));
-        // re-computed in checks.md to 0.01 N: half of that
+        // re-computed from the printed inputs to 0.01 N (docs/validation.md): half of that
         assertThat(frontParts.geometric() * accel).isCloseTo(195.06, within(0.005));
         assertThat(rearParts.geometric() * accel).isCloseTo(759.60, within(0.005));
         assertThat(frontParts.unsprung() * accel).isCloseTo(158.04, within(0.005));
