@@ -1,6 +1,6 @@
 package barwright.ui.insight;
 
-import barwright.insight.EnvelopeText;
+import barwright.ui.Display;
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
 import barwright.insight.Sensitivity;
@@ -8,6 +8,7 @@ import barwright.insight.SensitivityResult;
 import barwright.insight.Wheel;
 import barwright.model.Vehicle;
 import barwright.physics.VehicleAnalysis;
+import barwright.report.insight.EnvelopeText;
 import barwright.ui.action.Settings;
 import barwright.ui.app.MainWindow;
 import barwright.ui.app.Themes;
@@ -43,7 +44,7 @@ class InsightViewsTest {
 
     @BeforeEach
     void open() throws Exception {
-        InsightDisplay.require();
+        Display.require();
         robot = BasicRobot.robotWithNewAwtHierarchy();
         window = GuiActionRunner.execute(() -> {
             Themes.apply(Themes.Theme.LIGHT, 0);

@@ -1,0 +1,87 @@
+package barwright.report.sizing;
+
+import barwright.physics.bar.BarResult;
+import barwright.sizing.BarNodes;
+import barwright.sizing.TubeEquivalents;
+import barwright.sizing.TubeMatch;
+import barwright.units.Quantity;
+import barwright.units.UnitSystem;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import java.util.Locale;
+
+import static barwright.units.Conversions.perMillimetre;
+import static barwright.units.Conversions.toMegapascals;
+import static barwright.units.Conversions.toPercent;
+
+/** Tubes of equal rate to a solid bar, for people and for scripts. */
+public final class TubeOutput {
+    public static final String FORMAT = "barwright.tubes";
+    public static final int VERSION = 1;
+
+    private TubeOutput() {
+    }
+
+    public static ObjectNode json(TubeEquivalents.Comparison comparison) {
+        ObjectNode root = JsonNodeFactory.instance.objectNode();
+        root.put("format", FORMAT);
+        root.put("version", VERSION);
+        BarResult solid = comparison.solid();
+        ObjectNode solidNode = root.putObject("solid");
+        solidNode.set("material", BarNodes.material(comparison.solidBar().material()));
+        solidNode.set("section", BarNodes.section(comparison.solidBar().section()));
+        solidNode.put("selectedArm", comparison.solidBar().selectedArm());
+        solidNode.put("barLinkRateNPerMm", perMillimetre(solid.linkRate()));
+        solidNode.put("barMassKg", solid.mass());
+        solidNode.put("barMaxVonMisesStressMPa", toMegapascals(solid.maxVonMisesStress()));
+        solidNode.put("barSafetyFactor", solid.safetyFactor());
+        ArrayNode tubes = root.putArray("tubes");
+        for (TubeMatch match : comparison.matches()) {
+            ObjectNode node = tubes.addObject();
+            node.put("sizeLabel", match.size().label());
+            node.set("material", BarNodes.material(match.material()));
+            node.set("section", BarNodes.section(match.size().section()));
+            node.put("barLinkRateNPerMm", perMillimetre(match.linkRate()));
+            node.put("rateDifference", match.rateDifference());
+            node.put("barMassKg", match.mass());
+            node.put("massSavedKg", match.massSaved());
+            node.put("barMaxVonMisesStressMPa", toMegapascals(match.maxStress()));
+            node.put("barSafetyFactor", match.safetyFactor());
+        }
+        return root;
+    }
+
+    public static String text(TubeEquivalents.Comparison comparison, UnitSystem units) {
+        BarResult solid = comparison.solid();
+        StringBuilder out = new StringBuilder();
+        out.append(String.format(Locale.ROOT, "Solid bar %s %s, hole %d: link rate %s, mass %s, largest stress %s, "
+                        + "safety factor %.2f%n", TextTable.figure(comparison.solidBar().section().outerDiameter(),
+                        Quantity.LENGTH, units, units == UnitSystem.US ? 3 : 1),
+                comparison.solidBar().material().name(), comparison.solidBar().selectedArm() + 1,
+                TextTable.figure(solid.linkRate(), Quantity.LINEAR_RATE, units, 1),
+                TextTable.figure(solid.mass(), Quantity.MASS, units, 2),
+                TextTable.figure(solid.maxVonMisesStress(), Quantity.STRESS, units, 0), solid.safetyFactor()));
+        if (comparison.matches().isEmpty()) {
+            out.append("No catalogue tube comes within 2 % of its rate.\n");
+            return out.toString();
+        }
+        out.append("Tubes within 2 % of its rate, lightest first:\n");
+        TextTable table = new TextTable("tube", "material", "rate", "vs solid", "mass", "saved", "largest stress",
+                "safety");
+        for (TubeMatch match : comparison.matches()) {
+            table.add(match.size().label(), match.material().name(),
+                    TextTable.figure(match.linkRate(), Quantity.LINEAR_RATE, units, 1),
+                    String.format(Locale.ROOT, "%+.1f %%", toPercent(match.rateDifference())),
+                    TextTable.figure(match.mass(), Quantity.MASS, units, 2),
+                    String.format(Locale.ROOT, "%s (%.0f %%)", TextTable.figure(match.massSaved(), Quantity.MASS,
+                            units, 2), 100 * match.massSaved() / solid.mass()),
+                    TextTable.figure(match.maxStress(), Quantity.STRESS, units, 0),
+                    String.format(Locale.ROOT, "%.2f", match.safetyFactor()));
+        }
+        out.append(table.render());
+        out.append("A tube stresses more than the solid bar of the same rate: check its safety factor.\n");
+        return out.toString();
+    }
+}
