@@ -94,9 +94,11 @@ public final class VehicleFileReader {
         JsonNode frontNode = reader.object(tree, "", "front", true);
         JsonNode rearNode = reader.object(tree, "", "rear", true);
         JsonNode analysis = reader.object(tree, "", "analysis", false);
+        int beforeTravel = reader.problems().size();
         double travelMm = analysis == null ? DEFAULT_DIFFERENTIAL_TRAVEL_MM
                 : reader.optionalNumber(analysis, "analysis", "differentialWheelTravelMm",
                 Range.above(0, 500, "mm"), DEFAULT_DIFFERENTIAL_TRAVEL_MM);
+        PracticalMinimum.CHECK_TRAVEL.check(reader, "analysis", travelMm, beforeTravel);
 
         Axle front = frontNode == null ? null : AxleReader.read(frontNode, "front", reader);
         Axle rear = rearNode == null ? null : AxleReader.read(rearNode, "rear", reader);
