@@ -33,8 +33,8 @@ import static barwright.units.Constants.RADIANS_PER_DEGREE;
 public final class VehicleFileReader {
     /** The file format's name, the value of the key {@code format}. */
     public static final String FORMAT = "barwright.vehicle";
-    /** The newest file version this program reads and writes. */
-    public static final int VERSION = 1;
+    /** The newest file version this program reads and writes ({@link FileVersion}). */
+    public static final int VERSION = FileVersion.CURRENT;
     /** A vehicle file is a few kilobytes; anything past this is refused before parsing (bytes). */
     public static final long MAX_BYTES = 4L * 1024 * 1024;
     /** Nesting deeper than this is refused while parsing; a vehicle file is 4 levels deep. */
@@ -123,7 +123,7 @@ public final class VehicleFileReader {
         if (reader.hasProblems() || vehicle == null) {
             throw new VehicleFileException(reader.problems());
         }
-        return new VehicleDocument(tree.deepCopy(), vehicle);
+        return new VehicleDocument(FileVersion.upgrade(tree), vehicle);
     }
 
     private static void checkHeader(JsonNode tree, NodeReader reader) {
@@ -139,7 +139,7 @@ public final class VehicleFileReader {
                     + ". Update Barwright to open it.");
             return;
         }
-        reader.integer(tree, "", "version", 1, VERSION);
+        reader.integer(tree, "", "version", FileVersion.OLDEST, VERSION);
     }
 
     private static Vehicle readVehicle(JsonNode tree, NodeReader reader) {
@@ -153,8 +153,8 @@ public final class VehicleFileReader {
                 : reader.optionalNumber(analysis, "analysis", "differentialWheelTravelMm",
                 Range.above(0, 500, "mm"), DEFAULT_DIFFERENTIAL_TRAVEL_MM);
 
-        Axle front = frontNode == null ? null : AxleReader.read(frontNode, "front", reader);
-        Axle rear = rearNode == null ? null : AxleReader.read(rearNode, "rear", reader);
+        Axle front = frontNode == null ? null : AxleReader.read(frontNode, "front", reader, FileVersion.of(tree));
+        Axle rear = rearNode == null ? null : AxleReader.read(rearNode, "rear", reader, FileVersion.of(tree));
         if (body == null) {
             return null;
         }
