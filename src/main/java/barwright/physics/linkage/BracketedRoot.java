@@ -25,4 +25,18 @@ final class BracketedRoot {
         return solver.solve(MAX_EVALUATIONS, function, Math.min(lower, upper), Math.max(lower, upper),
                 AllowedSolution.ANY_SIDE);
     }
+
+    /**
+     * As {@link #solve(UnivariateFunction, double, double, double)}, starting from a close guess: where the function
+     * changes sign within 20 % either side of the guess, that narrower bracket is searched.
+     */
+    static double solve(UnivariateFunction function, double lower, double upper, double absoluteAccuracy,
+                        double guess) {
+        double low = Math.max(Math.min(lower, upper), guess * 0.8);
+        double high = Math.min(Math.max(lower, upper), guess * 1.2);
+        if (low < high && function.value(low) * function.value(high) <= 0) {
+            return solve(function, low, high, absoluteAccuracy);
+        }
+        return solve(function, lower, upper, absoluteAccuracy);
+    }
 }

@@ -16,9 +16,15 @@ final class Circles {
      * @return the meeting point on that branch, or null where the circles do not meet
      */
     static FrontViewPoint meet(FrontViewPoint p, double rp, FrontViewPoint q, double rq, double branch) {
-        double dy = q.y() - p.y();
-        double dz = q.z() - p.z();
-        double d = Math.hypot(dy, dz);
+        double[] point = meet(p.y(), p.z(), rp, q.y(), q.z(), rq, branch);
+        return point == null ? null : new FrontViewPoint(point[0], point[1]);
+    }
+
+    /** As {@link #meet(FrontViewPoint, double, FrontViewPoint, double, double)}, on plain coordinates: {y, z}. */
+    static double[] meet(double py, double pz, double rp, double qy, double qz, double rq, double branch) {
+        double dy = qy - py;
+        double dz = qz - pz;
+        double d = Math.sqrt(dy * dy + dz * dz);
         if (!(d > 0)) {
             return null;
         }
@@ -28,8 +34,6 @@ final class Circles {
             return null;
         }
         double across = Math.sqrt(across2);
-        double y = p.y() + (along * dy - branch * across * dz) / d;
-        double z = p.z() + (along * dz + branch * across * dy) / d;
-        return new FrontViewPoint(y, z);
+        return new double[] {py + (along * dy - branch * across * dz) / d, pz + (along * dz + branch * across * dy) / d};
     }
 }

@@ -42,6 +42,20 @@ final class DoubleWishboneSide implements SideLinkage {
     }
 
     @Override
+    public double[] contactAt(double angle) {
+        FrontViewPoint li = points.lowerInner();
+        double loY = li.y() + lowerArm * Math.cos(angle);
+        double loZ = li.z() + lowerArm * Math.sin(angle);
+        double[] uo = Circles.meet(loY, loZ, upright, points.upperInner().y(), points.upperInner().z(), upperArm, branch);
+        if (uo == null) {
+            return null;
+        }
+        double rotation = Math.atan2(uo[1] - loZ, uo[0] - loY) - staticUprightAngle;
+        return Plane.plusRotated(loY, loZ, contact.y() - points.lowerOuter().y(), contact.z() - points.lowerOuter().z(),
+                rotation);
+    }
+
+    @Override
     public SidePose poseAt(double angle) {
         FrontViewPoint li = points.lowerInner();
         FrontViewPoint ui = points.upperInner();

@@ -21,6 +21,7 @@ final class IndependentKinematics implements AxleKinematics {
     private final double baseTravel;
     private final double staticCamber;
     private final SidePose rideHeight;
+    private final double rideHeightContactY;
 
     IndependentKinematics(SideLinkage linkage, double track, SuspensionGeometry suspension) {
         this.side = new SideSolver(linkage);
@@ -29,6 +30,7 @@ final class IndependentKinematics implements AxleKinematics {
         this.baseTravel = -suspension.rideHeightChange();
         this.staticCamber = suspension.staticCamber();
         this.rideHeight = side.pose(baseTravel);
+        this.rideHeightContactY = rideHeight.contact().y();
     }
 
     @Override
@@ -77,15 +79,15 @@ final class IndependentKinematics implements AxleKinematics {
                 double wanted = reach + atReach;
                 pose(bumpFirst ? baseTravel + wanted : baseTravel - wanted);
             }
-            s = BracketedRoot.solve(x -> closure(x, tan), 0, reach, TRAVEL_ACCURACY);
+            s = BracketedRoot.solve(x -> closure(x, tan), 0, reach, TRAVEL_ACCURACY, tan * rideHeightContactY);
         }
         return state(roll, s);
     }
 
     /** The loop closure of the two contact points on the ground: zero at the wheel travel s of the roll. */
     private double closure(double s, double tan) {
-        double left = side.pose(baseTravel - s).contact().y();
-        double right = side.pose(baseTravel + s).contact().y();
+        double left = side.contactY(baseTravel - s);
+        double right = side.contactY(baseTravel + s);
         return tan * (left + right) / 2 - s;
     }
 

@@ -14,7 +14,7 @@ public record InstantCentre(double y, double z, boolean atInfinity) {
 
     /** @return the instant centre of a homogeneous point (y, z, w): w = 0 is at infinity */
     static InstantCentre of(double[] point) {
-        double scale = Math.hypot(point[0], point[1]);
+        double scale = Math.sqrt(point[0] * point[0] + point[1] * point[1]);
         if (Math.abs(point[2]) <= PARALLEL_SINE * scale) {
             return new InstantCentre(point[0] / scale, point[1] / scale, true);
         }

@@ -18,7 +18,7 @@ final class Plane {
     /** @return the line through two points, scaled so that its normal (first two terms) has length one */
     static double[] line(double[] a, double[] b) {
         double[] line = cross(a, b);
-        double norm = Math.hypot(line[0], line[1]);
+        double norm = Math.sqrt(line[0] * line[0] + line[1] * line[1]);
         return new double[] {line[0] / norm, line[1] / norm, line[2] / norm};
     }
 
@@ -44,6 +44,13 @@ final class Plane {
         double c = Math.cos(angle);
         double s = Math.sin(angle);
         return new FrontViewPoint(p.y() + c * qy - s * qz, p.z() + s * qy + c * qz);
+    }
+
+    /** @return {y, z} of p + (q rotated by angle) */
+    static double[] plusRotated(double py, double pz, double qy, double qz, double angle) {
+        double c = Math.cos(angle);
+        double s = Math.sin(angle);
+        return new double[] {py + c * qy - s * qz, pz + s * qy + c * qz};
     }
 
     /** @return the z component of (a x b) for front-view vectors */

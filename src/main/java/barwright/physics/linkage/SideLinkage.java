@@ -8,13 +8,20 @@ interface SideLinkage {
     /** @return the coordinate at the measured position (rad) */
     double staticCoordinate();
 
-    /** @return a step of the coordinate small enough to follow the motion: a quarter degree of an arm (rad) */
+    /** @return a step of the coordinate small enough to bracket one travel: half a degree of an arm (rad) */
     default double coordinateStep() {
-        return Math.toRadians(0.25);
+        return Math.toRadians(0.5);
     }
 
     /** @return the pose at the coordinate, or null where the linkage cannot be put together there */
     SidePose poseAt(double coordinate);
+
+    /**
+     * The contact point alone, for the solves (no instant centre, no objects kept).
+     *
+     * @return {y, z} of the contact point at the coordinate (m), or null where the linkage cannot be put together
+     */
+    double[] contactAt(double coordinate);
 
     /** @return in words, what stops the linkage where it cannot be put together */
     String whyItLocks();

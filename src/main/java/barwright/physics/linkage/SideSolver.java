@@ -11,7 +11,7 @@ import java.util.List;
  */
 final class SideSolver {
     /** Travel followed each way from the measured position (m). */
-    static final double RANGE = 0.3;
+    static final double RANGE = 0.25;
     /** Accuracy of a solved coordinate (rad): about 3e-14 m at the contact point of a 300 mm arm. */
     static final double COORDINATE_ACCURACY = 1e-13;
     private static final int MAX_STEPS = 720;
@@ -21,10 +21,12 @@ final class SideSolver {
     private final double[] travels;
     private final TravelLimit bump;
     private final TravelLimit droop;
+    private final double staticZ;
 
     SideSolver(SideLinkage side) {
         this.side = side;
         double start = side.staticCoordinate();
+        this.staticZ = side.contactAt(start)[1];
         double step = side.coordinateStep();
         List<double[]> up = follow(start, step);
         List<double[]> down = follow(start, -step);
@@ -56,18 +58,19 @@ final class SideSolver {
     /** @return rows {coordinate, travel, stoppedByLinkage (1) or range (0)} from the start, while monotonic */
     private List<double[]> follow(double start, double step) {
         List<double[]> run = new ArrayList<>();
-        SidePose first = side.poseAt(start);
-        run.add(new double[] {start, first.travel(), 0});
+        double staticTravel = side.contactAt(start)[1];
+        run.add(new double[] {start, 0, 0});
         double direction = 0;
         for (int k = 1; k <= MAX_STEPS; k++) {
             double coordinate = start + k * step;
-            SidePose pose = side.poseAt(coordinate);
+            double[] contact = side.contactAt(coordinate);
             double[] last = run.get(run.size() - 1);
-            if (pose == null) {
+            if (contact == null) {
                 last[2] = 1;
                 return run;
             }
-            double change = pose.travel() - last[1];
+            double travel = contact[1] - staticTravel;
+            double change = travel - last[1];
             if (direction == 0) {
                 direction = Math.signum(change);
             }
@@ -75,8 +78,8 @@ final class SideSolver {
                 last[2] = 1; // the travel turns back: the linkage has locked
                 return run;
             }
-            run.add(new double[] {coordinate, pose.travel(), 0});
-            if (Math.abs(pose.travel()) > RANGE) {
+            run.add(new double[] {coordinate, travel, 0});
+            if (Math.abs(travel) > RANGE) {
                 return run;
             }
         }
@@ -101,28 +104,39 @@ final class SideSolver {
      * @throws LinkageLimitException where the linkage cannot reach that travel
      */
     SidePose pose(double travel) {
+        return side.poseAt(coordinate(travel));
+    }
+
+    /**
+     * @param travel the contact point's rise relative to the body from the measured position (m)
+     * @return the contact point's distance from the centreline there (m)
+     * @throws LinkageLimitException where the linkage cannot reach that travel
+     */
+    double contactY(double travel) {
+        return side.contactAt(coordinate(travel))[0];
+    }
+
+    private double coordinate(double travel) {
         if (!reaches(travel)) {
             TravelLimit limit = travel > 0 ? bump : droop;
             throw new LinkageLimitException(travel, limit);
         }
-        int high = 1;
-        int low = 0;
-        int hi = travels.length - 1;
         // binary search for the first entry at or above the travel
-        while (low < hi) {
-            int mid = (low + hi) >>> 1;
+        int low = 0;
+        int high = travels.length - 1;
+        while (low < high) {
+            int mid = (low + high) >>> 1;
             if (travels[mid] < travel) {
                 low = mid + 1;
             } else {
-                hi = mid;
+                high = mid;
             }
         }
-        high = Math.max(low, 1);
-        if (travels[high] == travel) {
-            return side.poseAt(coordinates[high]);
+        int upper = Math.max(low, 1);
+        if (travels[upper] == travel) {
+            return coordinates[upper];
         }
-        double coordinate = BracketedRoot.solve(c -> side.poseAt(c).travel() - travel, coordinates[high - 1],
-                coordinates[high], COORDINATE_ACCURACY);
-        return side.poseAt(coordinate);
+        return BracketedRoot.solve(c -> side.contactAt(c)[1] - staticZ - travel, coordinates[upper - 1],
+                coordinates[upper], COORDINATE_ACCURACY);
     }
 }

@@ -39,6 +39,39 @@ final class StrutSide implements SideLinkage {
     }
 
     @Override
+    public double[] contactAt(double angle) {
+        double rotation = rotationAt(angle);
+        if (Double.isNaN(rotation)) {
+            return null;
+        }
+        FrontViewPoint li = points.lowerInner();
+        double loY = li.y() + lowerArm * Math.cos(angle);
+        double loZ = li.z() + lowerArm * Math.sin(angle);
+        return Plane.plusRotated(loY, loZ, contact.y() - points.lowerOuter().y(), contact.z() - points.lowerOuter().z(),
+                rotation);
+    }
+
+    /** @return the upright's rotation at the lower arm's angle, NaN (internal only) where it cannot be put together */
+    private double rotationAt(double angle) {
+        FrontViewPoint li = points.lowerInner();
+        FrontViewPoint top = points.strutTop();
+        double loY = li.y() + lowerArm * Math.cos(angle);
+        double loZ = li.z() + lowerArm * Math.sin(angle);
+        double vy = loY - top.y();
+        double vz = loZ - top.z();
+        double reach = Math.sqrt(vy * vy + vz * vz);
+        if (!(reach > Math.abs(offset))) {
+            return Double.NaN;
+        }
+        double axisAngle = Math.atan2(vz, vy) - Math.asin(offset / reach);
+        double rotation = axisAngle - staticAxisAngle;
+        double[] lower = Plane.plusRotated(loY, loZ, points.strutLower().y() - points.lowerOuter().y(),
+                points.strutLower().z() - points.lowerOuter().z(), rotation);
+        double extension = (lower[0] - top.y()) * Math.cos(axisAngle) + (lower[1] - top.z()) * Math.sin(axisAngle);
+        return extension > 0 ? rotation : Double.NaN;
+    }
+
+    @Override
     public SidePose poseAt(double angle) {
         FrontViewPoint li = points.lowerInner();
         FrontViewPoint top = points.strutTop();

@@ -38,6 +38,13 @@ final class SwingingArmSide implements SideLinkage {
     }
 
     @Override
+    public double[] contactAt(double angle) {
+        Vector3D moved = pivot.add(new Rotation(axis, angle, RotationConvention.VECTOR_OPERATOR)
+                .applyTo(contact.subtract(pivot)));
+        return new double[] {moved.getY(), moved.getZ()};
+    }
+
+    @Override
     public SidePose poseAt(double angle) {
         Rotation turn = new Rotation(axis, angle, RotationConvention.VECTOR_OPERATOR);
         Vector3D moved = pivot.add(turn.applyTo(contact.subtract(pivot)));
