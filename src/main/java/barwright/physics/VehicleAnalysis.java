@@ -22,7 +22,9 @@ public final class VehicleAnalysis {
      * @throws ImpossibleVehicleException where the car cannot be analysed (no stable roll position, no
      *                                    sprung mass)
      */
-    public static AnalysisResult analyse(Vehicle vehicle) {
+    public static AnalysisResult analyse(Vehicle given) {
+        // linkage axles: the computed static roll centre and the ride-height changes (model.md 11)
+        Vehicle vehicle = LinkageResolution.atRideHeight(given);
         MassProperties masses = MassProperties.of(vehicle);
         MassProperties.StaticWheelLoads loads = masses.staticLoads();
         double frontCornerSprung = AxleStiffness.cornerSprungMass(vehicle.front(), AxlePosition.FRONT, loads.frontAxle());
