@@ -1,5 +1,6 @@
 package barwright.report;
 
+import barwright.report.linkage.LinkageFigures;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
@@ -44,6 +45,9 @@ public final class TextSummary {
         line("");
         line(String.format(Locale.ROOT, "%-34s %18s %18s", "Per axle", "front", "rear"));
         axleRows(result);
+        LinkageFigures linkages = LinkageFigures.of(result);
+        linkages.rows(units).forEach(row -> pair(row[0], row[1], row[2]));
+        linkages.notes().forEach(this::line);
         line("");
         line("Balance");
         row("roll gradient", f(result.rollGradient(), Quantity.ROLL_GRADIENT, 2)
