@@ -27,14 +27,15 @@ import java.nio.file.Path;
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
 
 /**
- * Reads a vehicle file (files.md, version 1): refuses it whole, with every problem and its key path, or
+ * Reads a vehicle file (files.md, versions 1 and 2; version 2 adds the tyre's points and camber keys and reads
+ * every version-1 file unchanged): refuses it whole, with every problem and its key path, or
  * returns the car in SI with the tree as read (unknown keys included, to be kept on save).
  */
 public final class VehicleFileReader {
     /** The file format's name, the value of the key {@code format}. */
     public static final String FORMAT = "barwright.vehicle";
     /** The newest file version this program reads and writes. */
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
     /** A vehicle file is a few kilobytes; anything past this is refused before parsing (bytes). */
     public static final long MAX_BYTES = 4L * 1024 * 1024;
     /** Nesting deeper than this is refused while parsing; a vehicle file is 4 levels deep. */
@@ -116,6 +117,7 @@ public final class VehicleFileReader {
         }
         NodeReader reader = new NodeReader();
         checkHeader(tree, reader);
+        TyreReader.refuseNewKeysInVersion1(tree, reader);
         if (reader.hasProblems()) {
             throw new VehicleFileException(reader.problems()); // a wrong format or version: say only that
         }
@@ -218,13 +220,6 @@ public final class VehicleFileReader {
 
     /** Reads a tyre object; package-private for the axle reader. */
     static Tyre readTyre(JsonNode node, String path, NodeReader reader) {
-        double nominal = reader.number(node, path, "nominalLoadN", Range.between(100, 100000, "N"));
-        double friction = reader.number(node, path, "frictionAtNominalLoad", Range.between(0.1, 5, ""));
-        double sensitivity = reader.number(node, path, "frictionLoadSensitivity", Range.between(-1, 0.5, ""));
-        double stiffness = reader.number(node, path, "corneringStiffnessPerLoad", Range.between(1, 100, "per rad"));
-        double peakRatio = reader.number(node, path, "corneringStiffnessPeakLoadRatio", Range.between(0.5, 10, ""));
-        double shape = reader.number(node, path, "shapeFactor", Range.between(1, 2, ""));
-        double curvature = reader.number(node, path, "curvatureFactor", Range.between(-10, 1, ""));
-        return new Tyre(nominal, friction, sensitivity, stiffness, peakRatio, shape, curvature);
+        return TyreReader.read(node, path, reader);
     }
 }

@@ -97,8 +97,8 @@ class BadInputTest {
                 arguments("no format", "format", null, "format is missing"),
                 arguments("no version", "version", null, "version is missing"),
                 // version and format
-                arguments("newer version", "version", "2", "version = 2: this file was written by a newer Barwright"),
-                arguments("version 0", "version", "0", "version = 0: must be a whole number from 1 to 1"),
+                arguments("newer version", "version", "3", "version = 3: this file was written by a newer Barwright"),
+                arguments("version 0", "version", "0", "version = 0: must be a whole number from 1 to 2"),
                 arguments("version as text", "version", "\"1\"", "version = \"1\": must be a whole number"),
                 arguments("another format", "format", "\"some.other.format\"",
                         "format = \"some.other.format\": must be \"barwright.vehicle\""));
