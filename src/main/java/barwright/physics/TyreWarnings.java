@@ -28,6 +28,7 @@ final class TyreWarnings {
             Tyre tyre = result.vehicle().axle(axle).tyre();
             TyreModel model = new TyreModel(tyre);
             List<String> outside = new ArrayList<>();
+            boolean onlyBelow = true;
             List<String> floored = new ArrayList<>();
             for (TurnDirection direction : TurnDirection.values()) {
                 TurnResult turn = result.turn(direction);
@@ -42,6 +43,7 @@ final class TyreWarnings {
                     if (load > 0 && (outsideData(tyre.frictionByLoad(), load)
                             || outsideData(tyre.corneringStiffnessByLoad(), load))) {
                         outside.add(wheel);
+                        onlyBelow &= load < lowestLoad(tyre);
                     }
                     if (load > 0 && !tyre.hasFrictionPoints() && model.unfloredFriction(load) < model.frictionFloor()) {
                         floored.add(String.format(Locale.ROOT, "%s (the law gives %.2f)", wheel,
@@ -54,7 +56,9 @@ final class TyreWarnings {
                         "The %s tyres' loads at the limit lie outside their measured points (%s) by more than "
                                 + "10 %%: %s. There the grip is an estimate carried on from the points, not "
                                 + "data: treat the limit and balance with care, and measure the tyre at these "
-                                + "loads if you can.", axle.key(), range(tyre), String.join("; ", outside))));
+                                + "loads if you can.%s", axle.key(), range(tyre), String.join("; ", outside),
+                        onlyBelow ? " Only light loads are outside: a lightly loaded inside tyre adds little grip, "
+                                + "so this matters less than a load above the points." : "")));
             }
             if (!floored.isEmpty()) {
                 warnings.add(new Warning(FRICTION_AT_FLOOR, String.format(Locale.ROOT,
@@ -71,6 +75,16 @@ final class TyreWarnings {
     private static boolean outsideData(LoadTable table, double load) {
         return table != null && (load > (1 + OUTSIDE_DATA_MARGIN) * table.highestLoad()
                 || load < (1 - OUTSIDE_DATA_MARGIN) * table.lowestLoad());
+    }
+
+    private static double lowestLoad(Tyre tyre) {
+        double lowest = Double.POSITIVE_INFINITY;
+        for (LoadTable table : new LoadTable[]{tyre.frictionByLoad(), tyre.corneringStiffnessByLoad()}) {
+            if (table != null) {
+                lowest = Math.min(lowest, table.lowestLoad());
+            }
+        }
+        return lowest;
     }
 
     private static String range(Tyre tyre) {

@@ -16,7 +16,8 @@ import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.sli
 @AnalyzeClasses(packages = "barwright", importOptions = ImportOption.DoNotIncludeTests.class)
 class CoreArchitectureTest {
     private static final String[] CORE = {"barwright.units..", "barwright.model..", "barwright.physics..",
-            "barwright.solver..", "barwright.io..", "barwright.report..", "barwright.sizing..", "barwright.insight.."};
+            "barwright.solver..", "barwright.io..", "barwright.report..", "barwright.sizing..", "barwright.insight..",
+            "barwright.tyrefit.."};
 
     @ArchTest
     static final ArchRule coreImportsNoGui = noClasses().that().resideInAnyPackage(CORE)

@@ -57,8 +57,8 @@ class TyrePointsFileTest {
 
     @Test
     void aLawAndPointsTogetherAreRefusedAtTheLawKey() {
-        ObjectNode tree = Fixtures.with(withPoints(), "front.tyre.frictionAtNominalLoad", "1.2");
-        tree = Fixtures.with(tree, "front.tyre.corneringStiffnessPeakLoadRatio", "2");
+        ObjectNode tree = Fixtures.with(Fixtures.with(withPoints(), "front.tyre.frictionAtNominalLoad", "1.2"),
+                "front.tyre.corneringStiffnessPeakLoadRatio", "2");
         assertThatThrownBy(() -> VehicleFileReader.fromTree(tree)).isInstanceOf(VehicleFileException.class)
                 .hasMessageContaining("front.tyre.frictionAtNominalLoad cannot be given together with "
                         + "peakFrictionByLoad")

@@ -48,7 +48,7 @@ class TyreLimitsTest {
     void aHeavyCarOnTheLinearLawHasAPositiveLimitAndIsWarned() {
         // the law gives mu = 1.2 (1 - 0.15 (F_z/3500 - 1)) < 0.6 past 13.3 kN: held at 0.6, with the warning
         AnalysisResult result = VehicleAnalysis.analyse(heavy(TestCars.tyre()));
-        assertThat(result.left().limit()).isGreaterThan(0.3 * STANDARD_GRAVITY);
+        assertThat(result.turn(TurnDirection.LEFT).limit()).isGreaterThan(0.3 * STANDARD_GRAVITY);
         assertThat(result.warnings()).anySatisfy(warning -> {
             assertThat(warning.code()).isEqualTo("TYRE_FRICTION_AT_FLOOR");
             assertThat(warning.message()).startsWith("The front tyres' friction law falls below 0.60");
@@ -56,9 +56,17 @@ class TyreLimitsTest {
     }
 
     @Test
+    void aLightInsideWheelBelowThePointsIsWarnedAsMatteringLess() {
+        AnalysisResult result = VehicleAnalysis.analyse(withTyres(TestCars.clubCar(), POINTS));
+        assertThat(result.warnings()).anySatisfy(warning -> assertThat(warning.message())
+                .contains("rear tyres' loads at the limit lie outside").contains("inside tyre 294 N in a left turn")
+                .contains("a lightly loaded inside tyre adds little grip"));
+    }
+
+    @Test
     void aHeavyCarOnPointsIsWarnedThatItsLoadsLeaveTheData() {
         AnalysisResult result = VehicleAnalysis.analyse(heavy(POINTS));
-        assertThat(result.left().limit()).isGreaterThan(0.3 * STANDARD_GRAVITY);
+        assertThat(result.turn(TurnDirection.LEFT).limit()).isGreaterThan(0.3 * STANDARD_GRAVITY);
         assertThat(result.warnings()).anySatisfy(warning -> {
             assertThat(warning.code()).isEqualTo("TYRE_LOAD_OUTSIDE_DATA");
             assertThat(warning.message()).contains("front tyres' loads at the limit lie outside their measured "
@@ -68,7 +76,12 @@ class TyreLimitsTest {
 
     @Test
     void theClubCarOnPointsWithinItsDataIsNotWarned() {
-        AnalysisResult result = VehicleAnalysis.analyse(withTyres(TestCars.clubCar(), POINTS));
+        // the points from 200 N: the club car's lightest inside wheel at the limit carries about 290 N
+        Tyre wide = POINTS.withFrictionByLoad(new LoadTable(List.of(new LoadPoint(200, 1.36),
+                new LoadPoint(2500, 1.26), new LoadPoint(4000, 1.17), new LoadPoint(6000, 1.02))))
+                .withCorneringStiffnessByLoad(new LoadTable(List.of(new LoadPoint(200, 4000),
+                        new LoadPoint(3500, 56000), new LoadPoint(6000, 68000))));
+        AnalysisResult result = VehicleAnalysis.analyse(withTyres(TestCars.clubCar(), wide));
         assertThat(result.warnings()).noneSatisfy(w -> assertThat(w.code()).startsWith("TYRE_"));
     }
 
