@@ -26,7 +26,8 @@ public final class Cli {
             new MapCommand(),
             new CompareCommand(),
             new PreloadCommand(),
-            new SheetCommand());
+            new SheetCommand(),
+            new TyreFitCommand());
 
     private Cli() {
     }
