@@ -6,10 +6,11 @@ import org.apache.commons.math3.analysis.polynomials.PolynomialSplineFunction;
 /**
  * A shape-preserving piecewise cubic through points: between two points it never goes past them, and where
  * the points rise (or fall) it rises (or falls) too. It is a cubic Hermite interpolant whose slopes follow
- * Fritsch and Carlson's monotone scheme (SIAM J. Numer. Anal. 17, 1980): at an inner point the weighted
- * harmonic mean of the two neighbouring chord slopes of Fritsch and Butland (SIAM J. Sci. Stat. Comput. 5,
- * 1984), zero where the chords change sign; at an end the three-point one-sided slope, limited so as not to
- * overshoot (the usual end rule of this scheme, from memory). model.md 8.1 says why this scheme.
+ * Fritsch and Carlson's monotone scheme (SIAM J. Numer. Anal. 17, 1980; abstract and introduction read): at an
+ * inner point the weighted harmonic mean of the two neighbouring chord slopes (Fritsch and Butland, 1984, as
+ * described by the libtsp MSfIntMC documentation; the weights as a question-and-answer page quotes them),
+ * zero where the chords change sign; at an end the three-point one-sided slope, kept to the end chord's sign
+ * and within three times it (the usual end rule of this scheme, from memory). model.md 8.1 says why.
  *
  * <p>The pieces are Commons Math polynomials in a {@link PolynomialSplineFunction}; outside the points it is
  * not defined (the caller continues it, see {@link #endSlope(boolean)}).
