@@ -33,6 +33,8 @@ class PublishedTyrePointsTest {
         double transferred = grip.capacity(1800 * LBF, 900 * LBF);
         assertThat(1 - transferred / even).isCloseTo(180.0 / 2916, within(1e-9));
         assertThat(100 * (1 - transferred / even)).isCloseTo(6.17, within(0.005));
+        // the figure the report gives: the same arithmetic through AxleGrip's own definition
+        assertThat(grip.gripLostToTransfer(1800 * LBF, 900 * LBF)).isCloseTo(180.0 / 2916, within(1e-9));
     }
 
     @Test
