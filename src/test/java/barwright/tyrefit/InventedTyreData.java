@@ -64,24 +64,31 @@ public final class InventedTyreData {
 
     /** @return the data set, in the order of the file */
     public static List<TyreMeasurement> generate(long seed) {
+        return generate(seed, 31);
+    }
+
+    /** @return the same curves with a given number of points each, slip -15 to 15 deg evenly (benchmarks) */
+    public static List<TyreMeasurement> generate(long seed, int pointsPerCurve) {
         Random random = new Random(seed);
         List<TyreMeasurement> rows = new ArrayList<>();
         int line = 12; // the file's comment lines and header come first
         for (double load : LOADS) {
-            line = addCurve(rows, random, load, 0, line);
+            line = addCurve(rows, random, load, 0, line, pointsPerCurve);
             if (load == CAMBER_LOAD) {
                 for (double camber : CAMBERS_DEG) {
-                    line = addCurve(rows, random, load, camber, line);
+                    line = addCurve(rows, random, load, camber, line, pointsPerCurve);
                 }
             }
         }
         return rows;
     }
 
-    private static int addCurve(List<TyreMeasurement> rows, Random random, double load, double camberDeg, int line) {
+    private static int addCurve(List<TyreMeasurement> rows, Random random, double load, double camberDeg, int line,
+                                int points) {
         MagicFormula formula = curve(load, camberDeg);
-        for (int slipDeg = -15; slipDeg <= 15; slipDeg++) {
-            double slip = slipDeg * RADIANS_PER_DEGREE;
+        for (int k = 0; k < points; k++) {
+            // for 31 points: whole degrees from -15 to 15, as the file has them
+            double slip = Math.round((-15 + 30.0 * k / (points - 1)) * 1e6) / 1e6 * RADIANS_PER_DEGREE;
             double force = formula.force(slip) + NOISE_SHARE * formula.peak() * random.nextGaussian();
             // rounded as the file writes it, to 0.1 N
             rows.add(new TyreMeasurement(line++, load, slip, Math.round(force * 10) / 10.0,
