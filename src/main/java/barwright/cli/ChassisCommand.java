@@ -2,9 +2,9 @@ package barwright.cli;
 
 import barwright.insight.ChassisStudy;
 import barwright.insight.ChassisStudyResult;
-import barwright.insight.ChassisText;
-import barwright.insight.InsightJson;
 import barwright.io.VehicleFileWriter;
+import barwright.report.insight.ChassisText;
+import barwright.report.insight.InsightJson;
 
 import java.io.PrintStream;
 import java.util.List;

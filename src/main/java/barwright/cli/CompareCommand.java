@@ -3,12 +3,12 @@ package barwright.cli;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileWriter;
 import barwright.report.Cautions;
+import barwright.report.sizing.ComparisonJson;
+import barwright.report.sizing.ComparisonText;
+import barwright.report.sizing.SweepOutput;
 import barwright.sizing.VehicleEdits;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
-import barwright.sizing.output.ComparisonJson;
-import barwright.sizing.output.ComparisonText;
-import barwright.sizing.output.SweepOutput;
 
 import java.io.PrintStream;
 import java.io.StringWriter;

@@ -1,11 +1,11 @@
 package barwright.cli;
 
-import barwright.insight.EnvelopeText;
-import barwright.insight.InsightJson;
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
 import barwright.io.VehicleFileWriter;
 import barwright.physics.VehicleAnalysis;
+import barwright.report.insight.EnvelopeText;
+import barwright.report.insight.InsightJson;
 
 import java.io.PrintStream;
 import java.util.List;

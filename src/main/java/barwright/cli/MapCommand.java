@@ -1,17 +1,20 @@
 package barwright.cli;
 
+import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
+import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.report.Cautions;
+import barwright.report.sizing.MapOutput;
+import barwright.report.sizing.MapText;
+import barwright.report.sizing.SizingJson;
 import barwright.sizing.map.AdjustmentMap;
 import barwright.sizing.map.AdjustmentMap.LabelledBar;
-import barwright.sizing.output.MapOutput;
-import barwright.sizing.output.MapText;
-import barwright.sizing.output.SizingJson;
 import barwright.solver.Progress;
+import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -84,7 +87,7 @@ final class MapCommand implements Command {
         JsonNode root;
         try {
             root = new ObjectMapper().readTree(Files.readAllBytes(file));
-        } catch (com.fasterxml.jackson.core.JsonProcessingException bad) {
+        } catch (JsonProcessingException bad) {
             throw new UsageException("--candidates " + file + ": not valid JSON: " + bad.getOriginalMessage());
         }
         if (root == null || !SizingJson.FORMAT.equals(root.path("format").asText())) {
@@ -110,12 +113,12 @@ final class MapCommand implements Command {
         ObjectNode tree = document.editableTree();
         JsonNode bar = tree.path(axle.key()).path("bar");
         if (!(bar instanceof ObjectNode barNode)) {
-            throw new VehicleFileException(List.of(new barwright.io.Problem(axle.key() + ".bar",
+            throw new VehicleFileException(List.of(new Problem(axle.key() + ".bar",
                     "is null: candidate " + (index + 1) + " needs the bar's geometry from the vehicle file")));
         }
         barNode.set("material", choice.path("material"));
         barNode.set("section", choice.path("section"));
         barNode.set("selectedArm", choice.path("selectedArm"));
-        return barwright.io.VehicleFileReader.fromTree(tree).vehicle().axle(axle).bar();
+        return VehicleFileReader.fromTree(tree).vehicle().axle(axle).bar();
     }
 }

@@ -1,10 +1,10 @@
 package barwright.cli;
 
-import barwright.insight.InsightJson;
 import barwright.insight.Sensitivity;
 import barwright.insight.SensitivityResult;
-import barwright.insight.SensitivityText;
 import barwright.io.VehicleFileWriter;
+import barwright.report.insight.InsightJson;
+import barwright.report.insight.SensitivityText;
 
 import java.io.PrintStream;
 import java.util.List;

@@ -6,7 +6,7 @@ import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.sheet.SetupSheet;
 import barwright.report.sheet.SheetContent;
-import barwright.sizing.output.MapOutput;
+import barwright.report.sizing.MapOutput;
 
 import java.io.PrintStream;
 import java.io.StringWriter;

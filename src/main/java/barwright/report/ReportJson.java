@@ -13,8 +13,13 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
-import static barwright.units.Constants.RADIANS_PER_DEGREE;
-import static barwright.units.Constants.STANDARD_GRAVITY;
+import static barwright.units.Conversions.perDegree;
+import static barwright.units.Conversions.perG;
+import static barwright.units.Conversions.perMillimetre;
+import static barwright.units.Conversions.toDegreesPerG;
+import static barwright.units.Conversions.toG;
+import static barwright.units.Conversions.toMegapascals;
+import static barwright.units.Conversions.toMillimetres;
 
 /** The analysis report of files.md ({@code analyze FILE --json}), units as the key names say. */
 public final class ReportJson {
@@ -36,17 +41,17 @@ public final class ReportJson {
         vehicle.put("massKg", result.masses().mass());
         vehicle.put("frontMassFraction", result.masses().frontMassFraction());
         vehicle.put("sprungMassKg", result.masses().sprungMass());
-        vehicle.put("sprungCgHeightMm", result.masses().sprungCgHeight() * 1e3);
-        vehicle.put("rollAxisHeightAtCgMm", result.masses().rollAxisHeightAtCg() * 1e3);
-        vehicle.put("rollArmMm", result.masses().rollArm() * 1e3);
+        vehicle.put("sprungCgHeightMm", toMillimetres(result.masses().sprungCgHeight()));
+        vehicle.put("rollAxisHeightAtCgMm", toMillimetres(result.masses().rollAxisHeightAtCg()));
+        vehicle.put("rollArmMm", toMillimetres(result.masses().rollArm()));
         for (AxlePosition axle : AxlePosition.values()) {
             report.set(axle.key(), axle(result.axle(axle)));
         }
-        report.put("rollGradientDegPerG", perG(result.rollGradient()));
-        report.put("suspensionRollGradientDegPerG", perG(result.suspensionRollGradient()));
+        report.put("rollGradientDegPerG", toDegreesPerG(result.rollGradient()));
+        report.put("suspensionRollGradientDegPerG", toDegreesPerG(result.suspensionRollGradient()));
         report.put("frontLoadTransferShare", result.frontLoadTransferShare());
         report.put("frontRollStiffnessShare", result.frontRollStiffnessShare());
-        report.put("understeerGradientDegPerG", perG(result.understeerGradient()));
+        report.put("understeerGradientDegPerG", toDegreesPerG(result.understeerGradient()));
         for (TurnDirection direction : TurnDirection.values()) {
             report.set(direction.key(), turn(result.turn(direction)));
         }
@@ -61,19 +66,19 @@ public final class ReportJson {
         AxleStiffness stiffness = axle.stiffness();
         BarResult bar = axle.bar();
         ObjectNode node = NODES.objectNode();
-        node.put("springRollStiffnessNmPerDeg", nmPerDeg(stiffness.springRollStiffness()));
-        putOrNull(node, "barRollStiffnessNmPerDeg", bar == null ? null : nmPerDeg(stiffness.barRollStiffness()));
-        node.put("tyreRollStiffnessNmPerDeg", nmPerDeg(stiffness.tyreRollStiffness()));
-        node.put("suspensionRollStiffnessNmPerDeg", nmPerDeg(stiffness.suspensionRollStiffness()));
-        node.put("rollStiffnessNmPerDeg", nmPerDeg(stiffness.rollStiffness()));
-        node.put("heaveRateNPerMm", stiffness.heaveRate() * 1e-3);
-        node.put("singleWheelBumpRateNPerMm", stiffness.singleWheelBumpRate() * 1e-3);
-        node.put("rideRateNPerMm", stiffness.rideRate() * 1e-3);
+        node.put("springRollStiffnessNmPerDeg", perDegree(stiffness.springRollStiffness()));
+        putOrNull(node, "barRollStiffnessNmPerDeg", bar == null ? null : perDegree(stiffness.barRollStiffness()));
+        node.put("tyreRollStiffnessNmPerDeg", perDegree(stiffness.tyreRollStiffness()));
+        node.put("suspensionRollStiffnessNmPerDeg", perDegree(stiffness.suspensionRollStiffness()));
+        node.put("rollStiffnessNmPerDeg", perDegree(stiffness.rollStiffness()));
+        node.put("heaveRateNPerMm", perMillimetre(stiffness.heaveRate()));
+        node.put("singleWheelBumpRateNPerMm", perMillimetre(stiffness.singleWheelBumpRate()));
+        node.put("rideRateNPerMm", perMillimetre(stiffness.rideRate()));
         node.put("rideFrequencyHz", stiffness.rideFrequency());
-        putOrNull(node, "barLinkRateNPerMm", bar == null ? null : bar.linkRate() * 1e-3);
+        putOrNull(node, "barLinkRateNPerMm", bar == null ? null : perMillimetre(bar.linkRate()));
         putOrNull(node, "barMassKg", bar == null ? null : bar.mass());
-        putOrNull(node, "barTorsionalShearStressMPa", bar == null ? null : bar.torsionalShearStress() * 1e-6);
-        putOrNull(node, "barMaxVonMisesStressMPa", bar == null ? null : bar.maxVonMisesStress() * 1e-6);
+        putOrNull(node, "barTorsionalShearStressMPa", bar == null ? null : toMegapascals(bar.torsionalShearStress()));
+        putOrNull(node, "barMaxVonMisesStressMPa", bar == null ? null : toMegapascals(bar.maxVonMisesStress()));
         putOrNull(node, "barSafetyFactor", bar == null ? null : bar.safetyFactor());
         if (bar == null) {
             node.putNull("barModel");
@@ -81,17 +86,17 @@ public final class ReportJson {
             node.putNull("barBushingLoadsN");
         } else {
             node.put("barModel", bar.model().key());
-            node.put("barMaxStressAtMm", bar.maxStressAt() * 1e3);
+            node.put("barMaxStressAtMm", toMillimetres(bar.maxStressAt()));
             ArrayNode loads = node.putArray("barBushingLoadsN");
             bar.bushingLoads().forEach(loads::add);
         }
         LoadTransferParts transfer = axle.loadTransfer();
         ObjectNode perG = node.putObject("loadTransferNPerG");
-        perG.put("unsprung", transfer.unsprung() * STANDARD_GRAVITY);
-        perG.put("geometric", transfer.geometric() * STANDARD_GRAVITY);
-        perG.put("elastic", transfer.elastic() * STANDARD_GRAVITY);
-        perG.put("total", transfer.total() * STANDARD_GRAVITY);
-        node.put("corneringStiffnessNPerDeg", axle.corneringStiffness() * RADIANS_PER_DEGREE);
+        perG.put("unsprung", perG(transfer.unsprung()));
+        perG.put("geometric", perG(transfer.geometric()));
+        perG.put("elastic", perG(transfer.elastic()));
+        perG.put("total", perG(transfer.total()));
+        node.put("corneringStiffnessNPerDeg", perDegree(axle.corneringStiffness()));
         return node;
     }
 
@@ -99,33 +104,25 @@ public final class ReportJson {
         ObjectNode node = NODES.objectNode();
         putOrNull(node, "frontInsideLiftG", liftInG(turn.frontInsideLift()));
         putOrNull(node, "rearInsideLiftG", liftInG(turn.rearInsideLift()));
-        node.put("frontLimitG", turn.frontLimit() / STANDARD_GRAVITY);
-        node.put("rearLimitG", turn.rearLimit() / STANDARD_GRAVITY);
-        node.put("limitG", turn.limit() / STANDARD_GRAVITY);
+        node.put("frontLimitG", toG(turn.frontLimit()));
+        node.put("rearLimitG", toG(turn.rearLimit()));
+        node.put("limitG", toG(turn.limit()));
         node.put("limitBalance", turn.balance().key());
         return node;
     }
 
     /** @return the lift in g, or null where the wheel stays loaded up to 3 g */
     public static Double liftInG(double lift) {
-        double inG = lift / STANDARD_GRAVITY;
+        double inG = toG(lift);
         return inG <= LIFT_REPORT_CEILING_G ? inG : null;
     }
 
-    private static void putOrNull(ObjectNode node, String key, Double value) {
+    /** Puts the value, or null where there is none. */
+    public static void putOrNull(ObjectNode node, String key, Double value) {
         if (value == null) {
             node.putNull(key);
         } else {
             node.put(key, value);
         }
-    }
-
-    private static double nmPerDeg(double nmPerRad) {
-        return nmPerRad * RADIANS_PER_DEGREE;
-    }
-
-    /** rad per m/s^2 to deg per g */
-    private static double perG(double radPerAccel) {
-        return radPerAccel * STANDARD_GRAVITY / RADIANS_PER_DEGREE;
     }
 }

@@ -13,6 +13,9 @@ import barwright.units.Quantity;
 import barwright.units.UnitSystem;
 
 import java.util.Locale;
+import java.util.function.Function;
+
+import static barwright.units.Conversions.toPercent;
 
 /** The readable summary the command line prints for {@code analyze FILE}. */
 public final class TextSummary {
@@ -114,7 +117,7 @@ public final class TextSummary {
         return axle.bar() == null ? "no bar" : f(value, Quantity.ROLL_STIFFNESS, 0);
     }
 
-    private static String barText(BarResult bar, java.util.function.Function<BarResult, String> text) {
+    private static String barText(BarResult bar, Function<BarResult, String> text) {
         return bar == null ? "-" : text.apply(bar);
     }
 
@@ -128,7 +131,7 @@ public final class TextSummary {
     }
 
     private static String percent(double fraction) {
-        return String.format(Locale.ROOT, "%.1f %%", fraction * 100);
+        return String.format(Locale.ROOT, "%.1f %%", toPercent(fraction));
     }
 
     private void row(String label, String value) {

@@ -6,6 +6,7 @@ import barwright.model.Material;
 import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
+import barwright.report.insight.ChassisText;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;

@@ -10,6 +10,7 @@ import barwright.units.UnitSystem;
 
 import java.io.IOException;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * A bar seen from above, to scale: the torsion tube across, the arms along the car with every link hole
@@ -72,7 +73,7 @@ final class BarDrawing {
         labels = canvas.paragraph("torsion length " + length(length, units) + ", bushings "
                 + length(dimensions.bushingSpan(), units) + " apart (grey blocks)", x, labels, width, PdfCanvas.REGULAR, 7);
         canvas.paragraph("arm lengths " + armList(arms, units) + "; in use: hole " + (bar.selectedArm() + 1)
-                + " (filled); link motion ratio " + String.format(java.util.Locale.ROOT, "%.2f",
+                + " (filled); link motion ratio " + String.format(Locale.ROOT, "%.2f",
                 bar.linkMotionRatio()), x, labels, width, PdfCanvas.REGULAR, 7);
     }
 

@@ -1,7 +1,7 @@
 package barwright.report.sheet;
 
-import barwright.sizing.compare.Chart;
-import barwright.sizing.compare.Series;
+import barwright.physics.curve.Chart;
+import barwright.physics.curve.Series;
 import barwright.units.DisplayUnit;
 import barwright.units.UnitSystem;
 

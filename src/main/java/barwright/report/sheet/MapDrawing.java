@@ -10,6 +10,8 @@ import barwright.units.UnitSystem;
 import java.io.IOException;
 import java.util.Locale;
 
+import static barwright.units.Conversions.toPercent;
+
 /**
  * The adjustment map as a coloured table. Each cell's tint says how far its front share of load transfer
  * lies from a reference share: blue where more of the transfer is at the front (toward understeer), amber
@@ -66,7 +68,7 @@ final class MapDrawing {
             canvas.fillColour(tint[0], tint[1], tint[2]);
             canvas.filledRectangle(x, y, width, height);
             canvas.black();
-            canvas.text(String.format(Locale.ROOT, "%.1f %% front", figures.frontLoadTransferShare() * 100), x + 4,
+            canvas.text(String.format(Locale.ROOT, "%.1f %% front", toPercent(figures.frontLoadTransferShare())), x + 4,
                     y + height - 10, PdfCanvas.BOLD, 7.5f);
             canvas.text(Figures.format(figures.rollGradient(), Quantity.ROLL_GRADIENT, units, 2) + ", "
                     + Figures.format(figures.limit(), Quantity.ACCELERATION, units, 2) + " "

@@ -7,7 +7,7 @@ import barwright.physics.AxleResult;
 import barwright.physics.TurnResult;
 import barwright.physics.Warning;
 import barwright.report.Cautions;
-import barwright.sizing.compare.Chart;
+import barwright.physics.curve.Chart;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
 import barwright.sizing.map.AdjustmentMap;
@@ -29,6 +29,11 @@ import java.time.LocalDate;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.Function;
+import java.util.logging.Level;
+import java.util.logging.Logger;
+
+import static barwright.units.Conversions.fromG;
+import static barwright.units.Conversions.toPercent;
 
 /**
  * The setup sheet to take to the track, as PDF (Apache PDFBox): the car, both bars drawn to scale, the key
@@ -41,7 +46,7 @@ public final class SetupSheet {
      * a system font and builds a font cache: notes for its developers, noise for a person printing a sheet.
      * Held in a field so the setting is not lost when the logger is collected.
      */
-    private static final java.util.logging.Logger PDFBOX_LOG = quietPdfBox();
+    private static final Logger PDFBOX_LOG = quietPdfBox();
     private static final float MARGIN = 40;
     private static final float PAGE_WIDTH = PDRectangle.A4.getWidth();
     private static final float PAGE_HEIGHT = PDRectangle.A4.getHeight();
@@ -111,7 +116,7 @@ public final class SetupSheet {
                         + "%.1f %%, amber where below (pale: near it). The reference is the static front weight plus 5 "
                         + "points, a rule of thumb for a slight understeer, unless a target was given. Red frame: an inside "
                         + "wheel lifts before the limit. Heavy frame: the current setting. Holes count from 1 (the first "
-                        + "arm length).", content.referenceShare() * 100), MARGIN, y, CONTENT_WIDTH,
+                        + "arm length).", toPercent(content.referenceShare())), MARGIN, y, CONTENT_WIDTH,
                 PdfCanvas.REGULAR, 7);
         y -= 8;
         charts();
@@ -131,7 +136,7 @@ public final class SetupSheet {
         y -= 14;
         canvas.text(String.format(Locale.ROOT, "Mass %s, static front weight %.1f %%, CG height %s, wheelbase %s; "
                         + "bar check travel %s (left minus right wheel). Units: %s.",
-                f(result.masses().mass(), Quantity.MASS, 1), result.masses().frontMassFraction() * 100,
+                f(result.masses().mass(), Quantity.MASS, 1), toPercent(result.masses().frontMassFraction()),
                 f(result.vehicle().cgHeight(), Quantity.LENGTH, 0), f(result.vehicle().wheelbase(), Quantity.LENGTH, 0),
                 f(result.vehicle().differentialWheelTravel(), Quantity.LENGTH, 0), content.units().label()),
                 MARGIN, y, PdfCanvas.REGULAR, 8);
@@ -256,17 +261,17 @@ public final class SetupSheet {
     }
 
     private String lift(double accel) {
-        return accel <= 3 * barwright.units.Constants.STANDARD_GRAVITY
+        return accel <= fromG(3)
                 ? f(accel, Quantity.ACCELERATION, 2) : "stays down";
     }
 
     private static String percent(double share) {
-        return String.format(Locale.ROOT, "%.1f %%", share * 100);
+        return String.format(Locale.ROOT, "%.1f %%", toPercent(share));
     }
 
-    private static java.util.logging.Logger quietPdfBox() {
-        java.util.logging.Logger logger = java.util.logging.Logger.getLogger("org.apache.pdfbox");
-        logger.setLevel(java.util.logging.Level.SEVERE);
+    private static Logger quietPdfBox() {
+        Logger logger = Logger.getLogger("org.apache.pdfbox");
+        logger.setLevel(Level.SEVERE);
         return logger;
     }
 }

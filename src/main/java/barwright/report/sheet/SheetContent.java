@@ -1,7 +1,7 @@
 package barwright.report.sheet;
 
 import barwright.physics.AnalysisResult;
-import barwright.sizing.compare.Chart;
+import barwright.physics.curve.Chart;
 import barwright.sizing.map.AdjustmentMap;
 import barwright.units.UnitSystem;
 

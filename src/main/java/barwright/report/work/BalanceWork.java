@@ -9,8 +9,10 @@ import barwright.units.Quantity;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 import static barwright.units.Constants.STANDARD_GRAVITY;
+import static barwright.units.Conversions.toPercent;
 
 /** The working of the roll gradient, the front share of load transfer and the understeer gradient. */
 final class BalanceWork {
@@ -93,7 +95,7 @@ final class BalanceWork {
                 ROLL_SOURCE,
                 "Each load transfer is the outside wheel's gain per g (the inside wheel's loss), before any wheel "
                         + "lifts. Compare the share with the static front weight, "
-                        + String.format(java.util.Locale.ROOT, "%.1f %%", result.masses().frontMassFraction() * 100)
+                        + String.format(Locale.ROOT, "%.1f %%", toPercent(result.masses().frontMassFraction()))
                         + ": a front share above it loads the front tyres harder in a corner and leans the car "
                         + "toward understeer; below it, toward oversteer.");
     }

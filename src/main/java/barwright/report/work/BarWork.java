@@ -13,6 +13,8 @@ import barwright.units.Quantity;
 import java.util.ArrayList;
 import java.util.List;
 
+import static barwright.units.Conversions.toMillimetres;
+
 /** The working of a bar's link rate, mass and safety factor (model.md 1 and 2). */
 final class BarWork {
     private static final String RATE_SOURCE = "model.md section 2: Castigliano's theorem over the torsion tube, "
@@ -98,8 +100,8 @@ final class BarWork {
         steps.add(new Step("F = k_link Δ", new WorkValue("F", "link force", barResult.linkForce(), Quantity.FORCE)));
         if (barResult.model() == BarModel.BEAM) {
             steps.add(new Step("largest von Mises stress along the frame", new WorkValue("σ_max",
-                    "largest stress, " + Math.round(barResult.maxStressAt() * 1e3) + " mm along the bar from the "
-                    + "left link", barResult.maxVonMisesStress(), Quantity.STRESS)));
+                    "largest stress, " + Math.round(toMillimetres(barResult.maxStressAt()))
+                    + " mm along the bar from the left link", barResult.maxVonMisesStress(), Quantity.STRESS)));
             return new Derivation(title, "SF = σ_y / σ_max", inputs, steps, factor, BEAM_SOURCE, note);
         }
         inputs.add(new WorkValue("a", "arm length of the hole in use", bar.selectedArmLength(), Quantity.LENGTH));

@@ -1,5 +1,6 @@
 package barwright.report.work;
 
+import barwright.model.AxlePosition;
 import barwright.physics.AnalysisResult;
 
 /** Shows the work behind each key figure of an analysis. */
@@ -28,7 +29,7 @@ public final class Derivations {
         };
     }
 
-    private static barwright.model.AxlePosition requireBar(AnalysisResult result, KeyFigure figure) {
+    private static AxlePosition requireBar(AnalysisResult result, KeyFigure figure) {
         if (result.axle(figure.axle()).bar() == null) {
             throw new IllegalArgumentException("there is no " + figure.axle().key() + " bar");
         }

@@ -14,7 +14,8 @@ import barwright.units.Quantity;
 import java.util.List;
 import java.util.Locale;
 
-import static barwright.units.Constants.STANDARD_GRAVITY;
+import static barwright.units.Conversions.toG;
+
 
 /** The working of a turn's grip limit and of an inside wheel's lift (model.md 7 and 8). */
 final class TurnWork {
@@ -42,7 +43,7 @@ final class TurnWork {
         String note = String.format(Locale.ROOT, "The %s axle reaches its grip first (front limit %.3f g, rear "
                         + "%.3f g): the balance at the limit is %s. A heavily loaded outside tyre grips less per "
                         + "unit of load, so the axle that transfers more load loses grip sooner.", word,
-                turn.frontLimit() / STANDARD_GRAVITY, turn.rearLimit() / STANDARD_GRAVITY, turn.balance().key());
+                toG(turn.frontLimit()), toG(turn.rearLimit()), turn.balance().key());
         return new Derivation(title, "m_" + axle.key().charAt(0) + " a_y = μ(F_zo) F_zo + μ(F_zi) F_zi, solved for a_y",
                 List.of(new WorkValue("m", "car mass", masses.mass(), Quantity.MASS),
                         new WorkValue("share", "share of the car's mass this axle must turn", share, Quantity.SHARE),
@@ -113,9 +114,9 @@ final class TurnWork {
     private static String liftNote(TurnResult turn, double lift) {
         return lift < turn.limit()
                 ? String.format(Locale.ROOT, "This is below the grip limit (%.3f g): the wheel leaves the ground "
-                + "before the car slides.", turn.limit() / STANDARD_GRAVITY)
+                + "before the car slides.", toG(turn.limit()))
                 : String.format(Locale.ROOT, "This is above the grip limit (%.3f g): the tyres slide first.",
-                turn.limit() / STANDARD_GRAVITY);
+                toG(turn.limit()));
     }
 
     private static double inside(MassProperties.StaticWheelLoads loads, AxlePosition axle, TurnDirection direction) {

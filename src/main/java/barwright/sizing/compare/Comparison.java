@@ -3,17 +3,19 @@ package barwright.sizing.compare;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
-import barwright.physics.HandlingPoint;
-import barwright.physics.SteadyCornering;
 import barwright.physics.TurnResult;
 import barwright.physics.VehicleAnalysis;
-import barwright.physics.WheelLoads;
 import barwright.physics.bar.BarResult;
+import barwright.physics.curve.Chart;
+import barwright.physics.curve.CorneringCurves;
+import barwright.physics.curve.Series;
 import barwright.units.Quantity;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Function;
+
+import static barwright.units.Conversions.fromG;
 
 /**
  * Two to four setups side by side: their figures (with the difference of each from the first) and the main
@@ -33,7 +35,7 @@ public record Comparison(List<Configuration> configurations, List<AnalysisResult
     /** Points of the roll and wheel-load lines. */
     static final int CHART_POINTS = 60;
     /** Lifts past this a_y are shown as staying down, as the report does (files.md): 3 g, in m/s^2. */
-    private static final double LIFT_CEILING = 3 * barwright.units.Constants.STANDARD_GRAVITY;
+    private static final double LIFT_CEILING = fromG(3);
 
     public Comparison {
         configurations = List.copyOf(configurations);
@@ -108,24 +110,11 @@ public record Comparison(List<Configuration> configurations, List<AnalysisResult
         for (int i = 0; i < results.size(); i++) {
             String name = configurations.get(i).name();
             TurnResult turn = results.get(i).leftTurn();
-            List<HandlingPoint> curve = turn.handlingCurve();
-            handling.add(new Series(name, curve.stream().mapToDouble(HandlingPoint::lateralAcceleration).toArray(),
-                    curve.stream().mapToDouble(HandlingPoint::slipAngleDifference).toArray()));
-            double[] accel = new double[CHART_POINTS];
-            double[] angle = new double[CHART_POINTS];
-            double[] front = new double[CHART_POINTS];
-            double[] rear = new double[CHART_POINTS];
-            SteadyCornering cornering = turn.cornering();
-            for (int p = 0; p < CHART_POINTS; p++) {
-                accel[p] = turn.limit() * p / (CHART_POINTS - 1);
-                angle[p] = cornering.rollAngle(accel[p]);
-                WheelLoads loads = cornering.wheelLoads(accel[p]);
-                front[p] = loads.frontInside();
-                rear[p] = loads.rearInside();
-            }
-            roll.add(new Series(name, accel, angle));
-            insideLoads.add(new Series(name + ", inside front", accel, front));
-            insideLoads.add(new Series(name + ", inside rear", accel, rear));
+            CorneringCurves curves = CorneringCurves.sample(turn, CHART_POINTS);
+            handling.add(CorneringCurves.handling(turn, name));
+            roll.add(curves.roll(name));
+            insideLoads.add(curves.frontInside(name + ", inside front"));
+            insideLoads.add(curves.rearInside(name + ", inside rear"));
         }
         return List.of(
                 new Chart("Handling curve, left turn (positive: understeer)", "lateral acceleration",

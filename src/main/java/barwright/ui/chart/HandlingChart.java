@@ -1,7 +1,7 @@
 package barwright.ui.chart;
 
-import barwright.physics.HandlingPoint;
 import barwright.physics.TurnResult;
+import barwright.physics.curve.CorneringCurves;
 import barwright.ui.field.ViewSettings;
 import barwright.ui.task.AnalysisOutcome;
 import barwright.ui.task.CorneringProbe;
@@ -12,6 +12,7 @@ import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleInsets;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
@@ -50,11 +51,8 @@ public final class HandlingChart extends ResultChart {
     @Override
     protected void fill(AnalysisOutcome outcome) {
         TurnResult turn = outcome.result().turn(probe.turn());
-        XYSeries curve = new XYSeries("Front minus rear slip angle (above zero: understeer)");
-        for (HandlingPoint point : turn.handlingCurve()) {
-            curve.add(Axes.shown(point.lateralAcceleration(), Quantity.ACCELERATION, view),
-                    Axes.shown(point.slipAngleDifference(), Quantity.ANGLE, view));
-        }
+        XYSeries curve = Axes.series(CorneringCurves.handling(turn, "Front minus rear slip angle (above zero: understeer)"),
+                Quantity.ACCELERATION, Quantity.ANGLE, view);
         data.removeAllSeries();
         data.addSeries(curve);
         XYPlot plot = chart().getXYPlot();
@@ -82,7 +80,7 @@ public final class HandlingChart extends ResultChart {
         boolean front = label.startsWith("front");
         marker.setLabelAnchor(front ? RectangleAnchor.TOP_LEFT : RectangleAnchor.BOTTOM_LEFT);
         marker.setLabelTextAnchor(front ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);
-        marker.setLabelOffset(new org.jfree.chart.ui.RectangleInsets(front ? 14 : 4, 4, front ? 4 : 14, 4));
+        marker.setLabelOffset(new RectangleInsets(front ? 14 : 4, 4, front ? 4 : 14, 4));
         marker.setLabelBackgroundColor(new Color(0, 0, 0, 0));
         return marker;
     }

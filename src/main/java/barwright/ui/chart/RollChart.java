@@ -1,7 +1,7 @@
 package barwright.ui.chart;
 
 import barwright.physics.AnalysisResult;
-import barwright.physics.TurnResult;
+import barwright.physics.curve.CorneringCurves;
 import barwright.ui.field.ViewSettings;
 import barwright.ui.task.AnalysisOutcome;
 import barwright.ui.task.CorneringProbe;
@@ -18,6 +18,7 @@ import java.awt.BasicStroke;
 
 /** Body roll against lateral acceleration, with the bars as fitted and with both bars taken off. */
 public final class RollChart extends ResultChart {
+    private static final int POINTS = 60;
     private final XYSeriesCollection data;
     private final TextTitle note = new TextTitle("");
 
@@ -66,14 +67,7 @@ public final class RollChart extends ResultChart {
     }
 
     private XYSeries curve(String name, AnalysisResult result) {
-        XYSeries series = new XYSeries(name);
-        TurnResult turn = result.turn(probe.turn());
-        int points = 60;
-        for (int i = 0; i < points; i++) {
-            double accel = turn.limit() * i / (points - 1);
-            series.add(Axes.shown(accel, Quantity.ACCELERATION, view),
-                    Axes.shown(turn.cornering().rollAngle(accel), Quantity.ANGLE, view));
-        }
-        return series;
+        CorneringCurves curves = CorneringCurves.sample(result.turn(probe.turn()), POINTS);
+        return Axes.series(curves.roll(name), Quantity.ACCELERATION, Quantity.ANGLE, view);
     }
 }

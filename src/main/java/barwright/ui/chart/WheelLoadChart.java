@@ -1,9 +1,9 @@
 package barwright.ui.chart;
 
 import barwright.model.TurnDirection;
-import barwright.physics.SteadyCornering;
 import barwright.physics.TurnResult;
-import barwright.physics.WheelLoads;
+import barwright.physics.curve.CorneringCurves;
+import barwright.physics.curve.Series;
 import barwright.ui.field.ViewSettings;
 import barwright.ui.task.AnalysisOutcome;
 import barwright.ui.task.CorneringProbe;
@@ -60,23 +60,14 @@ public final class WheelLoadChart extends ResultChart {
     protected void fill(AnalysisOutcome outcome) {
         TurnDirection direction = probe.turn();
         TurnResult turn = outcome.result().turn(direction);
-        SteadyCornering cornering = turn.cornering();
         String inside = direction.word();
         String outside = direction == TurnDirection.LEFT ? "right" : "left";
-        XYSeries frontOutside = new XYSeries("Front outside (" + outside + ")");
-        XYSeries frontInside = new XYSeries("Front inside (" + inside + ")");
-        XYSeries rearOutside = new XYSeries("Rear outside (" + outside + ")");
-        XYSeries rearInside = new XYSeries("Rear inside (" + inside + ")");
+        CorneringCurves curves = CorneringCurves.sample(turn, POINTS);
+        XYSeries frontOutside = force(curves.frontOutside("Front outside (" + outside + ")"));
+        XYSeries frontInside = force(curves.frontInside("Front inside (" + inside + ")"));
+        XYSeries rearOutside = force(curves.rearOutside("Rear outside (" + outside + ")"));
+        XYSeries rearInside = force(curves.rearInside("Rear inside (" + inside + ")"));
         double limit = turn.limit();
-        for (int i = 0; i < POINTS; i++) {
-            double accel = limit * i / (POINTS - 1);
-            WheelLoads loads = cornering.wheelLoads(accel);
-            double x = Axes.shown(accel, Quantity.ACCELERATION, view);
-            frontOutside.add(x, Axes.shown(loads.frontOutside(), Quantity.FORCE, view));
-            frontInside.add(x, Axes.shown(loads.frontInside(), Quantity.FORCE, view));
-            rearOutside.add(x, Axes.shown(loads.rearOutside(), Quantity.FORCE, view));
-            rearInside.add(x, Axes.shown(loads.rearInside(), Quantity.FORCE, view));
-        }
         data.removeAllSeries();
         data.addSeries(frontOutside);
         data.addSeries(frontInside);
@@ -90,6 +81,10 @@ public final class WheelLoadChart extends ResultChart {
         plot.getDomainAxis().setLabel(Axes.label("Lateral acceleration a_y", Quantity.ACCELERATION, view));
         plot.getRangeAxis().setLabel(Axes.label("Vertical load on the wheel", Quantity.FORCE, view));
         probeMoved(outcome);
+    }
+
+    private XYSeries force(Series line) {
+        return Axes.series(line, Quantity.ACCELERATION, Quantity.FORCE, view);
     }
 
     private void markLift(XYPlot plot, String axle, double lift, double limit) {

@@ -2,7 +2,7 @@ package barwright.ui.insight;
 
 import barwright.insight.ChassisPoint;
 import barwright.insight.ChassisStudyResult;
-import barwright.insight.ChassisText;
+import barwright.report.insight.ChassisText;
 import barwright.ui.chart.ChartStyle;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Quantity;
@@ -28,6 +28,7 @@ import java.awt.BasicStroke;
 import java.awt.BorderLayout;
 import java.awt.Color;
 import java.text.DecimalFormat;
+import java.util.Locale;
 
 /**
  * What a flexible chassis costs: front share, the share of a bar change that reaches the tyres (left scale,
@@ -132,7 +133,7 @@ public final class ChassisView extends JPanel {
         ChassisText words = new ChassisText(view.units());
         String current = study.current() == null
                 ? "This car's file gives no chassis stiffness, so it is analysed as rigid."
-                : String.format(java.util.Locale.ROOT, "This car's chassis lets %.0f %% of the bar change through; "
+                : String.format(Locale.ROOT, "This car's chassis lets %.0f %% of the bar change through; "
                 + "its front share is %.1f %% against %.1f %% with a rigid chassis.",
                 study.current().deliveredShare() * 100, study.current().frontShare() * 100,
                 study.rigid().frontShare() * 100);

@@ -1,12 +1,12 @@
 package barwright.ui.insight;
 
-import barwright.ui.chart.ChartStyle;
-import barwright.insight.EnvelopeText;
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
 import barwright.io.VehicleFileException;
 import barwright.io.VehicleFileReader;
 import barwright.physics.VehicleAnalysis;
+import barwright.report.insight.EnvelopeText;
+import barwright.ui.chart.ChartStyle;
 import barwright.ui.field.ViewSettings;
 import org.jfree.chart.ChartPanel;
 

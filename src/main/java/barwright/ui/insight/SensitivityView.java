@@ -2,8 +2,8 @@ package barwright.ui.insight;
 
 import barwright.insight.SensitivityResult;
 import barwright.insight.SensitivityRow;
-import barwright.insight.SensitivityText;
 import barwright.insight.Tendency;
+import barwright.report.insight.SensitivityText;
 import barwright.ui.chart.ChartStyle;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Figures;
@@ -31,9 +31,12 @@ import java.awt.BorderLayout;
 import java.awt.Color;
 import java.awt.FlowLayout;
 import java.awt.Paint;
+import java.awt.event.MouseEvent;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+
+import static barwright.units.Conversions.toG;
 
 /**
  * What moves the balance most: a bar per change of the figure chosen, coloured by the way it moves the balance,
@@ -80,7 +83,7 @@ public final class SensitivityView extends JPanel {
         ChartPanel panel = ChartStyle.panel(chart, "insight.sensitivity.chart");
         JTable rows = new JTable(table) {
             @Override
-            public String getToolTipText(java.awt.event.MouseEvent event) {
+            public String getToolTipText(MouseEvent event) {
                 int row = rowAtPoint(event.getPoint());
                 int column = columnAtPoint(event.getPoint());
                 return row >= 0 && column >= 0 ? String.valueOf(getValueAt(row, column)) : null;
@@ -160,10 +163,10 @@ public final class SensitivityView extends JPanel {
 
     private double value(SensitivityRow row, Measure chosen) {
         return switch (chosen) {
-            case LIMIT_MARGIN -> row.limitMarginChange() / barwright.units.Constants.STANDARD_GRAVITY;
+            case LIMIT_MARGIN -> toG(row.limitMarginChange());
             case FRONT_SHARE -> row.frontShareChange() * 100;
             case ROLL_GRADIENT -> Quantity.ROLL_GRADIENT.unit(view.units()).fromSi(row.rollGradientChange());
-            case INSIDE_LIFT -> row.insideLiftChange().orElse(0) / barwright.units.Constants.STANDARD_GRAVITY;
+            case INSIDE_LIFT -> toG(row.insideLiftChange().orElse(0));
         };
     }
 
@@ -205,7 +208,7 @@ public final class SensitivityView extends JPanel {
                 case TOWARDS_OVERSTEER -> ChartStyle.series(2);
                 case TOWARDS_UNDERSTEER_BELOW_LIMIT -> ChartStyle.series(1);
                 case TOWARDS_OVERSTEER_BELOW_LIMIT -> ChartStyle.series(3);
-                case NO_CHANGE -> java.awt.Color.GRAY;
+                case NO_CHANGE -> Color.GRAY;
             };
         }
     }

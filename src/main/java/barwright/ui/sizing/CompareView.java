@@ -5,11 +5,13 @@ import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
 import barwright.io.VehicleFileReader;
 import barwright.model.Vehicle;
+import barwright.physics.curve.Chart;
 import barwright.sizing.VehicleEdits;
-import barwright.sizing.compare.Chart;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
 import barwright.sizing.compare.FigureRow;
+import barwright.ui.chart.ChartStyle;
+import barwright.ui.chart.ComparisonCharts;
 import barwright.ui.panel.FigureFormat;
 import barwright.ui.panel.WrappingText;
 import barwright.units.Quantity;
@@ -24,6 +26,7 @@ import javax.swing.JTabbedPane;
 import javax.swing.JTextField;
 import javax.swing.table.AbstractTableModel;
 import java.awt.BorderLayout;
+import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
 import java.io.IOException;
@@ -95,13 +98,13 @@ final class CompareView extends JPanel {
         top.setBorder(BorderFactory.createEmptyBorder(4, 8, 4, 8));
         top.add(hint, BorderLayout.NORTH);
         JScrollPane list = new JScrollPane(setupTable);
-        list.setPreferredSize(new java.awt.Dimension(800, 110));
+        list.setPreferredSize(new Dimension(800, 110));
         top.add(list, BorderLayout.CENTER);
         top.add(controls, BorderLayout.SOUTH);
         JScrollPane figureScroll = new JScrollPane(figureTable);
-        figureScroll.setPreferredSize(new java.awt.Dimension(640, 400));
+        figureScroll.setPreferredSize(new Dimension(640, 400));
         charts.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
-        charts.setPreferredSize(new java.awt.Dimension(520, 400));
+        charts.setPreferredSize(new Dimension(520, 400));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, figureScroll, charts);
         split.setResizeWeight(0.6);
         split.setBorder(null);
@@ -211,7 +214,7 @@ final class CompareView extends JPanel {
         charts.removeAll();
         if (shown != null) {
             for (Chart chart : shown.charts()) {
-                charts.addTab(chart.title().replaceFirst(",.*", ""), barwright.ui.chart.ChartStyle.panel(
+                charts.addTab(chart.title().replaceFirst(",.*", ""), ChartStyle.panel(
                         ComparisonCharts.draw(chart, shown.configurations().size(), context.view()),
                         "compare.chart." + charts.getTabCount()));
             }

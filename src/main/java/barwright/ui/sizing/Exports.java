@@ -7,8 +7,8 @@ import barwright.physics.MassProperties;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.sheet.SetupSheet;
 import barwright.report.sheet.SheetContent;
+import barwright.report.sizing.MapOutput;
 import barwright.sizing.map.AdjustmentMap;
-import barwright.sizing.output.MapOutput;
 
 import java.io.IOException;
 import java.io.StringWriter;

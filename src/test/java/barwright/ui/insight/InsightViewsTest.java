@@ -1,6 +1,5 @@
 package barwright.ui.insight;
 
-import barwright.insight.EnvelopeText;
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
 import barwright.insight.Sensitivity;
@@ -8,6 +7,7 @@ import barwright.insight.SensitivityResult;
 import barwright.insight.Wheel;
 import barwright.model.Vehicle;
 import barwright.physics.VehicleAnalysis;
+import barwright.report.insight.EnvelopeText;
 import barwright.ui.action.Settings;
 import barwright.ui.app.MainWindow;
 import barwright.ui.app.Themes;

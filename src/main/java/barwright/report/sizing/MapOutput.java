@@ -1,5 +1,6 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
+import barwright.report.ReportJson;
 import barwright.sizing.BarFigures;
 import barwright.sizing.SetupFigures;
 import barwright.sizing.map.AdjustmentMap;
@@ -14,6 +15,10 @@ import org.apache.commons.csv.CSVPrinter;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
+
+import static barwright.units.Conversions.toDegreesPerG;
+import static barwright.units.Conversions.toG;
+import static barwright.units.Conversions.toMillimetres;
 
 /** The adjustment map for scripts: JSON ({@code map FILE --json}) and CSV, one entry per hole pair. */
 public final class MapOutput {
@@ -47,8 +52,8 @@ public final class MapOutput {
                 continue;
             }
             Json.putFigures(entry, cell.figures());
-            Json.putOrNull(entry, "frontBarSafetyFactor", safety(cell.figures().frontBar()));
-            Json.putOrNull(entry, "rearBarSafetyFactor", safety(cell.figures().rearBar()));
+            ReportJson.putOrNull(entry, "frontBarSafetyFactor", safety(cell.figures().frontBar()));
+            ReportJson.putOrNull(entry, "rearBarSafetyFactor", safety(cell.figures().rearBar()));
         }
         return root;
     }
@@ -60,7 +65,8 @@ public final class MapOutput {
         } else {
             entry.put(axle + "SelectedArm", option.hole());
         }
-        Json.putOrNull(entry, axle + "ArmMm", Double.isNaN(option.armLength()) ? null : option.armLength() * 1e3);
+        ReportJson.putOrNull(entry, axle + "ArmMm",
+                Double.isNaN(option.armLength()) ? null : toMillimetres(option.armLength()));
     }
 
     private static Double safety(BarFigures bar) {
@@ -84,11 +90,11 @@ public final class MapOutput {
                     row.add(cell.problem());
                 } else {
                     row.add(figures.frontLoadTransferShare());
-                    row.add(Json.degPerG(figures.rollGradient()));
-                    row.add(Json.inG(figures.limit()));
+                    row.add(toDegreesPerG(figures.rollGradient()));
+                    row.add(toG(figures.limit()));
                     row.add(figures.balance().key());
-                    row.add(orEmpty(Json.liftInG(figures.frontInsideLift())));
-                    row.add(orEmpty(Json.liftInG(figures.rearInsideLift())));
+                    row.add(orEmpty(ReportJson.liftInG(figures.frontInsideLift())));
+                    row.add(orEmpty(ReportJson.liftInG(figures.rearInsideLift())));
                     row.add(figures.frontLiftsBeforeLimit());
                     row.add(figures.rearLiftsBeforeLimit());
                     row.add(orEmpty(safety(figures.frontBar())));
@@ -103,7 +109,7 @@ public final class MapOutput {
     private static void addOption(List<Object> row, BarOption option) {
         row.add(option.bar() == null ? "no bar" : option.barLabel());
         row.add(option.bar() == null ? "" : option.hole());
-        row.add(Double.isNaN(option.armLength()) ? "" : option.armLength() * 1e3);
+        row.add(Double.isNaN(option.armLength()) ? "" : toMillimetres(option.armLength()));
     }
 
     static Object orEmpty(Double value) {

@@ -1,5 +1,15 @@
-package barwright.insight;
+package barwright.report.insight;
 
+import barwright.insight.BalanceFigures;
+import barwright.insight.ChassisPoint;
+import barwright.insight.ChassisStudyResult;
+import barwright.insight.EnvelopePoint;
+import barwright.insight.InputChange;
+import barwright.insight.LiftBoundary;
+import barwright.insight.LiftEnvelopeResult;
+import barwright.insight.LongitudinalRange;
+import barwright.insight.SensitivityResult;
+import barwright.insight.SensitivityRow;
 import barwright.model.TurnDirection;
 import barwright.report.ReportJson;
 import barwright.units.DisplayUnit;
@@ -11,8 +21,9 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import java.util.Locale;
 
-import static barwright.units.Constants.RADIANS_PER_DEGREE;
-import static barwright.units.Constants.STANDARD_GRAVITY;
+import static barwright.units.Conversions.perDegree;
+import static barwright.units.Conversions.toDegreesPerG;
+import static barwright.units.Conversions.toG;
 
 /**
  * The JSON the {@code envelope}, {@code sensitivity} and {@code chassis} commands print for scripts (described in
@@ -37,11 +48,11 @@ public final class InsightJson {
     private static ObjectNode envelopeBody(LiftEnvelopeResult envelope) {
         ObjectNode node = header("barwright.envelope", envelope.vehicleName());
         ObjectNode range = node.putObject("longitudinalRangeG");
-        range.put("from", inG(envelope.mostBraking()));
-        range.put("to", inG(envelope.mostAcceleration()));
+        range.put("from", toG(envelope.mostBraking()));
+        range.put("to", toG(envelope.mostAcceleration()));
         ObjectNode limits = node.putObject("lateralLimitG");
         for (TurnDirection turn : TurnDirection.values()) {
-            limits.put(turn.key(), inG(envelope.limit(turn)));
+            limits.put(turn.key(), toG(envelope.limit(turn)));
         }
         ArrayNode boundaries = node.putArray("boundaries");
         for (LiftBoundary boundary : envelope.boundaries()) {
@@ -52,13 +63,13 @@ public final class InsightJson {
             ArrayNode points = wheel.putArray("points");
             for (EnvelopePoint point : boundary.points()) {
                 ObjectNode entry = points.addObject();
-                entry.put("aXG", inG(point.longitudinalAcceleration()));
+                entry.put("aXG", toG(point.longitudinalAcceleration()));
                 putLift(entry, "aYG", point.lateralAcceleration());
                 entry.put("rollover", point.rollover());
             }
             ArrayNode before = wheel.putArray("liftsBeforeLimit");
             for (LongitudinalRange span : boundary.liftsBeforeLimit()) {
-                before.addObject().put("fromAXG", inG(span.from())).put("toAXG", inG(span.to()));
+                before.addObject().put("fromAXG", toG(span.from())).put("toAXG", toG(span.to()));
             }
         }
         strings(node, "notes", envelope.notes());
@@ -86,10 +97,10 @@ public final class InsightJson {
             }
             entry.set("after", figures(row.after()));
             entry.put("frontLoadTransferShareChange", row.frontShareChange());
-            entry.put("rollGradientChangeDegPerG", degPerG(row.rollGradientChange()));
-            entry.put("limitMarginChangeG", inG(row.limitMarginChange()));
+            entry.put("rollGradientChangeDegPerG", toDegreesPerG(row.rollGradientChange()));
+            entry.put("limitMarginChangeG", toG(row.limitMarginChange()));
             if (row.insideLiftChange().isPresent()) {
-                entry.put("insideLiftChangeG", inG(row.insideLiftChange().getAsDouble()));
+                entry.put("insideLiftChangeG", toG(row.insideLiftChange().getAsDouble()));
             } else {
                 entry.putNull("insideLiftChangeG");
             }
@@ -103,8 +114,8 @@ public final class InsightJson {
     private static ObjectNode figures(BalanceFigures figures) {
         ObjectNode node = NODES.objectNode();
         node.put("frontLoadTransferShare", figures.frontLoadTransferShare());
-        node.put("rollGradientDegPerG", degPerG(figures.rollGradient()));
-        node.put("limitMarginG", inG(figures.limitMargin()));
+        node.put("rollGradientDegPerG", toDegreesPerG(figures.rollGradient()));
+        node.put("limitMarginG", toG(figures.limitMargin()));
         putLift(node, "insideLiftG", figures.insideLift());
         node.put("insideLiftAxle", figures.insideLiftAxle().key());
         return node;
@@ -112,7 +123,7 @@ public final class InsightJson {
 
     public static ObjectNode chassis(ChassisStudyResult study) {
         ObjectNode node = header("barwright.chassis", study.vehicleName());
-        node.put("totalRollStiffnessNmPerDeg", nmPerDeg(study.totalRollStiffness()));
+        node.put("totalRollStiffnessNmPerDeg", perDegree(study.totalRollStiffness()));
         node.put("barChange", study.barChange());
         ArrayNode sweep = node.putArray("sweep");
         study.sweep().forEach(point -> sweep.add(chassisPoint(point, study)));
@@ -123,7 +134,7 @@ public final class InsightJson {
             node.putNull("stiffnessFor80PercentNmPerDeg");
             node.putNull("stiffnessFor80PercentPerTotalRollStiffness");
         } else {
-            node.put("stiffnessFor80PercentNmPerDeg", nmPerDeg(study.stiffnessForTarget()));
+            node.put("stiffnessFor80PercentNmPerDeg", perDegree(study.stiffnessForTarget()));
             node.put("stiffnessFor80PercentPerTotalRollStiffness",
                     study.stiffnessForTarget() / study.totalRollStiffness());
         }
@@ -137,11 +148,11 @@ public final class InsightJson {
             node.putNull("chassisStiffnessNmPerDeg");
             node.putNull("perTotalRollStiffness");
         } else {
-            node.put("chassisStiffnessNmPerDeg", nmPerDeg(point.chassisStiffness()));
+            node.put("chassisStiffnessNmPerDeg", perDegree(point.chassisStiffness()));
             node.put("perTotalRollStiffness", point.chassisStiffness() / study.totalRollStiffness());
         }
         node.put("frontLoadTransferShare", point.frontShare());
-        node.put("rollGradientDegPerG", degPerG(point.rollGradient()));
+        node.put("rollGradientDegPerG", toDegreesPerG(point.rollGradient()));
         node.put("barChangeDelivered", point.deliveredShare());
         return node;
     }
@@ -160,23 +171,6 @@ public final class InsightJson {
     }
 
     private static void putLift(ObjectNode node, String key, double lift) {
-        Double inG = ReportJson.liftInG(lift);
-        if (inG == null) {
-            node.putNull(key);
-        } else {
-            node.put(key, inG);
-        }
-    }
-
-    private static double inG(double accel) {
-        return accel / STANDARD_GRAVITY;
-    }
-
-    private static double degPerG(double radPerAccel) {
-        return radPerAccel * STANDARD_GRAVITY / RADIANS_PER_DEGREE;
-    }
-
-    private static double nmPerDeg(double nmPerRad) {
-        return nmPerRad * RADIANS_PER_DEGREE;
+        ReportJson.putOrNull(node, key, ReportJson.liftInG(lift));
     }
 }

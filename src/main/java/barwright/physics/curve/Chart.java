@@ -1,4 +1,4 @@
-package barwright.sizing.compare;
+package barwright.physics.curve;
 
 import barwright.units.Quantity;
 

@@ -1,4 +1,4 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.FigureRow;

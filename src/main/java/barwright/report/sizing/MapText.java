@@ -1,5 +1,6 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
+import barwright.physics.MassProperties;
 import barwright.sizing.SetupFigures;
 import barwright.sizing.map.AdjustmentMap;
 import barwright.sizing.map.BarOption;
@@ -9,6 +10,8 @@ import barwright.units.UnitSystem;
 
 import java.util.Locale;
 
+import static barwright.units.Conversions.toPercent;
+
 /** The adjustment map as a text grid: front options down, rear options across. */
 public final class MapText {
     private MapText() {
@@ -16,9 +19,9 @@ public final class MapText {
 
     public static String of(AdjustmentMap map, UnitSystem units) {
         StringBuilder out = new StringBuilder();
-        double staticFront = barwright.physics.MassProperties.of(map.vehicle()).frontMassFraction();
+        double staticFront = MassProperties.of(map.vehicle()).frontMassFraction();
         out.append("Adjustment map: ").append(map.vehicle().name()).append(String.format(Locale.ROOT,
-                " (static front weight %.1f %%)%n", staticFront * 100));
+                " (static front weight %.1f %%)%n", toPercent(staticFront)));
         out.append("Each cell: front share of load transfer / roll gradient / balance at the limit; the current "
                 + "setting in [brackets].\n\n");
         String[] header = new String[map.columns().size() + 1];
@@ -48,7 +51,7 @@ public final class MapText {
         if (figures == null) {
             text = "unstable";
         } else {
-            text = String.format(Locale.ROOT, "%.1f%% %s %s%s%s", figures.frontLoadTransferShare() * 100,
+            text = String.format(Locale.ROOT, "%.1f%% %s %s%s%s", toPercent(figures.frontLoadTransferShare()),
                     TextTable.figure(figures.rollGradient(), Quantity.ROLL_GRADIENT, units, 2).replace(" deg/g", ""),
                     figures.balance().key().substring(0, 1), figures.frontLiftsBeforeLimit() ? " !F" : "",
                     figures.rearLiftsBeforeLimit() ? " !R" : "");

@@ -1,5 +1,9 @@
-package barwright.insight;
+package barwright.report.insight;
 
+import barwright.insight.BalanceFigures;
+import barwright.insight.InputChange;
+import barwright.insight.SensitivityResult;
+import barwright.insight.SensitivityRow;
 import barwright.report.Cautions;
 import barwright.report.ReportJson;
 import barwright.units.DisplayUnit;
@@ -8,6 +12,8 @@ import barwright.units.Quantity;
 import barwright.units.UnitSystem;
 
 import java.util.Locale;
+
+import static barwright.units.Conversions.toPercent;
 
 /** What moves the balance most, in words and figures, for the command line and the window. */
 public final class SensitivityText {
@@ -69,7 +75,7 @@ public final class SensitivityText {
                 ? signed(row.insideLiftChange().getAsDouble(), Quantity.ACCELERATION, 3)
                 : "no lift below 3 g to compare";
         return String.format(Locale.ROOT, "front share %+.2f pt, roll gradient %s, limit margin %s, first inside "
-                        + "lift %s", row.frontShareChange() * 100,
+                        + "lift %s", toPercent(row.frontShareChange()),
                 signed(row.rollGradientChange(), Quantity.ROLL_GRADIENT, 3),
                 signed(row.limitMarginChange(), Quantity.ACCELERATION, 4), lift);
     }
@@ -80,7 +86,7 @@ public final class SensitivityText {
                 : "the inside " + figures.insideLiftAxle().key() + " wheel lifts first, at "
                 + Figures.format(figures.insideLift(), Quantity.ACCELERATION, units, 3);
         return String.format(Locale.ROOT, "front share %.1f %%, roll gradient %s, limit margin %s (%s), %s.",
-                figures.frontLoadTransferShare() * 100,
+                toPercent(figures.frontLoadTransferShare()),
                 Figures.format(figures.rollGradient(), Quantity.ROLL_GRADIENT, units, 2),
                 Figures.format(figures.limitMargin(), Quantity.ACCELERATION, units, 3),
                 figures.limitMargin() < 0 ? "understeer" : "oversteer", liftWords);

@@ -1,8 +1,7 @@
-package barwright.ui.sizing;
+package barwright.ui.chart;
 
-import barwright.sizing.compare.Chart;
-import barwright.sizing.compare.Series;
-import barwright.ui.chart.ChartStyle;
+import barwright.physics.curve.Chart;
+import barwright.physics.curve.Series;
 import barwright.ui.field.ViewSettings;
 import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
@@ -18,7 +17,7 @@ import java.awt.Color;
  * A comparison's chart (plain data in SI) drawn with JFreeChart in the units chosen: one colour per setup; where a
  * chart has two lines per setup (inside front and inside rear wheel), the second is dashed.
  */
-final class ComparisonCharts {
+public final class ComparisonCharts {
     /** Theme series colours far apart from one another, one per setup compared (up to four). */
     private static final int[] SETUP_COLOURS = {0, 2, 4, 5};
 
@@ -26,7 +25,7 @@ final class ComparisonCharts {
     }
 
     /** @param setups how many setups the chart's lines belong to */
-    static JFreeChart draw(Chart chart, int setups, ViewSettings view) {
+    public static JFreeChart draw(Chart chart, int setups, ViewSettings view) {
         XYSeriesCollection data = new XYSeriesCollection();
         var xUnit = chart.x().unit(view.units());
         var yUnit = chart.y().unit(view.units());

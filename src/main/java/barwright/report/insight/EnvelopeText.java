@@ -1,5 +1,10 @@
-package barwright.insight;
+package barwright.report.insight;
 
+import barwright.insight.EnvelopePoint;
+import barwright.insight.LiftBoundary;
+import barwright.insight.LiftEnvelopeResult;
+import barwright.insight.LongitudinalRange;
+import barwright.insight.Wheel;
 import barwright.model.TurnDirection;
 import barwright.report.Cautions;
 import barwright.report.ReportJson;
@@ -11,12 +16,14 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import static barwright.units.Constants.STANDARD_GRAVITY;
+import static barwright.units.Conversions.fromG;
+import static barwright.units.Conversions.toG;
+
 
 /** The lift envelope in sentences and a table, for the command line and the window. */
 public final class EnvelopeText {
     /** The table lists every this many g of a_x (m/s^2). */
-    private static final double TABLE_STEP = 0.1 * STANDARD_GRAVITY;
+    private static final double TABLE_STEP = fromG(0.1);
 
     private final UnitSystem units;
 
@@ -107,7 +114,7 @@ public final class EnvelopeText {
 
     /** @return "0.30 g braking" or "0.30 g acceleration" (or "no braking or power") */
     public String longitudinal(double accel) {
-        if (Math.abs(accel) < 0.005 * STANDARD_GRAVITY) {
+        if (Math.abs(accel) < fromG(0.005)) {
             return "no braking or power";
         }
         return g(Math.abs(accel)) + (accel < 0 ? " braking" : " acceleration");
@@ -130,7 +137,7 @@ public final class EnvelopeText {
             if (Math.abs(steps - Math.rint(steps)) > 1e-6) {
                 continue;
             }
-            out.append(String.format(Locale.ROOT, "  %8.2f", ax / STANDARD_GRAVITY));
+            out.append(String.format(Locale.ROOT, "  %8.2f", toG(ax)));
             for (Wheel wheel : Wheel.values()) {
                 String cell = cell(envelope.boundary(wheel).points().get(i));
                 if (compared != null) {

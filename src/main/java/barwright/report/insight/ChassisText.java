@@ -1,11 +1,16 @@
-package barwright.insight;
+package barwright.report.insight;
 
+import barwright.insight.ChassisPoint;
+import barwright.insight.ChassisStudy;
+import barwright.insight.ChassisStudyResult;
 import barwright.report.Cautions;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
 
 import java.util.Locale;
+
+import static barwright.units.Conversions.toPercent;
 
 /** What a flexible chassis costs, in words and a table, for the command line and the window. */
 public final class ChassisText {
@@ -74,10 +79,10 @@ public final class ChassisText {
     }
 
     private static String wholePercent(double fraction) {
-        return String.format(Locale.ROOT, "%.0f %%", fraction * 100);
+        return String.format(Locale.ROOT, "%.0f %%", toPercent(fraction));
     }
 
     private static String percent(double fraction) {
-        return String.format(Locale.ROOT, "%.1f %%", fraction * 100);
+        return String.format(Locale.ROOT, "%.1f %%", toPercent(fraction));
     }
 }

@@ -1,5 +1,6 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
+import barwright.report.ReportJson;
 import barwright.sizing.BarChoice;
 import barwright.sizing.BarFigures;
 import barwright.sizing.BarNodes;
@@ -13,6 +14,9 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.Map;
+
+import static barwright.units.Conversions.toDegreesPerG;
+import static barwright.units.Conversions.toMillimetres;
 
 /**
  * The sizing result for scripts ({@code size FILE --json}): each candidate holds the material, section and
@@ -37,10 +41,10 @@ public final class SizingJson {
         root.put("version", VERSION);
         ArrayNode axles = root.putArray("axles");
         request.axles().forEach(axle -> axles.add(axle.key()));
-        Json.putOrNull(root, "targetFrontLoadTransferShare", Double.isNaN(result.targetShare()) ? null
+        ReportJson.putOrNull(root, "targetFrontLoadTransferShare", Double.isNaN(result.targetShare()) ? null
                 : result.targetShare());
-        Json.putOrNull(root, "targetRollGradientDegPerG", request.targets().rollGradient() == null ? null
-                : Json.degPerG(request.targets().rollGradient()));
+        ReportJson.putOrNull(root, "targetRollGradientDegPerG", request.targets().rollGradient() == null ? null
+                : toDegreesPerG(request.targets().rollGradient()));
         root.put("evaluated", result.evaluated());
         root.put("accepted", result.accepted());
         ObjectNode rejected = root.putObject("rejected");
@@ -52,10 +56,11 @@ public final class SizingJson {
         for (Candidate candidate : result.candidates()) {
             candidates.add(candidate(candidate, rank++));
         }
-        Json.putOrNull(root, "exactSolidDiameterMm", exactSolid == null || !exactSolid.found() ? null
-                : exactSolid.dimension() * 1e3);
+        ReportJson.putOrNull(root, "exactSolidDiameterMm", exactSolid == null || !exactSolid.found() ? null
+                : toMillimetres(exactSolid.dimension()));
         if (exactWall != null) {
-            Json.putOrNull(root, "exactTubeWallMm", exactWall.found() ? exactWall.dimension() * 1e3 : null);
+            ReportJson.putOrNull(root, "exactTubeWallMm",
+                    exactWall.found() ? toMillimetres(exactWall.dimension()) : null);
         }
         return root;
     }

@@ -1,4 +1,4 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
 import barwright.sizing.preload.CornerLoads;
 import barwright.sizing.preload.LinkPreload;
@@ -6,7 +6,10 @@ import barwright.sizing.preload.PreloadResult;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
-import static barwright.units.Constants.RADIANS_PER_DEGREE;
+import static barwright.units.Conversions.perMillimetre;
+import static barwright.units.Conversions.toDegrees;
+import static barwright.units.Conversions.toMillimetres;
+
 
 /** Link preload for scripts ({@code preload FILE --json}); lengths in mm, loads in N, as the keys say. */
 public final class PreloadJson {
@@ -22,16 +25,16 @@ public final class PreloadJson {
         root.put("version", VERSION);
         root.put("axle", result.axle().key());
         root.put("gainingDiagonal", result.diagonal().gains());
-        root.put("linkChangeMm", result.linkChange() * 1e3);
-        root.put("preloadAngleDegPerMm", result.preloadAnglePerLength() * 1e-3 / RADIANS_PER_DEGREE);
-        root.put("lockedMomentNmPerMm", result.lockedMomentPerLength() * 1e-3);
+        root.put("linkChangeMm", toMillimetres(result.linkChange()));
+        root.put("preloadAngleDegPerMm", toDegrees(perMillimetre(result.preloadAnglePerLength())));
+        root.put("lockedMomentNmPerMm", perMillimetre(result.lockedMomentPerLength()));
         root.put("lockedMomentNm", result.lockedMoment());
         root.set("cornerLoadChangeNPerMm", corners(result.changePerLength().times(1e-3)));
         root.set("staticCornerLoadsN", corners(result.staticLoads()));
         root.set("cornerLoadsN", corners(result.loads()));
         root.put("crossWeightBefore", result.staticLoads().crossWeight());
         root.put("crossWeightAfter", result.loads().crossWeight());
-        root.put("crossWeightChangePerMm", result.crossWeightChangePerLength() * 1e-3);
+        root.put("crossWeightChangePerMm", perMillimetre(result.crossWeightChangePerLength()));
         root.put("inWords", result.inWords());
         root.put("advice", LinkPreload.ADVICE);
         return root;

@@ -1,4 +1,4 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
 import barwright.model.AxlePosition;
 import barwright.sizing.BarChoice;

@@ -1,5 +1,6 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
+import barwright.report.ReportJson;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
@@ -7,6 +8,8 @@ import barwright.units.UnitSystem;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+
+import static barwright.units.Conversions.toPercent;
 
 /** A plain-text table with columns padded to their widest cell, for the command line. */
 final class TextTable {
@@ -40,7 +43,7 @@ final class TextTable {
     }
 
     static String percent(double share) {
-        return String.format(Locale.ROOT, "%.2f %%", share * 100);
+        return String.format(Locale.ROOT, "%.2f %%", toPercent(share));
     }
 
     static String figure(double si, Quantity quantity, UnitSystem units, int decimals) {
@@ -49,7 +52,7 @@ final class TextTable {
 
     /** @return the lift in g, or "-" where the wheel stays down to 3 g */
     static String lift(double accel, UnitSystem units) {
-        Double inG = Json.liftInG(accel);
+        Double inG = ReportJson.liftInG(accel);
         return inG == null ? "-" : figure(accel, Quantity.ACCELERATION, units, 2);
     }
 }

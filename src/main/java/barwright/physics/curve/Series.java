@@ -1,4 +1,4 @@
-package barwright.sizing.compare;
+package barwright.physics.curve;
 
 /**
  * One line of a chart, in SI.

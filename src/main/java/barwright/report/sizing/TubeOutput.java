@@ -1,4 +1,4 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
 import barwright.physics.bar.BarResult;
 import barwright.sizing.BarNodes;
@@ -11,6 +11,10 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.Locale;
+
+import static barwright.units.Conversions.perMillimetre;
+import static barwright.units.Conversions.toMegapascals;
+import static barwright.units.Conversions.toPercent;
 
 /** Tubes of equal rate to a solid bar, for people and for scripts. */
 public final class TubeOutput {
@@ -29,9 +33,9 @@ public final class TubeOutput {
         solidNode.set("material", BarNodes.material(comparison.solidBar().material()));
         solidNode.set("section", BarNodes.section(comparison.solidBar().section()));
         solidNode.put("selectedArm", comparison.solidBar().selectedArm());
-        solidNode.put("barLinkRateNPerMm", solid.linkRate() * 1e-3);
+        solidNode.put("barLinkRateNPerMm", perMillimetre(solid.linkRate()));
         solidNode.put("barMassKg", solid.mass());
-        solidNode.put("barMaxVonMisesStressMPa", solid.maxVonMisesStress() * 1e-6);
+        solidNode.put("barMaxVonMisesStressMPa", toMegapascals(solid.maxVonMisesStress()));
         solidNode.put("barSafetyFactor", solid.safetyFactor());
         ArrayNode tubes = root.putArray("tubes");
         for (TubeMatch match : comparison.matches()) {
@@ -39,11 +43,11 @@ public final class TubeOutput {
             node.put("sizeLabel", match.size().label());
             node.set("material", BarNodes.material(match.material()));
             node.set("section", BarNodes.section(match.size().section()));
-            node.put("barLinkRateNPerMm", match.linkRate() * 1e-3);
+            node.put("barLinkRateNPerMm", perMillimetre(match.linkRate()));
             node.put("rateDifference", match.rateDifference());
             node.put("barMassKg", match.mass());
             node.put("massSavedKg", match.massSaved());
-            node.put("barMaxVonMisesStressMPa", match.maxStress() * 1e-6);
+            node.put("barMaxVonMisesStressMPa", toMegapascals(match.maxStress()));
             node.put("barSafetyFactor", match.safetyFactor());
         }
         return root;
@@ -69,7 +73,7 @@ public final class TubeOutput {
         for (TubeMatch match : comparison.matches()) {
             table.add(match.size().label(), match.material().name(),
                     TextTable.figure(match.linkRate(), Quantity.LINEAR_RATE, units, 1),
-                    String.format(Locale.ROOT, "%+.1f %%", match.rateDifference() * 100),
+                    String.format(Locale.ROOT, "%+.1f %%", toPercent(match.rateDifference())),
                     TextTable.figure(match.mass(), Quantity.MASS, units, 2),
                     String.format(Locale.ROOT, "%s (%.0f %%)", TextTable.figure(match.massSaved(), Quantity.MASS,
                             units, 2), 100 * match.massSaved() / solid.mass()),

@@ -1,15 +1,22 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
+import barwright.report.ReportJson;
 import barwright.sizing.DiameterSweep;
 import barwright.sizing.SetupFigures;
-import barwright.sizing.compare.Chart;
-import barwright.sizing.compare.Series;
+import barwright.physics.curve.Chart;
+import barwright.physics.curve.Series;
+import barwright.units.UnitSystem;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
+
+import static barwright.units.Conversions.perDegree;
+import static barwright.units.Conversions.toDegreesPerG;
+import static barwright.units.Conversions.toG;
+import static barwright.units.Conversions.toMillimetres;
 
 /** CSV of sweeps: figures against solid bar diameter, and a chart's lines against their abscissa. */
 public final class SweepOutput {
@@ -30,7 +37,7 @@ public final class SweepOutput {
                 .setHeader(DIAMETER_COLUMNS.toArray(String[]::new)).get())) {
             for (DiameterSweep.Point point : points) {
                 List<Object> row = new ArrayList<>();
-                row.add(point.diameter() * 1e3);
+                row.add(toMillimetres(point.diameter()));
                 SetupFigures figures = point.figures();
                 if (figures == null) {
                     for (int i = 1; i < DIAMETER_COLUMNS.size(); i++) {
@@ -39,14 +46,14 @@ public final class SweepOutput {
                 } else {
                     var bar = axleIsFront ? figures.frontBar() : figures.rearBar();
                     row.add(figures.frontLoadTransferShare());
-                    row.add(Json.degPerG(figures.rollGradient()));
-                    row.add(Json.inG(figures.limit()));
+                    row.add(toDegreesPerG(figures.rollGradient()));
+                    row.add(toG(figures.limit()));
                     row.add(figures.balance().key());
-                    row.add(MapOutput.orEmpty(Json.liftInG(figures.frontInsideLift())));
-                    row.add(MapOutput.orEmpty(Json.liftInG(figures.rearInsideLift())));
+                    row.add(MapOutput.orEmpty(ReportJson.liftInG(figures.frontInsideLift())));
+                    row.add(MapOutput.orEmpty(ReportJson.liftInG(figures.rearInsideLift())));
                     row.add(bar.mass());
                     row.add(bar.safetyFactor());
-                    row.add(Json.nmPerDeg(bar.rollStiffness()));
+                    row.add(perDegree(bar.rollStiffness()));
                 }
                 printer.printRecord(row);
             }
@@ -65,8 +72,8 @@ public final class SweepOutput {
         try (CSVPrinter printer = new CSVPrinter(out, CSVFormat.RFC4180.builder()
                 .setHeader(CHART_COLUMNS.toArray(String[]::new)).get())) {
             for (Chart chart : charts) {
-                var xUnit = chart.x().unit(barwright.units.UnitSystem.SI);
-                var yUnit = chart.y().unit(barwright.units.UnitSystem.SI);
+                var xUnit = chart.x().unit(UnitSystem.SI);
+                var yUnit = chart.y().unit(UnitSystem.SI);
                 for (Series series : chart.series()) {
                     double[] x = series.x();
                     double[] y = series.y();

@@ -1,4 +1,4 @@
-package barwright.sizing.output;
+package barwright.report.sizing;
 
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.FigureRow;
@@ -7,6 +7,8 @@ import barwright.units.Quantity;
 import barwright.units.UnitSystem;
 
 import java.util.Locale;
+
+import static barwright.units.Conversions.toPercent;
 
 /** A comparison as a text table: each setup's figure, and after the first its difference in brackets. */
 public final class ComparisonText {
@@ -48,7 +50,7 @@ public final class ComparisonText {
     private static String format(double value, FigureRow row, UnitSystem units, boolean signed) {
         if (row.quantity() == Quantity.RATIO) {
             boolean share = row.key().endsWith("Share");
-            String number = share ? String.format(Locale.ROOT, signed ? "%+.2f" : "%.2f", value * 100)
+            String number = share ? String.format(Locale.ROOT, signed ? "%+.2f" : "%.2f", toPercent(value))
                     : String.format(Locale.ROOT, signed ? "%+.2f" : "%.2f", value);
             return share ? number + (signed ? " pt" : " %") : number;
         }
