@@ -2,7 +2,7 @@ package barwright.physics;
 
 import barwright.model.Tyre;
 import barwright.model.TyreCamber;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import barwright.solver.RootFinder;
 
 /**
  * One tyre's lateral force (model.md 8): load-sensitive friction, load-dependent cornering stiffness and the
@@ -19,6 +19,9 @@ public final class TyreModel {
 
     /** With the law, the friction never falls below this share of mu_0 (model.md 8.1). */
     public static final double LAW_FRICTION_FLOOR_SHARE = LoadCurve.FLOOR_SHARE;
+    /** x* to 1e-14, or a relative 1e-12, within 200 evaluations. */
+    private static final RootFinder PEAK_ARGUMENT = new RootFinder("the slip at the tyre curve's peak", 1e-14,
+            1e-12, RootFinder.DEFAULT_FUNCTION_ACCURACY, 200);
 
     private final Tyre tyre;
     private final LoadCurve frictionPoints;
@@ -53,8 +56,7 @@ public final class TyreModel {
                 return Double.POSITIVE_INFINITY;
             }
         }
-        return new BrentSolver(1e-12, 1e-14).solve(200,
-                x -> x - curvature * (x - Math.atan(x)) - tangent, 0, upper);
+        return PEAK_ARGUMENT.solve(x -> x - curvature * (x - Math.atan(x)) - tangent, 0, upper);
     }
 
     /** @return the tyre as given */
