@@ -1,5 +1,6 @@
 package barwright.cli;
 
+import barwright.io.FileWriteException;
 import barwright.io.VehicleFileException;
 import barwright.physics.ImpossibleVehicleException;
 import barwright.solver.RootNotFoundException;
@@ -69,6 +70,9 @@ public final class Cli {
             return REFUSED;
         } catch (RootNotFoundException unsolved) {
             err.println("barwright: this car cannot be analysed: " + unsolved.getMessage());
+            return REFUSED;
+        } catch (FileWriteException unwritable) {
+            err.println("barwright: " + unwritable.getMessage());
             return REFUSED;
         } catch (NoSuchFileException missing) {
             err.println("barwright: file not found: " + missing.getFile());

@@ -1,5 +1,6 @@
 package barwright.cli;
 
+import barwright.io.AtomicFileWriter;
 import barwright.io.Problem;
 import barwright.io.TyreWriter;
 import barwright.io.VehicleFileWriter;
@@ -77,7 +78,7 @@ final class TyreFitCommand implements Command {
         }
         String output = parsed.option("output", null);
         if (output != null) {
-            VehicleFileWriter.writeAtomically(Path.of(output), VehicleFileWriter.toJson(document));
+            AtomicFileWriter.writeText(Path.of(output), VehicleFileWriter.toJson(document));
         }
         String plot = parsed.option("plot", null);
         if (plot != null) {

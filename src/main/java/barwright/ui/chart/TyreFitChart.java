@@ -1,5 +1,6 @@
 package barwright.ui.chart;
 
+import barwright.io.FileWriteException;
 import barwright.tyrefit.CurveFit;
 import barwright.tyrefit.TyreFit;
 import barwright.tyrefit.TyreMeasurement;
@@ -14,7 +15,6 @@ import org.jfree.data.xy.XYSeriesCollection;
 
 import java.awt.BasicStroke;
 import java.awt.geom.Ellipse2D;
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -77,7 +77,7 @@ public final class TyreFitChart {
     }
 
     /** Writes the chart as PNG (or SVG for a name ending in .svg), atomically. */
-    public static void write(TyreFit fit, List<TyreMeasurement> data, Path target) throws IOException {
+    public static void write(TyreFit fit, List<TyreMeasurement> data, Path target) throws FileWriteException {
         ChartExport.write(of(fit, data), target);
     }
 }
