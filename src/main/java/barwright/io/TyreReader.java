@@ -16,11 +16,11 @@ import static barwright.units.Constants.RADIANS_PER_DEGREE;
  * points against load (not both), and the optional camber terms. Every problem is recorded with its key path.
  */
 final class TyreReader {
-    static final String FRICTION_POINTS = "peakFrictionByLoad";
-    static final String STIFFNESS_POINTS = "corneringStiffnessByLoad";
-    static final String CAMBER_FOR_PEAK_GRIP = "camberForPeakGripDeg";
-    static final String FRICTION_LOSS = "peakFrictionLossPerDegSquared";
-    static final String CAMBER_STIFFNESS = "camberStiffnessPerLoad";
+    static final String FRICTION_POINTS = VehicleKeys.PEAK_FRICTION_BY_LOAD;
+    static final String STIFFNESS_POINTS = VehicleKeys.CORNERING_STIFFNESS_BY_LOAD;
+    static final String CAMBER_FOR_PEAK_GRIP = VehicleKeys.CAMBER_FOR_PEAK_GRIP_DEG;
+    static final String FRICTION_LOSS = VehicleKeys.PEAK_FRICTION_LOSS_PER_DEG_SQUARED;
+    static final String CAMBER_STIFFNESS = VehicleKeys.CAMBER_STIFFNESS_PER_LOAD;
     /** The keys that file version 2 added to the tyre. */
     static final List<String> VERSION_2_KEYS = List.of(FRICTION_POINTS, STIFFNESS_POINTS, CAMBER_FOR_PEAK_GRIP,
             FRICTION_LOSS, CAMBER_STIFFNESS);
@@ -36,32 +36,35 @@ final class TyreReader {
 
     static Tyre read(JsonNode node, String path, NodeReader reader) {
         int before = reader.problems().size();
-        double nominal = reader.number(node, path, "nominalLoadN", Range.between(100, 100000, "N"));
+        double nominal = reader.number(node, path, VehicleKeys.NOMINAL_LOAD_N, Range.between(100, 100000, "N"));
         boolean frictionPoints = !NodeReader.isAbsent(node, FRICTION_POINTS);
         boolean stiffnessPoints = !NodeReader.isAbsent(node, STIFFNESS_POINTS);
         double friction = 1;
         double sensitivity = 0;
         if (frictionPoints) {
-            refuseWith(node, path, FRICTION_POINTS, reader, "frictionAtNominalLoad", "frictionLoadSensitivity");
+            refuseWith(node, path, FRICTION_POINTS, reader, VehicleKeys.FRICTION_AT_NOMINAL_LOAD,
+                    VehicleKeys.FRICTION_LOAD_SENSITIVITY);
         } else {
-            friction = reader.number(node, path, "frictionAtNominalLoad", Range.between(0.1, 5, ""));
-            sensitivity = reader.number(node, path, "frictionLoadSensitivity", Range.between(-1, 0.5, ""));
+            friction = reader.number(node, path, VehicleKeys.FRICTION_AT_NOMINAL_LOAD, Range.between(0.1, 5, ""));
+            sensitivity = reader.number(node, path, VehicleKeys.FRICTION_LOAD_SENSITIVITY, Range.between(-1, 0.5, ""));
         }
         double stiffness = 10;
         double peakRatio = 2;
         if (stiffnessPoints) {
-            refuseWith(node, path, STIFFNESS_POINTS, reader, "corneringStiffnessPerLoad",
-                    "corneringStiffnessPeakLoadRatio");
+            refuseWith(node, path, STIFFNESS_POINTS, reader, VehicleKeys.CORNERING_STIFFNESS_PER_LOAD,
+                    VehicleKeys.CORNERING_STIFFNESS_PEAK_LOAD_RATIO);
         } else {
-            stiffness = reader.number(node, path, "corneringStiffnessPerLoad", Range.between(1, 100, "per rad"));
-            peakRatio = reader.number(node, path, "corneringStiffnessPeakLoadRatio", Range.between(0.5, 10, ""));
+            stiffness = reader.number(node, path, VehicleKeys.CORNERING_STIFFNESS_PER_LOAD,
+                    Range.between(1, 100, "per rad"));
+            peakRatio = reader.number(node, path, VehicleKeys.CORNERING_STIFFNESS_PEAK_LOAD_RATIO,
+                    Range.between(0.5, 10, ""));
         }
-        double shape = reader.number(node, path, "shapeFactor", Range.between(1, 2, ""));
-        double curvature = reader.number(node, path, "curvatureFactor", Range.between(-10, 1, ""));
+        double shape = reader.number(node, path, VehicleKeys.SHAPE_FACTOR, Range.between(1, 2, ""));
+        double curvature = reader.number(node, path, VehicleKeys.CURVATURE_FACTOR, Range.between(-10, 1, ""));
         LoadTable frictionTable = frictionPoints
-                ? points(node, path, FRICTION_POINTS, "peakFriction", FRICTION, 1, reader) : null;
+                ? points(node, path, FRICTION_POINTS, VehicleKeys.PEAK_FRICTION, FRICTION, 1, reader) : null;
         LoadTable stiffnessTable = stiffnessPoints
-                ? points(node, path, STIFFNESS_POINTS, "corneringStiffnessNPerDeg", STIFFNESS_PER_DEG,
+                ? points(node, path, STIFFNESS_POINTS, VehicleKeys.CORNERING_STIFFNESS_N_PER_DEG, STIFFNESS_PER_DEG,
                 1 / RADIANS_PER_DEGREE, reader) : null;
         TyreCamber camber = camber(node, path, reader);
         if (reader.problems().size() > before) {
@@ -112,7 +115,7 @@ final class TyreReader {
                 continue;
             }
             int beforePoint = reader.problems().size();
-            double load = reader.number(point, pointPath, "loadN", LOAD);
+            double load = reader.number(point, pointPath, VehicleKeys.LOAD_N, LOAD);
             double value = reader.number(point, pointPath, valueKey, valueRange);
             if (reader.problems().size() > beforePoint) {
                 continue;

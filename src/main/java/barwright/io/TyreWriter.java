@@ -24,22 +24,23 @@ public final class TyreWriter {
     /** @return the tyre object; friction and stiffness as points where the tyre has them, else as the law */
     public static ObjectNode toJson(Tyre tyre) {
         ObjectNode node = JsonNodeFactory.instance.objectNode();
-        node.put("nominalLoadN", rounded(tyre.nominalLoad()));
+        node.put(VehicleKeys.NOMINAL_LOAD_N, rounded(tyre.nominalLoad()));
         if (tyre.hasFrictionPoints()) {
-            node.set(TyreReader.FRICTION_POINTS, points(tyre.frictionByLoad(), "peakFriction", 1));
+            node.set(TyreReader.FRICTION_POINTS, points(tyre.frictionByLoad(), VehicleKeys.PEAK_FRICTION, 1));
         } else {
-            node.put("frictionAtNominalLoad", rounded(tyre.frictionAtNominalLoad()));
-            node.put("frictionLoadSensitivity", rounded(tyre.frictionLoadSensitivity()));
+            node.put(VehicleKeys.FRICTION_AT_NOMINAL_LOAD, rounded(tyre.frictionAtNominalLoad()));
+            node.put(VehicleKeys.FRICTION_LOAD_SENSITIVITY, rounded(tyre.frictionLoadSensitivity()));
         }
         if (tyre.hasStiffnessPoints()) {
-            node.set(TyreReader.STIFFNESS_POINTS, points(tyre.corneringStiffnessByLoad(), "corneringStiffnessNPerDeg",
+            node.set(TyreReader.STIFFNESS_POINTS, points(tyre.corneringStiffnessByLoad(),
+                    VehicleKeys.CORNERING_STIFFNESS_N_PER_DEG,
                     RADIANS_PER_DEGREE));
         } else {
-            node.put("corneringStiffnessPerLoad", rounded(tyre.corneringStiffnessPerLoad()));
-            node.put("corneringStiffnessPeakLoadRatio", rounded(tyre.corneringStiffnessPeakLoadRatio()));
+            node.put(VehicleKeys.CORNERING_STIFFNESS_PER_LOAD, rounded(tyre.corneringStiffnessPerLoad()));
+            node.put(VehicleKeys.CORNERING_STIFFNESS_PEAK_LOAD_RATIO, rounded(tyre.corneringStiffnessPeakLoadRatio()));
         }
-        node.put("shapeFactor", rounded(tyre.shapeFactor()));
-        node.put("curvatureFactor", rounded(tyre.curvatureFactor()));
+        node.put(VehicleKeys.SHAPE_FACTOR, rounded(tyre.shapeFactor()));
+        node.put(VehicleKeys.CURVATURE_FACTOR, rounded(tyre.curvatureFactor()));
         if (!tyre.camber().isNone()) {
             node.put(TyreReader.CAMBER_FOR_PEAK_GRIP, rounded(tyre.camber().camberForPeakGrip() / RADIANS_PER_DEGREE));
             node.put(TyreReader.FRICTION_LOSS, rounded(tyre.camber().peakFrictionLossPerRadSquared()
@@ -63,7 +64,7 @@ public final class TyreWriter {
         ArrayNode array = JsonNodeFactory.instance.arrayNode();
         for (LoadPoint point : table.points()) {
             ObjectNode entry = array.addObject();
-            entry.put("loadN", rounded(point.load()));
+            entry.put(VehicleKeys.LOAD_N, rounded(point.load()));
             entry.put(valueKey, rounded(point.value() * scale));
         }
         return array;
