@@ -109,7 +109,7 @@ class JsonInputTest {
     @Test
     void aHugeVersionIsNotCalledAFileVersion() {
         String message = refusal(Fixtures.testVehicleText().replace("\"version\": 1,", "\"version\": 1e400,"));
-        assertThat(message).contains("version = Infinity: must be a whole number from 1 to 1")
+        assertThat(message).contains("version = Infinity: must be a whole number from 1 to 2")
                 .doesNotContain("file version");
     }
 
