@@ -4,7 +4,7 @@ import barwright.cli.Cli;
 
 /**
  * Starts Barwright: with no arguments the desktop program, with a command the command line. The command line
- * never touches AWT, so it runs on machines with no display.
+ * never opens a window and runs headless, so it works on machines with no display.
  */
 public final class Main {
     private Main() {
@@ -18,6 +18,8 @@ public final class Main {
             }
             return;
         }
+        // a command never opens a window: drawing a chart to a PNG (tyre-fit --plot) then needs no display
+        System.setProperty("java.awt.headless", "true");
         System.exit(Cli.run(args, System.out, System.err));
     }
 

@@ -30,7 +30,8 @@ public final class Cli {
             new CompareCommand(),
             new PreloadCommand(),
             new SheetCommand(),
-            new GeometryCommand());
+            new GeometryCommand(),
+            new TyreFitCommand());
 
     private Cli() {
     }

@@ -12,7 +12,8 @@ import java.util.Locale;
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
 
 /**
- * Reads a vehicle file (files.md, version 1): refuses it whole, with every problem and its key path, or
+ * Reads a vehicle file (files.md, versions 1 and 2; version 2 adds the tyre's points and camber keys and reads
+ * every version-1 file unchanged): refuses it whole, with every problem and its key path, or
  * returns the car in SI with the tree as read (unknown keys included, to be kept on save).
  */
 public final class VehicleFileReader {
@@ -61,6 +62,7 @@ public final class VehicleFileReader {
         }
         NodeReader reader = new NodeReader();
         checkHeader(tree, reader);
+        TyreReader.refuseNewKeysInVersion1(tree, reader);
         if (reader.hasProblems()) {
             throw new VehicleFileException(reader.problems()); // a wrong format or version: say only that
         }
@@ -165,13 +167,6 @@ public final class VehicleFileReader {
 
     /** Reads a tyre object; package-private for the axle reader. */
     static Tyre readTyre(JsonNode node, String path, NodeReader reader) {
-        double nominal = reader.number(node, path, "nominalLoadN", Range.between(100, 100000, "N"));
-        double friction = reader.number(node, path, "frictionAtNominalLoad", Range.between(0.1, 5, ""));
-        double sensitivity = reader.number(node, path, "frictionLoadSensitivity", Range.between(-1, 0.5, ""));
-        double stiffness = reader.number(node, path, "corneringStiffnessPerLoad", Range.between(1, 100, "per rad"));
-        double peakRatio = reader.number(node, path, "corneringStiffnessPeakLoadRatio", Range.between(0.5, 10, ""));
-        double shape = reader.number(node, path, "shapeFactor", Range.between(1, 2, ""));
-        double curvature = reader.number(node, path, "curvatureFactor", Range.between(-10, 1, ""));
-        return new Tyre(nominal, friction, sensitivity, stiffness, peakRatio, shape, curvature);
+        return TyreReader.read(node, path, reader);
     }
 }

@@ -3,7 +3,7 @@ package barwright.io;
 import java.util.List;
 
 /**
- * The vehicle file's key names for a bar (docs/file-format.md), defined here once: the readers, the tree
+ * The vehicle file's key names for a bar and a tyre (docs/file-format.md), defined here once: the readers, the tree
  * edits, the window's fields and the outputs that write a bar all use these.
  */
 public final class VehicleKeys {
@@ -26,6 +26,23 @@ public final class VehicleKeys {
     public static final String TUBE = "tube";
     public static final String OUTER_DIAMETER_MM = "outerDiameterMm";
     public static final String WALL_MM = "wallMm";
+
+    // the tyre (file-format.md, "The tyre")
+    public static final String NOMINAL_LOAD_N = "nominalLoadN";
+    public static final String FRICTION_AT_NOMINAL_LOAD = "frictionAtNominalLoad";
+    public static final String FRICTION_LOAD_SENSITIVITY = "frictionLoadSensitivity";
+    public static final String CORNERING_STIFFNESS_PER_LOAD = "corneringStiffnessPerLoad";
+    public static final String CORNERING_STIFFNESS_PEAK_LOAD_RATIO = "corneringStiffnessPeakLoadRatio";
+    public static final String SHAPE_FACTOR = "shapeFactor";
+    public static final String CURVATURE_FACTOR = "curvatureFactor";
+    public static final String PEAK_FRICTION_BY_LOAD = "peakFrictionByLoad";
+    public static final String CORNERING_STIFFNESS_BY_LOAD = "corneringStiffnessByLoad";
+    public static final String LOAD_N = "loadN";
+    public static final String PEAK_FRICTION = "peakFriction";
+    public static final String CORNERING_STIFFNESS_N_PER_DEG = "corneringStiffnessNPerDeg";
+    public static final String CAMBER_FOR_PEAK_GRIP_DEG = "camberForPeakGripDeg";
+    public static final String PEAK_FRICTION_LOSS_PER_DEG_SQUARED = "peakFrictionLossPerDegSquared";
+    public static final String CAMBER_STIFFNESS_PER_LOAD = "camberStiffnessPerLoad";
 
     private VehicleKeys() {
     }

@@ -17,18 +17,42 @@ public final class AxleGrip {
     private static final RootFinder SLIP_ANGLE = RootFinder.of("the common slip angle of an axle's tyres", 1e-10,
             200);
     private final TyreModel tyre;
+    private final double outsideCamber;
+    private final double insideCamber;
 
+    /** An axle whose wheels stand at zero camber to the road. */
     public AxleGrip(TyreModel tyre) {
+        this(tyre, 0, 0);
+    }
+
+    /**
+     * @param outsideCamber the outside wheel's camber to the road, SAE J670 vehicle sense (rad)
+     * @param insideCamber  the inside wheel's camber to the road, SAE J670 vehicle sense (rad); it enters the
+     *                      tyre model with its sign turned, the inside wheel being the outside one's mirror image
+     */
+    public AxleGrip(TyreModel tyre, double outsideCamber, double insideCamber) {
         this.tyre = tyre;
+        this.outsideCamber = outsideCamber;
+        this.insideCamber = insideCamber;
     }
 
     public TyreModel tyre() {
         return tyre;
     }
 
-    /** @return the axle's capacity: the sum of mu F_z over its two tyres (N) */
+    /** @return the axle's capacity: the sum of mu(F_z, gamma) F_z over its two tyres (N) */
     public double capacity(double outsideLoad, double insideLoad) {
-        return tyre.peakForce(outsideLoad) + tyre.peakForce(insideLoad);
+        return tyre.peakForce(outsideLoad, outsideCamber) + tyre.peakForce(insideLoad, -insideCamber);
+    }
+
+    /**
+     * @return the share of the axle's grip lost to load transfer at these loads: 1 - capacity / the capacity
+     *     with the same total load shared equally between the two tyres (model.md 8.1)
+     */
+    public double gripLostToTransfer(double outsideLoad, double insideLoad) {
+        double even = 0.5 * (outsideLoad + insideLoad);
+        double evenCapacity = capacity(even, even);
+        return evenCapacity > 0 ? 1 - capacity(outsideLoad, insideLoad) / evenCapacity : 0;
     }
 
     /** @return the axle's cornering stiffness at these loads: C(F_z,o) + C(F_z,i) (N/rad) */
@@ -46,10 +70,16 @@ public final class AxleGrip {
         if (requiredForce <= 0) {
             return 0;
         }
-        TyreModel.LoadedCurve outside = tyre.atLoad(outsideLoad);
-        TyreModel.LoadedCurve inside = tyre.atLoad(insideLoad);
+        TyreModel.LoadedCurve outside = tyre.atLoad(outsideLoad, outsideCamber);
+        TyreModel.LoadedCurve inside = tyre.atLoad(insideLoad, -insideCamber);
         UnivariateFunction surplus = slip -> outside.lateralForce(slip) + inside.lateralForce(slip) - requiredForce;
         double firstPeak = Math.min(outside.peakSlipAngle(), inside.peakSlipAngle());
+        if (surplus.value(0) > 0) {
+            // camber thrust alone gives more than the force needed: the root lies at a small negative slip, where
+            // each tyre's shifted argument alpha + S_H is at most zero and the sum is below the need
+            double lower = -Math.max(Math.abs(outside.slipShift()), Math.abs(inside.slipShift()));
+            return SLIP_ANGLE.solve(surplus::value, lower, 0);
+        }
         if (surplus.value(firstPeak) >= 0) {
             // both curves still rise up to the first tyre's peak: the root is unique there
             return SLIP_ANGLE.solve(surplus::value, 0, firstPeak);

@@ -25,6 +25,7 @@ public final class Warnings {
             liftWarning(result, axle).ifPresent(warnings::add);
         }
         rolloverWarning(result).ifPresent(warnings::add);
+        warnings.addAll(TyreWarnings.of(result));
         for (AxlePosition axle : AxlePosition.values()) {
             BarResult bar = result.axle(axle).bar();
             if (bar == null) {

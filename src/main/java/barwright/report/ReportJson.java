@@ -5,6 +5,7 @@ import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
 import barwright.physics.AxleResult;
 import barwright.physics.AxleStiffness;
+import barwright.physics.GripLostToTransfer;
 import barwright.physics.LoadTransferParts;
 import barwright.physics.TurnResult;
 import barwright.physics.Warning;
@@ -57,7 +58,7 @@ public final class ReportJson {
         report.put("frontRollStiffnessShare", result.frontRollStiffnessShare());
         report.put("understeerGradientDegPerG", toDegreesPerG(result.understeerGradient()));
         for (TurnDirection direction : TurnDirection.values()) {
-            report.set(direction.key(), turn(result.turn(direction)));
+            report.set(direction.key(), turn(result, direction));
         }
         ArrayNode warnings = report.putArray("warnings");
         for (Warning warning : result.warnings()) {
@@ -104,7 +105,8 @@ public final class ReportJson {
         return node;
     }
 
-    private static ObjectNode turn(TurnResult turn) {
+    private static ObjectNode turn(AnalysisResult result, TurnDirection direction) {
+        TurnResult turn = result.turn(direction);
         ObjectNode node = NODES.objectNode();
         putOrNull(node, "frontInsideLiftG", liftInG(turn.frontInsideLift()));
         putOrNull(node, "rearInsideLiftG", liftInG(turn.rearInsideLift()));
@@ -112,6 +114,10 @@ public final class ReportJson {
         node.put("rearLimitG", toG(turn.rearLimit()));
         node.put("limitG", toG(turn.limit()));
         node.put("limitBalance", turn.balance().key());
+        node.put("frontGripLostToTransferPercent",
+                100 * GripLostToTransfer.atLimit(result, AxlePosition.FRONT, direction));
+        node.put("rearGripLostToTransferPercent",
+                100 * GripLostToTransfer.atLimit(result, AxlePosition.REAR, direction));
         return node;
     }
 

@@ -6,6 +6,7 @@ import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
 import barwright.physics.AxleResult;
 import barwright.physics.AxleStiffness;
+import barwright.physics.GripLostToTransfer;
 import barwright.physics.TurnResult;
 import barwright.physics.Warning;
 import barwright.physics.bar.BarResult;
@@ -65,6 +66,9 @@ public final class TextSummary {
             row("front / rear axle limit", f(turn.frontLimit(), Quantity.ACCELERATION, 3) + " / "
                     + f(turn.rearLimit(), Quantity.ACCELERATION, 3));
             row("limit and balance", f(turn.limit(), Quantity.ACCELERATION, 3) + ", " + turn.balance().key());
+            row("grip lost to load transfer", String.format(Locale.ROOT, "front %.1f %% / rear %.1f %%",
+                    100 * GripLostToTransfer.atLimit(result, AxlePosition.FRONT, direction),
+                    100 * GripLostToTransfer.atLimit(result, AxlePosition.REAR, direction)));
         }
         line("");
         if (result.warnings().isEmpty()) {

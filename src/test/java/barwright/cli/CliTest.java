@@ -39,7 +39,7 @@ class CliTest {
     private static final Set<String> VEHICLE_KEYS = Set.of("massKg", "frontMassFraction", "sprungMassKg",
             "sprungCgHeightMm", "rollAxisHeightAtCgMm", "rollArmMm");
     private static final Set<String> TURN_KEYS = Set.of("frontInsideLiftG", "rearInsideLiftG", "frontLimitG",
-            "rearLimitG", "limitG", "limitBalance");
+            "rearLimitG", "limitG", "limitBalance", "frontGripLostToTransferPercent", "rearGripLostToTransferPercent");
     private static final Set<String> TRANSFER_KEYS = Set.of("unsprung", "geometric", "elastic", "total");
 
     @TempDir

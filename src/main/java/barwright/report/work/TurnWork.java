@@ -44,25 +44,38 @@ final class TurnWork {
                         + "%.3f g): the balance at the limit is %s. A heavily loaded outside tyre grips less per "
                         + "unit of load, so the axle that transfers more load loses grip sooner.", word,
                 toG(turn.frontLimit()), toG(turn.rearLimit()), turn.balance().key());
-        return new Derivation(title, "m_" + axle.key().charAt(0) + " a_y = μ(F_zo) F_zo + μ(F_zi) F_zi, solved for a_y",
-                List.of(new WorkValue("m", "car mass", masses.mass(), Quantity.MASS),
+        boolean points = tyreData.hasFrictionPoints();
+        // the tyre's grip as the analysis uses it: from its law or its points, at zero camber to the road
+        String rule = points ? "from the tyre's peak friction points (model.md 8.1)" : null;
+        List<WorkValue> inputs = points
+                ? List.of(new WorkValue("m", "car mass", masses.mass(), Quantity.MASS),
+                        new WorkValue("share", "share of the car's mass this axle must turn", share, Quantity.SHARE),
+                        new WorkValue("F_z,low", "lowest load of the tyre's friction points",
+                                tyreData.frictionByLoad().lowestLoad(), Quantity.FORCE),
+                        new WorkValue("F_z,high", "highest load of the tyre's friction points",
+                                tyreData.frictionByLoad().highestLoad(), Quantity.FORCE))
+                : List.of(new WorkValue("m", "car mass", masses.mass(), Quantity.MASS),
                         new WorkValue("share", "share of the car's mass this axle must turn", share, Quantity.SHARE),
                         new WorkValue("μ0", "tyre peak grip at the reference load", tyreData.frictionAtNominalLoad(),
                                 Quantity.RATIO),
                         new WorkValue("s", "tyre grip change with load", tyreData.frictionLoadSensitivity(),
                                 Quantity.RATIO),
-                        new WorkValue("F_z0", "tyre reference load", tyreData.nominalLoad(), Quantity.FORCE)),
+                        new WorkValue("F_z0", "tyre reference load", tyreData.nominalLoad(), Quantity.FORCE));
+        return new Derivation(title, "m_" + axle.key().charAt(0) + " a_y = μ(F_zo) F_zo + μ(F_zi) F_zi, solved for a_y",
+                inputs,
                 List.of(new Step("F_zo = static load + load transfer at the limit", new WorkValue("F_zo",
                                 word + " outside wheel load at the limit", outside, Quantity.FORCE)),
                         new Step("F_zi = static load − load transfer at the limit", new WorkValue("F_zi",
                                 word + " inside wheel load at the limit", inside, Quantity.FORCE)),
-                        new Step("μ(F_zo) = μ0 (1 + s (F_zo/F_z0 − 1))", new WorkValue("μ(F_zo)",
-                                "outside tyre's grip", tyre.friction(outside), Quantity.RATIO)),
-                        new Step("μ(F_zi) = μ0 (1 + s (F_zi/F_z0 − 1))", new WorkValue("μ(F_zi)",
-                                "inside tyre's grip", inside > 0 ? tyre.friction(inside) : 0, Quantity.RATIO)),
+                        new Step(points ? "μ(F_zo) " + rule : "μ(F_zo) = μ0 (1 + s (F_zo/F_z0 − 1))",
+                                new WorkValue("μ(F_zo)", "outside tyre's grip", tyre.friction(outside, 0),
+                                        Quantity.RATIO)),
+                        new Step(points ? "μ(F_zi) " + rule : "μ(F_zi) = μ0 (1 + s (F_zi/F_z0 − 1))",
+                                new WorkValue("μ(F_zi)", "inside tyre's grip", inside > 0 ? tyre.friction(inside, 0) : 0,
+                                        Quantity.RATIO)),
                         new Step("capacity = μ(F_zo) F_zo + μ(F_zi) F_zi", new WorkValue("capacity",
                                 word + " axle's sideways grip at the limit",
-                                tyre.peakForce(outside) + tyre.peakForce(inside), Quantity.FORCE))),
+                                tyre.peakForce(outside, 0) + tyre.peakForce(inside, 0), Quantity.FORCE))),
                 new WorkValue("a_y", "lateral acceleration at the limit", limit, Quantity.ACCELERATION),
                 LIMIT_SOURCE, note);
     }

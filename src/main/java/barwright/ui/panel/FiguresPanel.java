@@ -3,6 +3,7 @@ package barwright.ui.panel;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
+import barwright.physics.GripLostToTransfer;
 import barwright.physics.AxleResult;
 import barwright.physics.TurnResult;
 import barwright.physics.bar.BarModel;
@@ -86,6 +87,12 @@ public final class FiguresPanel extends JPanel {
                 (result, turn) -> format.text(result.turn(turn).limit(), Quantity.ACCELERATION));
         turns("Balance at the limit", "figure.balance", turn -> null,
                 (result, turn) -> result.turn(turn).balance().key());
+        for (AxlePosition axle : AxlePosition.values()) {
+            // why a bar moves the balance: the axle that transfers more load loses more of its grip (model.md 8.1)
+            turns(Character.toUpperCase(axle.key().charAt(0)) + axle.key().substring(1)
+                            + " grip lost to transfer", "figure.gripLost." + axle.key(), turn -> null,
+                    (result, turn) -> format.text(GripLostToTransfer.atLimit(result, axle, turn), Quantity.SHARE));
+        }
         for (AxlePosition axle : AxlePosition.values()) {
             turns("Inside " + axle.key() + " lifts at", "figure.lift." + axle.key(),
                     turn -> KeyFigure.of(Kind.INSIDE_LIFT, axle, turn),
