@@ -45,7 +45,9 @@ public final class ReportJson {
         vehicle.put("rollAxisHeightAtCgMm", toMillimetres(result.masses().rollAxisHeightAtCg()));
         vehicle.put("rollArmMm", toMillimetres(result.masses().rollArm()));
         for (AxlePosition axle : AxlePosition.values()) {
-            report.set(axle.key(), axle(result.axle(axle)));
+            ObjectNode axleNode = axle(result.axle(axle));
+            RateCalibrationOutput.putJson(axleNode, result.vehicle().axle(axle).bar());
+            report.set(axle.key(), axleNode);
         }
         report.put("rollGradientDegPerG", toDegreesPerG(result.rollGradient()));
         report.put("suspensionRollGradientDegPerG", toDegreesPerG(result.suspensionRollGradient()));
