@@ -26,6 +26,7 @@ public final class Cli {
             new MapCommand(),
             new CompareCommand(),
             new PreloadCommand(),
+            new MeasureCommand(),
             new SheetCommand());
 
     private Cli() {

@@ -14,14 +14,14 @@ public final class RateCalibrationOutput {
     private RateCalibrationOutput() {
     }
 
-    /** @return "model" for a bar with no measured factor, else "x 0.87 measured 2026-11-30"; "-" for no bar */
+    /** @return "model" for a bar with no measured factor, else "× 0.870 measured"; "-" for no bar */
     public static String text(AntiRollBar bar) {
         if (bar == null) {
             return "-";
         }
         RateCalibration calibration = bar.rateCalibration();
-        return calibration == null ? "model" : String.format(Locale.ROOT, "× %.3f measured %s",
-                calibration.effectiveRateFactor(), calibration.measuredOn());
+        return calibration == null ? "model" : String.format(Locale.ROOT, "× %.3f measured",
+                calibration.effectiveRateFactor());
     }
 
     /** @return true where either bar carries a measured factor */
