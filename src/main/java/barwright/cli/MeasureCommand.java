@@ -271,7 +271,7 @@ final class MeasureCommand implements Command {
             throw new UsageException("--apply needs --output OUT.json: the car is written to a copy");
         }
         VehicleFileReader.fromTree(tree);
-        VehicleFileWriter.writeAtomically(Path.of(output), VehicleFileWriter.toJson(tree));
+        VehicleFileWriter.save(tree, Path.of(output));
         if (!parsed.has("json")) {
             out.println("Written to " + output + ".");
         }

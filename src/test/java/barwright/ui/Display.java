@@ -3,13 +3,15 @@ package barwright.ui;
 import org.junit.jupiter.api.Assumptions;
 
 import java.awt.GraphicsEnvironment;
+import java.util.Locale;
 
 import static org.junit.jupiter.api.Assertions.fail;
 
 /**
- * Window tests, and tests that run Swing's event thread, need a display (the surefire JVM runs with
- * java.awt.headless=false so that the window tests can open windows). Where the system property gui.required is true (CI passes it) a missing
- * display fails the test; elsewhere the test is skipped and says why.
+ * Window tests need a display; tests that only use Swing's event thread or draw into images do not, and do not
+ * call this (the JVM decides headless from DISPLAY, so they run in a plain {@code mvn test} anywhere). Where the
+ * system property gui.required is true (CI passes it) a missing display fails a window test; elsewhere the test is
+ * skipped and says why.
  */
 public final class Display {
     private Display() {
@@ -32,7 +34,7 @@ public final class Display {
         if (GraphicsEnvironment.isHeadless()) {
             return "the JVM is headless";
         }
-        String os = System.getProperty("os.name", "").toLowerCase(java.util.Locale.ROOT);
+        String os = System.getProperty("os.name", "").toLowerCase(Locale.ROOT);
         String display = System.getenv("DISPLAY");
         if ((os.contains("linux") || os.contains("bsd")) && (display == null || display.isBlank())) {
             return "there is no X display (DISPLAY is not set)";

@@ -5,25 +5,32 @@ import barwright.ui.action.Dialogs;
 import barwright.ui.action.FileCommands;
 import barwright.ui.action.RecentFiles;
 import barwright.ui.action.Settings;
+import barwright.ui.action.WindowContext;
+import barwright.ui.action.WindowContribution;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.insight.InsightViews;
 import barwright.ui.panel.CautionNote;
 import barwright.ui.panel.FigureFormat;
 import barwright.ui.panel.FiguresPanel;
+import barwright.ui.panel.PagePanel;
 import barwright.ui.panel.ResultsTabs;
 import barwright.ui.panel.StaleBanner;
 import barwright.ui.panel.VehicleEditor;
 import barwright.ui.panel.WarningsPanel;
 import barwright.ui.panel.WorkDialog;
+import barwright.ui.sizing.SizingViews;
 import barwright.ui.task.AnalysisController;
 import barwright.ui.task.CorneringProbe;
 import barwright.ui.task.ResultsModel;
 import barwright.units.UnitSystem;
 
+import javax.swing.BorderFactory;
 import javax.swing.JFrame;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
+import javax.swing.UIManager;
 import javax.swing.WindowConstants;
 import java.awt.BorderLayout;
 import java.awt.Dimension;
@@ -51,6 +58,7 @@ public final class MainWindow extends JFrame {
     private final FiguresPanel figures;
     private final ResultsTabs tabs;
     private final VehicleEditor editor;
+    private final List<WindowContribution> contributions;
     private final List<Runnable> firstPaint = new ArrayList<>();
     private final Runnable onClosed;
     private boolean painted;
@@ -73,13 +81,19 @@ public final class MainWindow extends JFrame {
         editor = new VehicleEditor(document, view);
         figures = new FiguresPanel(results, format, this::showWork);
         tabs = new ResultsTabs(results, probe, format, analysis, files::exportChart);
-        tabs.addTab("Lift, balance, chassis", new barwright.ui.insight.InsightPanel(results, view));
+        WindowContext shared = new WindowContext(this, document, view, files.dialogs(), results);
+        contributions = List.of(new InsightViews(shared), new SizingViews(shared));
+        for (WindowContribution contribution : contributions) {
+            for (WindowContribution.Page page : contribution.pages()) {
+                tabs.addTab(page.title(), page.view());
+                tabs.setToolTipTextAt(tabs.getTabCount() - 1, page.tooltip());
+            }
+        }
         setContentPane(new PaintWatchingPanel());
         layoutWindow();
-        Menus menus = new Menus(this);
+        Menus menus = new Menus(this, contributions);
         setJMenuBar(menus.menuBar());
         getContentPane().add(menus.toolBar(), BorderLayout.NORTH);
-        barwright.ui.sizing.SizingViews.install(this);
         document.addListener(event -> updateTitle());
         updateTitle();
         setDefaultCloseOperation(WindowConstants.DO_NOTHING_ON_CLOSE);
@@ -100,12 +114,12 @@ public final class MainWindow extends JFrame {
         centre.setMinimumSize(new Dimension(360, 300));
         centre.add(tabs, BorderLayout.CENTER);
         JScrollPane warnings = new JScrollPane(new WarningsPanel(results));
-        warnings.setBorder(javax.swing.BorderFactory.createMatteBorder(1, 0, 0, 0,
-                javax.swing.UIManager.getColor("Component.borderColor")));
+        warnings.setBorder(BorderFactory.createMatteBorder(1, 0, 0, 0,
+                UIManager.getColor("Component.borderColor")));
         warnings.setPreferredSize(new Dimension(400, 78));
         centre.add(warnings, BorderLayout.SOUTH);
 
-        JPanel right = new barwright.ui.panel.PagePanel(new BorderLayout());
+        JPanel right = new PagePanel(new BorderLayout());
         right.add(figures, BorderLayout.NORTH);
         results.addListener(right::revalidate);
         right.add(new CautionNote(), BorderLayout.SOUTH);
@@ -117,8 +131,8 @@ public final class MainWindow extends JFrame {
                 return new Dimension(Math.max(needed, FIGURES_WIDTH * textScale() / 100), 500);
             }
         };
-        rightScroll.setBorder(javax.swing.BorderFactory.createMatteBorder(0, 1, 0, 0,
-                javax.swing.UIManager.getColor("Component.borderColor")));
+        rightScroll.setBorder(BorderFactory.createMatteBorder(0, 1, 0, 0,
+                UIManager.getColor("Component.borderColor")));
         rightScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         rightScroll.getVerticalScrollBar().setUnitIncrement(16);
         JPanel resultsSplit = new JPanel(new BorderLayout());
@@ -251,5 +265,15 @@ public final class MainWindow extends JFrame {
 
     public CorneringProbe probe() {
         return probe;
+    }
+
+    /** @return the contribution of this type that the window was built with (the views' own tests reach it so) */
+    public <T extends WindowContribution> T contribution(Class<T> type) {
+        for (WindowContribution contribution : contributions) {
+            if (type.isInstance(contribution)) {
+                return type.cast(contribution);
+            }
+        }
+        throw new IllegalArgumentException("the main window has no " + type.getSimpleName());
     }
 }

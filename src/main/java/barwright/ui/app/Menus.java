@@ -1,10 +1,13 @@
 package barwright.ui.app;
 
 import barwright.ui.action.CommandAction;
+import barwright.ui.action.RecentFiles;
+import barwright.ui.action.WindowContribution;
 import barwright.ui.document.Samples;
 import barwright.ui.panel.HelpDialog;
 import barwright.units.UnitSystem;
 
+import javax.swing.Action;
 import javax.swing.ButtonGroup;
 import javax.swing.JButton;
 import javax.swing.JMenu;
@@ -15,11 +18,15 @@ import javax.swing.JRadioButtonMenuItem;
 import javax.swing.JToggleButton;
 import javax.swing.JToolBar;
 import javax.swing.KeyStroke;
+import javax.swing.event.MenuEvent;
+import javax.swing.event.MenuListener;
 import java.awt.Toolkit;
 import java.awt.event.InputEvent;
 import java.awt.event.KeyEvent;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /** The window's commands: menus with keys and mnemonics, and the toolbar, sharing the same actions. */
 final class Menus {
@@ -35,9 +42,11 @@ final class Menus {
     private final CommandAction help;
     private final List<CommandAction> stateful;
     private final JMenu recent = new JMenu("Open recent");
+    private final List<WindowContribution> contributions;
 
-    Menus(MainWindow window) {
+    Menus(MainWindow window, List<WindowContribution> contributions) {
         this.window = window;
+        this.contributions = contributions;
         var files = window.files();
         var document = window.document();
         open = new CommandAction("Open…", "Open a vehicle file", key(KeyEvent.VK_O), KeyEvent.VK_O, files::open);
@@ -83,6 +92,13 @@ final class Menus {
         bar.add(fileMenu());
         bar.add(editMenu());
         bar.add(viewMenu());
+        List<Action> tools = contributed(WindowContribution.Place.TOOLS);
+        if (!tools.isEmpty()) {
+            JMenu toolsMenu = menu("Tools", KeyEvent.VK_T);
+            toolsMenu.setName("menu.tools");
+            tools.forEach(toolsMenu::add);
+            bar.add(toolsMenu);
+        }
         JMenu helpMenu = menu("Help", KeyEvent.VK_H);
         helpMenu.add(help);
         helpMenu.add(new CommandAction("About Barwright", "Version and licence", null, KeyEvent.VK_A,
@@ -106,18 +122,18 @@ final class Menus {
         file.add(open);
         recent.setMnemonic(KeyEvent.VK_R);
         file.add(recent);
-        file.addMenuListener(new javax.swing.event.MenuListener() {
+        file.addMenuListener(new MenuListener() {
             @Override
-            public void menuSelected(javax.swing.event.MenuEvent event) {
+            public void menuSelected(MenuEvent event) {
                 fillRecent();
             }
 
             @Override
-            public void menuDeselected(javax.swing.event.MenuEvent event) {
+            public void menuDeselected(MenuEvent event) {
             }
 
             @Override
-            public void menuCanceled(javax.swing.event.MenuEvent event) {
+            public void menuCanceled(MenuEvent event) {
             }
         });
         fillRecent();
@@ -127,14 +143,28 @@ final class Menus {
         file.addSeparator();
         file.add(exportPng);
         file.add(exportSvg);
+        contributed(WindowContribution.Place.FILE_EXPORTS).forEach(file::add);
         file.addSeparator();
         file.add(new CommandAction("Quit", "Close Barwright", key(KeyEvent.VK_Q), KeyEvent.VK_Q, window::close));
         return file;
     }
 
+    /** @return the contributed commands for one place, in the contributions' order */
+    private List<Action> contributed(WindowContribution.Place place) {
+        List<Action> actions = new ArrayList<>();
+        for (WindowContribution contribution : contributions) {
+            for (WindowContribution.Command command : contribution.commands()) {
+                if (command.place() == place) {
+                    actions.add(command.action());
+                }
+            }
+        }
+        return actions;
+    }
+
     private void fillRecent() {
         recent.removeAll();
-        List<Path> files = new barwright.ui.action.RecentFiles(window.settings()).list();
+        List<Path> files = new RecentFiles(window.settings()).list();
         if (files.isEmpty()) {
             JMenuItem none = new JMenuItem("No recent files");
             none.setEnabled(false);
@@ -164,7 +194,7 @@ final class Menus {
         ButtonGroup unitGroup = new ButtonGroup();
         for (UnitSystem system : UnitSystem.values()) {
             JRadioButtonMenuItem item = new JRadioButtonMenuItem(system.label(), window.view().units() == system);
-            item.setName("menu.units." + system.name().toLowerCase(java.util.Locale.ROOT));
+            item.setName("menu.units." + system.name().toLowerCase(Locale.ROOT));
             item.setAccelerator(KeyStroke.getKeyStroke(system == UnitSystem.SI ? KeyEvent.VK_1 : KeyEvent.VK_2,
                     shortcut | InputEvent.SHIFT_DOWN_MASK));
             item.addActionListener(event -> window.setUnits(system));
@@ -180,7 +210,7 @@ final class Menus {
             JRadioButtonMenuItem item = new JRadioButtonMenuItem(choice == Themes.Theme.LIGHT ? "Light" : "Dark",
                     window.theme() == choice);
             item.addActionListener(event -> {
-                window.settings().put("theme", choice.name().toLowerCase(java.util.Locale.ROOT));
+                window.settings().put("theme", choice.name().toLowerCase(Locale.ROOT));
                 window.applyLook();
             });
             themeGroup.add(item);
@@ -215,7 +245,7 @@ final class Menus {
         for (UnitSystem system : UnitSystem.values()) {
             JToggleButton toggle = new JToggleButton(system == UnitSystem.SI ? "SI units" : "US units",
                     window.view().units() == system);
-            toggle.setName("units." + system.name().toLowerCase(java.util.Locale.ROOT));
+            toggle.setName("units." + system.name().toLowerCase(Locale.ROOT));
             toggle.setToolTipText("Show every field, figure and chart in " + system.label() + " units");
             toggle.addActionListener(event -> window.setUnits(system));
             window.view().addListener(() -> toggle.setSelected(window.view().units() == system));
@@ -229,7 +259,7 @@ final class Menus {
 
     private static JButton button(CommandAction action) {
         JButton button = new JButton(action);
-        button.setName("toolbar." + action.getValue(javax.swing.Action.NAME));
+        button.setName("toolbar." + action.getValue(Action.NAME));
         button.setFocusable(true);
         return button;
     }

@@ -8,6 +8,7 @@ import barwright.physics.VehicleAnalysis;
 import barwright.report.insight.EnvelopeText;
 import barwright.ui.chart.ChartStyle;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.task.BackgroundWork;
 import org.jfree.chart.ChartPanel;
 
 import javax.swing.BorderFactory;
@@ -23,8 +24,6 @@ import javax.swing.UIManager;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.file.Path;
 
 /**
@@ -39,7 +38,7 @@ public final class EnvelopeView extends JPanel {
     private final JComboBox<String> compareWith = new JComboBox<>(new String[]{PREVIOUS, "a vehicle file"});
     private final JButton chooseFile = new JButton("Choose file…");
     private final JLabel compareNote = new JLabel(" ");
-    private final LatestOnly<Path, LiftEnvelopeResult> fileWorker;
+    private final BackgroundWork<Path, LiftEnvelopeResult> fileWorker;
     private LiftEnvelopeResult current;
     private LiftEnvelopeResult previous;
     private LiftEnvelopeResult fromFile;
@@ -56,7 +55,7 @@ public final class EnvelopeView extends JPanel {
         split.setBorder(null);
         add(split, BorderLayout.CENTER);
         add(controls(), BorderLayout.SOUTH);
-        fileWorker = new LatestOnly<>(EnvelopeView::envelopeOf, this::fileArrived, this::fileFailed);
+        fileWorker = BackgroundWork.newestOnly(EnvelopeView::envelopeOf, this::fileArrived, this::fileFailed);
     }
 
     private JPanel controls() {
@@ -100,8 +99,6 @@ public final class EnvelopeView extends JPanel {
             return LiftEnvelope.of(VehicleAnalysis.analyse(VehicleFileReader.read(file).vehicle()));
         } catch (VehicleFileException refused) {
             throw new IllegalArgumentException("the file was refused: " + refused.problems().get(0), refused);
-        } catch (IOException unreadable) {
-            throw new UncheckedIOException("the file could not be read: " + unreadable.getMessage(), unreadable);
         }
     }
 

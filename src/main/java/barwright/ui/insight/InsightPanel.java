@@ -7,6 +7,7 @@ import barwright.insight.Sensitivity;
 import barwright.ui.field.ViewSettings;
 import barwright.ui.panel.Palette;
 import barwright.ui.task.AnalysisOutcome;
+import barwright.ui.task.BackgroundWork;
 import barwright.ui.task.ResultsModel;
 
 import javax.swing.BorderFactory;
@@ -27,7 +28,7 @@ public final class InsightPanel extends JPanel {
     private final ChassisView chassis;
     private final JLabel status = new JLabel(" ");
     private final JTabbedPane tabs = new JTabbedPane();
-    private final LatestOnly<AnalysisOutcome, InsightResults> worker;
+    private final BackgroundWork<AnalysisOutcome, InsightResults> worker;
     private AnalysisOutcome submitted;
     private InsightResults current;
 
@@ -50,7 +51,7 @@ public final class InsightPanel extends JPanel {
         status.setForeground(Palette.warning());
         add(status, BorderLayout.NORTH);
         add(tabs, BorderLayout.CENTER);
-        worker = new LatestOnly<>(InsightPanel::compute, this::arrived, this::failed);
+        worker = BackgroundWork.newestOnly(InsightPanel::compute, this::arrived, this::failed);
         results.addListener(this::resultsChanged);
         view.addListener(this::redraw);
         resultsChanged();

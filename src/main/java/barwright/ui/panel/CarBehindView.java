@@ -21,6 +21,8 @@ import java.awt.geom.AffineTransform;
 import java.awt.geom.Path2D;
 import java.awt.geom.RoundRectangle2D;
 
+import java.util.ArrayList;
+import java.util.List;
 /**
  * The car seen from behind in a steady turn at the slider's lateral acceleration: the body rolled about the
  * roll axis (drawn larger than life, and saying so), each wheel's load as a column beside it, and an inside
@@ -32,6 +34,8 @@ public final class CarBehindView extends JComponent {
     private final ResultsModel results;
     private final CorneringProbe probe;
     private final FigureFormat format;
+    /** The figures written at the last paint, for the window tests. */
+    private final List<String> drawnFigures = new ArrayList<>();
 
     public CarBehindView(ResultsModel results, CorneringProbe probe, FigureFormat format) {
         this.results = results;
@@ -41,6 +45,12 @@ public final class CarBehindView extends JComponent {
         setPreferredSize(new Dimension(520, 340));
         results.addListener(this::repaint);
         probe.addListener(this::repaint);
+        format.view().addListener(this::repaint); // the SI/US switch redraws at once, not at the next slider move
+    }
+
+    /** @return the figures (heading, body roll, wheel loads) written at the last paint */
+    public List<String> drawnFigures() {
+        return List.copyOf(drawnFigures);
     }
 
     /** @return the lateral acceleration shown (m/s^2) */
@@ -57,6 +67,7 @@ public final class CarBehindView extends JComponent {
     @Override
     protected void paintComponent(Graphics graphics) {
         AnalysisResult result = result();
+        drawnFigures.clear();
         Graphics2D g = (Graphics2D) graphics.create();
         try {
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
@@ -151,12 +162,16 @@ public final class CarBehindView extends JComponent {
 
         g.setColor(text);
         g.setFont(font.deriveFont(Font.BOLD));
-        g.drawString(String.format(format.view().locale(), "%s turn at %s (%.0f %% of the %s grip limit)",
+        String heading = String.format(format.view().locale(), "%s turn at %s (%.0f %% of the %s grip limit)",
                 left ? "Left" : "Right", format.text(accel, Quantity.ACCELERATION), probe.fractionOfLimit() * 100,
-                format.text(turnResult.limit(), Quantity.ACCELERATION)), 12, line + 2);
+                format.text(turnResult.limit(), Quantity.ACCELERATION));
+        g.drawString(heading, 12, line + 2);
         g.setFont(font);
-        g.drawString("Body roll " + format.text(roll, Quantity.ANGLE) + " (drawn " + (int) ROLL_DRAWN_LARGER
-                + "\u00D7 larger), seen from behind.", 12, line * 2 + 4);
+        String rollText = "Body roll " + format.text(roll, Quantity.ANGLE) + " (drawn " + (int) ROLL_DRAWN_LARGER
+                + "\u00D7 larger), seen from behind.";
+        g.drawString(rollText, 12, line * 2 + 4);
+        drawnFigures.add(heading);
+        drawnFigures.add(rollText);
         legend(g, getHeight() - 8, font, text);
     }
 
@@ -177,6 +192,7 @@ public final class CarBehindView extends JComponent {
             g.setColor(colours[i]);
             g.fillRect((int) x, ground + 2, barWidth, barHeight);
             String label = values[i] <= 0 ? "lifted" : format.text(values[i], Quantity.FORCE);
+            drawnFigures.add(label);
             int labelWidth = g.getFontMetrics().stringWidth(label);
             g.drawString(label, (int) (x + barWidth / 2.0 - labelWidth / 2.0),
                     ground + 2 + barHeight + g.getFontMetrics().getAscent() + 2);

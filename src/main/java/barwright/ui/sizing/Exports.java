@@ -1,6 +1,6 @@
 package barwright.ui.sizing;
 
-import barwright.io.VehicleFileWriter;
+import barwright.io.AtomicFileWriter;
 import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.MassProperties;
@@ -9,6 +9,7 @@ import barwright.report.sheet.SetupSheet;
 import barwright.report.sheet.SheetContent;
 import barwright.report.sizing.MapOutput;
 import barwright.sizing.map.AdjustmentMap;
+import barwright.ui.task.BackgroundWork;
 
 import java.io.IOException;
 import java.io.StringWriter;
@@ -69,7 +70,7 @@ final class Exports {
         run(done, "The map was not written", target, () -> {
             StringWriter text = new StringWriter();
             MapOutput.csv(AdjustmentMap.of(vehicle), text);
-            VehicleFileWriter.writeAtomically(target, text.toString());
+            AtomicFileWriter.writeText(target, text.toString());
         });
     }
 
@@ -105,21 +106,21 @@ final class Exports {
     }
 
     private void run(Consumer<String> done, String failure, Path target, Writing writing) {
-        Background.start(progress -> {
+        BackgroundWork.start(progress -> {
             try {
                 writing.write();
             } catch (IOException failed) {
                 throw new UncheckedIOException(failed);
             }
             return target;
-        }, new Background.Listener<Path>() {
+        }, new BackgroundWork.Listener<Void, Path>() {
             @Override
-            public void finished(Path written) {
+            public void finished(Void input, Path written) {
                 done.accept("Wrote " + written);
             }
 
             @Override
-            public void failed(String message) {
+            public void failed(Void input, String message) {
                 context.dialogs().showError(failure, "It could not be written (" + message + "). Any file that was "
                         + "there is unchanged.");
             }

@@ -16,10 +16,14 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.SwingConstants;
 import java.awt.BorderLayout;
+import java.awt.Component;
+import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;
+import java.awt.event.FocusAdapter;
+import java.awt.event.FocusEvent;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
 import java.util.ArrayList;
@@ -59,9 +63,9 @@ final class MapView extends JPanel {
         reference.setToolTipText("Cells above this front share are tinted in the front axle's colour (towards "
                 + "understeer), below it in the rear axle's (towards oversteer)");
         reference.addActionListener(event -> referenceChanged());
-        reference.addFocusListener(new java.awt.event.FocusAdapter() {
+        reference.addFocusListener(new FocusAdapter() {
             @Override
-            public void focusLost(java.awt.event.FocusEvent event) {
+            public void focusLost(FocusEvent event) {
                 referenceChanged();
             }
         });
@@ -108,7 +112,10 @@ final class MapView extends JPanel {
         add(scroll, BorderLayout.CENTER);
         add(under, BorderLayout.SOUTH);
         WhileShown updates = new WhileShown(this, this::carChanged);
-        context.document().addListener(event -> updates.request());
+        context.document().addListener(event -> {
+            refreshUseHoles(); // at once: a map for an older car never moves the links of this one
+            updates.request();
+        });
         context.view().addListener(this::redraw);
         updates.request();
     }
@@ -239,9 +246,9 @@ final class MapView extends JPanel {
             widest = Math.max(widest, cell.getPreferredSize().width);
         }
         for (MapCellView cell : cells) { // one width for every column, so the grid reads as a table
-            cell.setPreferredSize(new java.awt.Dimension(widest, cell.getPreferredSize().height));
+            cell.setPreferredSize(new Dimension(widest, cell.getPreferredSize().height));
         }
-        for (java.awt.Component header : grid.getComponents()) {
+        for (Component header : grid.getComponents()) {
             if (header instanceof JLabel label && label.getClientProperty(BarOption.class) instanceof Object[] key) {
                 label.setText(optionWords((AxlePosition) key[0], (BarOption) key[1]));
             }
@@ -251,7 +258,17 @@ final class MapView extends JPanel {
                 + "oversteer; fuller the further it lies (full at 5 points). Red dashes and red text: an inside wheel "
                 + "lifts before the limit. Heavy frame and \"now\": the car's setting. Holes count from 1, the first "
                 + "arm length in the file. Click a cell to choose its holes.");
-        useHoles.setEnabled(chosen != null && !chosen.cell().current());
+        refreshUseHoles();
+    }
+
+    private void refreshUseHoles() {
+        useHoles.setEnabled(chosen != null && !chosen.cell().current() && forCarAsItStands());
+    }
+
+    /** @return true where the map shown was worked out for the open car as it stands */
+    private boolean forCarAsItStands() {
+        return shown != null && context.document().isValid()
+                && context.document().lastValid().vehicle().equals(shown.vehicle());
     }
 
     private String optionWords(AxlePosition axle, BarOption option) {
@@ -281,12 +298,17 @@ final class MapView extends JPanel {
         }
         chosen = cell;
         cell.setSelected(true);
-        useHoles.setEnabled(!cell.cell().current());
+        refreshUseHoles();
         cell.requestFocusInWindow();
     }
 
     private void useChosen() {
         if (chosen == null || chosen.cell().current()) {
+            return;
+        }
+        if (!forCarAsItStands()) {
+            useHoles.setEnabled(false);
+            work.say("This map is for the car before the last change: wait for it to be worked out again.", true);
             return;
         }
         Map<AxlePosition, Integer> holes = new EnumMap<>(AxlePosition.class);

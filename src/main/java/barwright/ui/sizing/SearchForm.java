@@ -2,6 +2,8 @@ package barwright.ui.sizing;
 
 import barwright.model.AxlePosition;
 import barwright.model.Vehicle;
+import barwright.physics.ImpossibleVehicleException;
+import barwright.physics.MassProperties;
 import barwright.report.sheet.SheetContent;
 import barwright.sizing.SizingRequest;
 import barwright.ui.field.ViewSettings;
@@ -18,6 +20,7 @@ import javax.swing.JSpinner;
 import javax.swing.SpinnerNumberModel;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /** The settings of a sizing search: which bar, what to aim at, what must hold, what to try. Event thread. */
 final class SearchForm extends Rows {
@@ -109,10 +112,15 @@ final class SearchForm extends Rows {
             }
         }
         materials.describeOwn(own.isEmpty() ? "The car has no bar" : String.join("; ", own));
-        offset.setToolTipText(String.format(java.util.Locale.ROOT, "The static front weight is %.1f %%; a rule of "
-                + "thumb puts the front share about 5 points above it for a slight understeer (from memory of "
-                + "Milliken & Milliken, Race Car Vehicle Dynamics)", 100 * barwright.physics.MassProperties
-                .of(vehicle).frontMassFraction()));
+        String rule = "a rule of thumb puts the front share about 5 points above the static front weight for a "
+                + "slight understeer (from memory of Milliken & Milliken, Race Car Vehicle Dynamics)";
+        try {
+            offset.setToolTipText(String.format(Locale.ROOT, "The static front weight is %.1f %%; ", 100
+                    * MassProperties.of(vehicle).frontMassFraction()) + rule);
+        } catch (ImpossibleVehicleException impossible) {
+            // a mass half typed can make the car impossible for a moment; the main window says why
+            offset.setToolTipText("The static front weight cannot be worked out for this car; " + rule);
+        }
     }
 
     /**

@@ -17,12 +17,12 @@ import barwright.sizing.catalogue.Catalogues;
 import barwright.sizing.catalogue.StockSize;
 import barwright.solver.Progress;
 
-import java.io.IOException;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.EnumSet;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 
@@ -51,8 +51,38 @@ final class SearchPlan {
             choices.put(axle, new SizeChoices(materials(settings.ownMaterial(), settings.materials(), bar),
                     sizes, List.of()));
         }
+        refuseTooManyPairs(vehicle, choices);
         return new SizingRequest(settings.axles(), targets(settings), constraints(settings), choices,
                 settings.count(), SizingRequest.DEFAULT_TIE_BAND);
+    }
+
+    /**
+     * Refuses, before any work starts, a search of both bars whose pairs exceed what one search tries, saying in
+     * words what to narrow.
+     *
+     * @throws IllegalArgumentException where front bars times rear bars exceed {@link BarSearch#MAX_PAIRS}
+     */
+    private static void refuseTooManyPairs(Vehicle vehicle, Map<AxlePosition, SizeChoices> choices) {
+        if (choices.size() < 2) {
+            return;
+        }
+        long front = barsTried(vehicle, AxlePosition.FRONT, choices.get(AxlePosition.FRONT));
+        long rear = barsTried(vehicle, AxlePosition.REAR, choices.get(AxlePosition.REAR));
+        if (front * rear <= BarSearch.MAX_PAIRS) {
+            return;
+        }
+        SizeChoices frontChoices = choices.get(AxlePosition.FRONT);
+        throw new IllegalArgumentException(String.format(Locale.ROOT, "Too many pairs to try: %,d front bars "
+                        + "against %,d rear bars make %,d pairs, and one search tries at most %,d. Narrow it: tick "
+                        + "fewer materials (%d ticked) or fewer catalogues (%d stock sizes), or size one bar at a "
+                        + "time (choose \"front bar\", then \"rear bar\", under Which bar).", front, rear,
+                front * rear, BarSearch.MAX_PAIRS, frontChoices.materials().size(), frontChoices.sizes().size()));
+    }
+
+    /** @return materials x sizes x holes: the bars one axle's search tries */
+    private static long barsTried(Vehicle vehicle, AxlePosition axle, SizeChoices choices) {
+        return (long) choices.materials().size() * choices.sizes().size()
+                * choices.holesOf(vehicle.axle(axle).bar().holeCount()).size();
     }
 
     /** The whole search, with progress and cancel; for one bar also the exact sizes. */
@@ -123,8 +153,6 @@ final class SearchPlan {
                 sizes.addAll(Catalogues.find(name).sizes());
             } catch (CatalogueFileException refused) {
                 throw new IllegalArgumentException("The catalogue " + name + " is refused:\n" + refused.getMessage());
-            } catch (IOException unreadable) {
-                throw new IllegalArgumentException("The catalogue " + name + " could not be read: " + unreadable);
             }
         }
         return sizes;

@@ -20,6 +20,7 @@ import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import java.awt.BorderLayout;
+import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.util.ArrayList;
 import java.util.List;
@@ -41,6 +42,7 @@ final class SearchView extends JPanel {
     private final JButton apply = new JButton("Put the chosen bar in the car");
     private final WorkStrip work = new WorkStrip("search");
     private SearchOutcome shown;
+    private final WhileShown carShown;
 
     SearchView(SizingContext context) {
         super(new BorderLayout());
@@ -75,7 +77,7 @@ final class SearchView extends JPanel {
         JScrollPane formScroll = new JScrollPane(form);
         formScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         formScroll.getVerticalScrollBar().setUnitIncrement(16);
-        formScroll.setPreferredSize(new java.awt.Dimension(390, 500));
+        formScroll.setPreferredSize(new Dimension(390, 500));
         JPanel left = new JPanel(new BorderLayout());
         left.add(formScroll, BorderLayout.CENTER);
         JPanel run = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 4));
@@ -86,11 +88,10 @@ final class SearchView extends JPanel {
         split.setResizeWeight(0);
         add(split, BorderLayout.CENTER);
         add(work, BorderLayout.SOUTH);
+        carShown = new WhileShown(this, this::showCar);
         context.document().addListener(this::documentChanged);
         context.view().addListener(this::unitsChanged);
-        if (context.document().isValid()) {
-            form.showCar(context.document().lastValid().vehicle());
-        }
+        carShown.request();
         refreshApply();
     }
 
@@ -103,12 +104,24 @@ final class SearchView extends JPanel {
             settings = form.settings();
             SearchPlan.request(vehicle, settings); // refuses bad settings now, before any work starts
         } catch (IllegalArgumentException | IllegalStateException refused) {
-            work.say(refused.getMessage(), true);
+            boolean hadResults = shown != null;
+            clearResults(" ");
+            work.say(refused.getMessage() + (hadResults ? " The last search's results were cleared." : ""), true);
             return;
         }
         String unit = settings.axles().size() > 1 ? "bars and pairs" : "bars";
         work.run("Searching", unit, "The search failed", progress -> SearchPlan.run(vehicle, settings, progress),
-                this::showOutcome);
+                this::showOutcome, () -> clearResults(" "));
+    }
+
+    /** Takes the results off the screen (they no longer answer what was asked), with Apply disabled. */
+    private void clearResults(String why) {
+        shown = null;
+        rows.show(List.of(), null);
+        summary.setText(why);
+        exact.setText(" ");
+        applied.setText(" ");
+        refreshApply();
     }
 
     private void showOutcome(SearchOutcome outcome) {
@@ -204,8 +217,8 @@ final class SearchView extends JPanel {
         for (AxlePosition axle : shown.request().axles()) {
             AntiRollBar now = current.axle(axle).bar();
             AntiRollBar then = searched.axle(axle).bar();
-            if (now == null) {
-                return false;
+            if (now == null || then.selectedArm() >= now.holeCount()) {
+                return false; // a bar with other holes (another car opened, arms edited) is another car
             }
             aligned = aligned.withAxle(axle, aligned.axle(axle).withBar(now.withMaterial(then.material())
                     .withSection(then.section()).withSelectedArm(then.selectedArm())));
@@ -230,11 +243,21 @@ final class SearchView extends JPanel {
     }
 
     private void documentChanged(DocumentEvent event) {
-        if (context.document().isValid()) {
-            form.showCar(context.document().lastValid().vehicle());
+        carShown.request();
+        if (event.kind() == DocumentEvent.Kind.REPLACED && shown != null) {
+            clearResults("Another car was opened: " + context.document().displayName() + ". The results for the "
+                    + "car before it were cleared; press Find bars to size this one.");
+            return;
         }
         describe();
         refreshApply();
+    }
+
+    /** Tells the form about the car as it stands; only while the view is on screen (it costs an analysis). */
+    private void showCar() {
+        if (context.document().isValid()) {
+            form.showCar(context.document().lastValid().vehicle());
+        }
     }
 
     private void unitsChanged() {

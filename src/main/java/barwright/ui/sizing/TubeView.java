@@ -2,6 +2,7 @@ package barwright.ui.sizing;
 
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
+import barwright.model.Material;
 import barwright.model.SolidSection;
 import barwright.model.Vehicle;
 import barwright.physics.bar.BarResult;
@@ -22,6 +23,7 @@ import javax.swing.JPanel;
 import javax.swing.JRadioButton;
 import javax.swing.JScrollPane;
 import java.awt.BorderLayout;
+import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.util.List;
 
@@ -98,7 +100,7 @@ final class TubeView extends JPanel {
         JPanel run = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 4));
         run.add(find);
         left.add(run, BorderLayout.SOUTH);
-        left.setPreferredSize(new java.awt.Dimension(390, 400));
+        left.setPreferredSize(new Dimension(390, 400));
 
         JPanel results = new JPanel(new BorderLayout(0, 4));
         results.setBorder(BorderFactory.createEmptyBorder(6, 8, 4, 8));
@@ -127,6 +129,13 @@ final class TubeView extends JPanel {
 
     private void documentChanged(DocumentEvent event) {
         describeOwn();
+        if (event.kind() == DocumentEvent.Kind.REPLACED && shown != null) {
+            shown = null;
+            model.fireTableDataChanged();
+            applied.setText(" ");
+            solid.setText("Another car was opened: " + context.document().displayName() + ". The tubes found for the "
+                    + "car before it were cleared; press Find tubes to look again.");
+        }
         describe();
         refreshApply();
     }
@@ -156,7 +165,7 @@ final class TubeView extends JPanel {
         Vehicle vehicle;
         AntiRollBar solidBar;
         List<String> names;
-        List<barwright.model.Material> tried;
+        List<Material> tried;
         AxlePosition position = chosenAxle();
         try {
             vehicle = context.currentCar().vehicle();

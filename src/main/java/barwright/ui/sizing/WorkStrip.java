@@ -3,11 +3,13 @@ package barwright.ui.sizing;
 import barwright.solver.Progress;
 import barwright.ui.panel.Palette;
 import barwright.ui.panel.WrappingText;
+import barwright.ui.task.BackgroundWork;
 
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
+import javax.swing.UIManager;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
 import java.util.Locale;
@@ -23,7 +25,7 @@ final class WorkStrip extends JPanel {
     private final WrappingText status = new WrappingText(" ");
     private final JProgressBar bar = new JProgressBar(0, 1000);
     private final JButton cancel = new JButton("Cancel");
-    private Background<?> running;
+    private BackgroundWork<?, ?> running;
 
     /** @param name a stem for the components' names, e.g. "search" */
     WorkStrip(String name) {
@@ -54,6 +56,12 @@ final class WorkStrip extends JPanel {
      * @param failed what the status says before a failure's reason, e.g. "The search failed"
      */
     <T> void run(String doing, String unit, String failed, Function<Progress, T> work, Consumer<T> onResult) {
+        run(doing, unit, failed, work, onResult, () -> { });
+    }
+
+    /** As {@link #run(String, String, String, Function, Consumer)}, with what the view does when the work fails. */
+    <T> void run(String doing, String unit, String failed, Function<Progress, T> work, Consumer<T> onResult,
+                 Runnable onFailed) {
         if (running != null) {
             running.cancel();
         }
@@ -62,8 +70,8 @@ final class WorkStrip extends JPanel {
         bar.setString("starting");
         bar.setVisible(true);
         cancel.setVisible(true);
-        Background<?>[] self = new Background<?>[1];
-        self[0] = Background.start(work, new Background.Listener<T>() {
+        Object[] self = new Object[1];
+        self[0] = BackgroundWork.start(work, new BackgroundWork.Listener<Void, T>() {
             @Override
             public void progress(long done, long total) {
                 if (running == self[0] && total > 0) {
@@ -73,7 +81,7 @@ final class WorkStrip extends JPanel {
             }
 
             @Override
-            public void finished(T result) {
+            public void finished(Void input, T result) {
                 if (running == self[0]) {
                     stopped();
                     say(" ", false);
@@ -82,22 +90,23 @@ final class WorkStrip extends JPanel {
             }
 
             @Override
-            public void failed(String message) {
+            public void failed(Void input, String message) {
                 if (running == self[0]) {
                     stopped();
+                    onFailed.run();
                     say(failed + ": " + message, true);
                 }
             }
 
             @Override
-            public void cancelled() {
+            public void cancelled(Void input) {
                 if (running == self[0]) {
                     stopped();
                     say(doing + " was cancelled; nothing was changed.", false);
                 }
             }
         });
-        running = self[0];
+        running = (BackgroundWork<?, ?>) self[0];
     }
 
     /** Cancels the work running, if any. */
@@ -110,7 +119,7 @@ final class WorkStrip extends JPanel {
     /** Shows a message; a problem in the theme's colour for refused values. */
     void say(String message, boolean problem) {
         status.setText(message);
-        status.setForeground(problem ? Palette.problem() : javax.swing.UIManager.getColor("Label.foreground"));
+        status.setForeground(problem ? Palette.problem() : UIManager.getColor("Label.foreground"));
     }
 
     /** @return the message shown */

@@ -4,9 +4,8 @@ import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.ImpossibleVehicleException;
 import barwright.physics.VehicleAnalysis;
+import barwright.solver.RootNotFoundException;
 
-import javax.swing.SwingUtilities;
-import javax.swing.SwingWorker;
 import java.util.function.Consumer;
 
 /**
@@ -15,17 +14,27 @@ import java.util.function.Consumer;
  * event thread, newest last. Call from the event thread only.
  */
 public final class AnalysisScheduler {
-    private final Consumer<AnalysisOutcome> onOutcome;
+    private final BackgroundWork<Request, AnalysisOutcome> work;
     private long revision;
-    private Request pending;
-    private boolean running;
 
     private record Request(long revision, Vehicle vehicle, SweepRequest sweep) {
     }
 
     /** @param onOutcome receives every outcome on the event thread */
     public AnalysisScheduler(Consumer<AnalysisOutcome> onOutcome) {
-        this.onOutcome = onOutcome;
+        this.work = new BackgroundWork<>((request, progress) -> analyse(request.revision(), request.vehicle(),
+                request.sweep()), BackgroundWork.Superseded.DELIVERED, new BackgroundWork.Listener<>() {
+                    @Override
+                    public void finished(Request request, AnalysisOutcome outcome) {
+                        onOutcome.accept(outcome);
+                    }
+
+                    @Override
+                    public void failed(Request request, String message) {
+                        onOutcome.accept(new AnalysisOutcome(request.revision(), request.vehicle(), null, null, null,
+                                "The analysis failed inside the program: " + message));
+                    }
+                });
     }
 
     /**
@@ -34,52 +43,17 @@ public final class AnalysisScheduler {
      * @param sweep the bar sweep to run as well, or null for none (it costs a score of analyses)
      */
     public void submit(Vehicle vehicle, SweepRequest sweep) {
-        requireEventThread();
-        pending = new Request(++revision, vehicle, sweep);
-        if (!running) {
-            startNext();
-        }
+        work.submit(new Request(++revision, vehicle, sweep));
     }
 
     /** @return true when nothing runs or waits */
     public boolean isIdle() {
-        return !running && pending == null;
+        return work.isIdle();
     }
 
     /** @return the revision of the newest request */
     public long latestRevision() {
         return revision;
-    }
-
-    private void startNext() {
-        Request request = pending;
-        pending = null;
-        running = true;
-        new SwingWorker<Void, Void>() {
-            @Override
-            protected Void doInBackground() {
-                AnalysisOutcome outcome;
-                try {
-                    outcome = analyse(request.revision(), request.vehicle(), request.sweep());
-                } catch (RuntimeException | Error failed) {
-                    outcome = new AnalysisOutcome(request.revision(), request.vehicle(), null, null, null,
-                            "The analysis failed inside the program: " + failed);
-                }
-                // handed over with invokeLater rather than done(): SwingWorker batches done() on a timer that
-                // fires about every 33 ms, which would add that much to every edit
-                AnalysisOutcome finished = outcome;
-                SwingUtilities.invokeLater(() -> delivered(finished));
-                return null;
-            }
-        }.execute();
-    }
-
-    private void delivered(AnalysisOutcome outcome) {
-        running = false;
-        onOutcome.accept(outcome);
-        if (pending != null) {
-            startNext();
-        }
     }
 
     /** The work itself, on whatever thread calls it. */
@@ -88,7 +62,7 @@ public final class AnalysisScheduler {
             AnalysisResult result = VehicleAnalysis.analyse(vehicle);
             return new AnalysisOutcome(revision, vehicle, result, sweep == null ? null : BarSweep.run(vehicle, sweep),
                     withoutBars(vehicle), null);
-        } catch (ImpossibleVehicleException impossible) {
+        } catch (ImpossibleVehicleException | RootNotFoundException impossible) {
             return new AnalysisOutcome(revision, vehicle, null, null, null, impossible.getMessage());
         } catch (UnsupportedOperationException notBuilt) {
             return new AnalysisOutcome(revision, vehicle, null, null, null,
@@ -103,12 +77,6 @@ public final class AnalysisScheduler {
             return VehicleAnalysis.analyse(bare);
         } catch (ImpossibleVehicleException impossible) {
             return null;
-        }
-    }
-
-    private static void requireEventThread() {
-        if (!SwingUtilities.isEventDispatchThread()) {
-            throw new IllegalStateException("the analysis scheduler is used from the event thread");
         }
     }
 }

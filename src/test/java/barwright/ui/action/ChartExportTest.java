@@ -11,8 +11,6 @@ import barwright.ui.task.CorneringProbe;
 import barwright.ui.task.SweepParameter;
 import barwright.ui.task.SweepRequest;
 import barwright.units.UnitSystem;
-import barwright.ui.Display;
-import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -25,12 +23,13 @@ import java.util.Locale;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-/** Chart export, without a window: PNG and SVG files, with the axis units of the chosen system. */
-@Tag("window")
+/**
+ * Chart export, without a window: PNG and SVG files, with the axis units of the chosen system. Needs no display
+ * (the chart is drawn into an image), so it runs headless too.
+ */
 class ChartExportTest {
     @Test
     void aChartIsWrittenAsPngAndAsSvgInTheUnitsShown(@TempDir Path folder) throws Exception {
-        Display.require(); // the event thread of this JVM needs one
         ScriptedDialogs dialogs = new ScriptedDialogs();
         FileCommands files = new FileCommands(Samples.open(Samples.CLUB_HATCHBACK), dialogs,
                 new RecentFiles(Settings.inMemory()));

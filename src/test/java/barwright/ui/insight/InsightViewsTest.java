@@ -1,5 +1,6 @@
 package barwright.ui.insight;
 
+import barwright.ui.Display;
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
 import barwright.insight.Sensitivity;
@@ -43,7 +44,7 @@ class InsightViewsTest {
 
     @BeforeEach
     void open() throws Exception {
-        InsightDisplay.require();
+        Display.require();
         robot = BasicRobot.robotWithNewAwtHierarchy();
         window = GuiActionRunner.execute(() -> {
             Themes.apply(Themes.Theme.LIGHT, 0);

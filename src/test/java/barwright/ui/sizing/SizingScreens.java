@@ -19,7 +19,7 @@ final class SizingScreens {
     /** Opens the sizing window on a tab (as the Tools menu does) and returns it. */
     static SizingWindow open(MainWindow window, SizingWindow.Tab tab) throws Exception {
         return onEdt(() -> {
-            SizingWindow views = SizingViews.of(window).views();
+            SizingWindow views = window.contribution(SizingViews.class).views();
             views.open(tab);
             return views;
         });

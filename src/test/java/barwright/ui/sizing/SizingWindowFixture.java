@@ -36,8 +36,20 @@ final class SizingWindowFixture implements AutoCloseable {
         return dialog;
     }
 
+    /** Sizes the rear bar for a front share of 52 % with the form as it opens otherwise, and waits for the rows. */
+    DialogFixture searchRearFor52() {
+        DialogFixture sizing = openTool("Size a bar to a target…");
+        sizing.comboBox("search.axle").selectItem("rear bar");
+        sizing.radioButton("search.shareItself").click();
+        sizing.textBox("search.share").deleteText().enterText("52");
+        sizing.button("search.run").click();
+        SearchView view = views().search();
+        waitFor("the search", () -> view.work().isIdle() && view.table().getRowCount() > 0);
+        return sizing;
+    }
+
     SizingWindow views() {
-        return GuiActionRunner.execute(() -> SizingViews.of(window).views());
+        return GuiActionRunner.execute(() -> window.contribution(SizingViews.class).views());
     }
 
     /** Waits up to 60 s for a condition checked on the event thread. */

@@ -5,7 +5,7 @@ import barwright.model.AxlePosition;
 import barwright.model.Vehicle;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.sizing.MapOutput;
-import barwright.sizing.BarNodes;
+import barwright.io.BarNodes;
 import barwright.sizing.BarSearch;
 import barwright.sizing.Candidate;
 import barwright.sizing.Constraints;
@@ -73,14 +73,7 @@ class SizingWindowTest {
 
     /** Sizes the rear bar for a front share of 52 % with the form as it opens otherwise. */
     private DialogFixture searchRearFor52() {
-        DialogFixture sizing = fixture.openTool("Size a bar to a target…");
-        sizing.comboBox("search.axle").selectItem("rear bar");
-        sizing.radioButton("search.shareItself").click();
-        sizing.textBox("search.share").deleteText().enterText("52");
-        sizing.button("search.run").click();
-        SearchView view = fixture.views().search();
-        fixture.waitFor("the search", () -> view.work().isIdle() && view.table().getRowCount() > 0);
-        return sizing;
+        return fixture.searchRearFor52();
     }
 
     @Test
@@ -232,7 +225,7 @@ class SizingWindowTest {
         Path pdf = folder.resolve("hatchback-sheet.pdf");
         fixture.dialogs.filesToSave.add(pdf);
         fixture.frame.menuItemWithPath("File", "Export setup sheet as PDF…").click();
-        fixture.waitFor("the sheet", () -> SizingViews.of(fixture.window).lastMessage() != null);
+        fixture.waitFor("the sheet", () -> fixture.window.contribution(SizingViews.class).lastMessage() != null);
         assertThat(fixture.dialogs.errors).isEmpty();
         try (PDDocument parsed = Loader.loadPDF(Files.readAllBytes(pdf))) {
             String text = new PDFTextStripper().getText(parsed);
@@ -245,7 +238,7 @@ class SizingWindowTest {
         fixture.frame.menuItemWithPath("File", "Export arm-hole map as CSV…").click();
         Path csv = folder.resolve("hatchback-map.csv");
         fixture.waitFor("the map file", () -> Files.exists(csv)
-                && SizingViews.of(fixture.window).lastMessage().contains("hatchback-map.csv"));
+                && fixture.window.contribution(SizingViews.class).lastMessage().contains("hatchback-map.csv"));
         double currentShare = VehicleAnalysis.analyse(sample()).frontLoadTransferShare();
         try (Reader in = Files.newBufferedReader(csv);
              CSVParser parser = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {

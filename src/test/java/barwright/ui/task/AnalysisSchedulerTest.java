@@ -4,8 +4,6 @@ import barwright.model.AxlePosition;
 import barwright.model.SolidSection;
 import barwright.model.Vehicle;
 import barwright.ui.document.Samples;
-import barwright.ui.Display;
-import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import javax.swing.SwingUtilities;
@@ -16,13 +14,12 @@ import java.util.concurrent.TimeUnit;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-@Tag("window")
+/** The live analysis's scheduling, with no window: Swing's event thread runs headless too. */
 class AnalysisSchedulerTest {
     private static final SweepRequest SWEEP = new SweepRequest(AxlePosition.FRONT, SweepParameter.DIAMETER);
 
     @Test
     void rapidRequestsCollapseIntoTheNewestAndItArrivesLast() throws Exception {
-        Display.require(); // the event thread of this JVM needs one
         Vehicle car = Samples.load(Samples.CLUB_HATCHBACK).vehicle();
         List<AnalysisOutcome> outcomes = new ArrayList<>();
         List<Vehicle> submitted = new ArrayList<>();

@@ -18,6 +18,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
@@ -207,5 +208,20 @@ class MainWindowTest {
         fixture.settle();
         assertThat(diameter.text()).isEqualTo("26");
         assertThat(String.format(Locale.ROOT, "%s", fixture.window.getTitle())).contains("unsaved");
+    }
+
+    private List<String> carPictureFigures() {
+        fixture.robot.waitForIdle();
+        return GuiActionRunner.execute(() -> fixture.window.tabs().car().drawnFigures());
+    }
+
+    @Test
+    void theCarPictureRedrawsInTheNewUnitsAtOnceWithNoSliderMoved() {
+        fixture.frame.tabbedPane("results.tabs").selectTab("Car from behind");
+        assertThat(carPictureFigures()).anyMatch(text -> text.endsWith(" N")).noneMatch(text -> text.endsWith(" lbf"));
+        fixture.frame.toggleButton("units.us").click();
+        assertThat(carPictureFigures()).anyMatch(text -> text.endsWith(" lbf")).noneMatch(text -> text.endsWith(" N"));
+        fixture.frame.toggleButton("units.si").click();
+        assertThat(carPictureFigures()).anyMatch(text -> text.endsWith(" N")).noneMatch(text -> text.endsWith(" lbf"));
     }
 }
