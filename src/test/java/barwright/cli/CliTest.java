@@ -27,7 +27,9 @@ class CliTest {
             "heaveRateNPerMm", "singleWheelBumpRateNPerMm", "rideRateNPerMm", "rideFrequencyHz",
             "barLinkRateNPerMm", "barMassKg", "barTorsionalShearStressMPa", "barMaxVonMisesStressMPa",
             "barSafetyFactor", "loadTransferNPerG", "corneringStiffnessNPerDeg",
-            "barModel", "barMaxStressAtMm", "barBushingLoadsN");
+            "barModel", "barMaxStressAtMm", "barBushingLoadsN",
+            // a measured rate factor on the bar (model.md 12.1, file-format.md)
+            "barEffectiveRateFactor", "barRateMeasuredOn");
     private static final Set<String> TOP_KEYS = Set.of("format", "version", "vehicle", "front", "rear",
             "rollGradientDegPerG", "suspensionRollGradientDegPerG", "frontLoadTransferShare",
             "frontRollStiffnessShare", "understeerGradientDegPerG", "leftTurn", "rightTurn", "warnings");
