@@ -11,7 +11,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 /**
- * The bar rate fit against readings generated from a known rate and free play (docs/model.md 12.6 lists
+ * The bar rate fit against readings generated from a known rate and free play (docs/validation.md, "Workshop measurements", lists
  * the values). The generator is this test's own: a bar of rate k with free play s carries no load up to s and
  * k (d - s) past it; noise is seeded so the test is repeatable.
  */

@@ -13,7 +13,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
-/** Corner weights by hand and the link change against the link preload model (docs/model.md 12.6). */
+/** Corner weights by hand and the link change against the link preload model (docs/validation.md, "Workshop measurements"). */
 class CornerWeighingTest {
     @Test
     void sharesAndCrossWeightByHand() throws MeasurementException {

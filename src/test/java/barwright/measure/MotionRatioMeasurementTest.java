@@ -9,7 +9,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
-/** Motion ratios against published and closed-form examples (docs/model.md 12.6 lists the values). */
+/** Motion ratios against published and closed-form examples (docs/validation.md, "Workshop measurements", lists the values). */
 class MotionRatioMeasurementTest {
     private static final double INCH = 0.0254;
 

@@ -13,7 +13,7 @@ import static org.assertj.core.api.Assertions.within;
  * The tilt method against an independent forward model: a car of known centre of mass is rotated about the
  * lower axle's wheel centre with a rotation matrix, and the scale reading under the lower axle follows from
  * the moment balance about the raised axle's wheel centre. No published worked example with numbers was
- * found in the time given (docs/model.md 12.6 says so); the formula's derivation was checked against the
+ * found in the time given (docs/validation.md, "Workshop measurements", says so); the formula's derivation was checked against the
  * pages cited in TiltMethod.
  */
 class TiltMethodTest {
