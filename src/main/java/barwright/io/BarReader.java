@@ -6,6 +6,7 @@ import barwright.model.BarSection;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
 import barwright.model.Point3;
+import barwright.model.RateCalibration;
 import barwright.model.SolidSection;
 import barwright.model.TubeSection;
 import barwright.model.UBarDimensions;
@@ -55,10 +56,11 @@ final class BarReader {
                 : dimensions != null ? dimensions.armLengths().size() : 1;
         int selected = reader.integer(node, path, SELECTED_ARM, 0, holes - 1);
         double linkRatio = reader.number(node, path, "linkMotionRatio", Range.between(0.1, 3, ""));
+        RateCalibration calibration = RateCalibrationKeys.read(node, path, reader);
         if (reader.problems().size() > before || material == null || section == null) {
             return null;
         }
-        AntiRollBar bar = new AntiRollBar(material, section, dimensions, centreline, selected, linkRatio);
+        AntiRollBar bar = new AntiRollBar(material, section, dimensions, centreline, selected, linkRatio, calibration);
         if (centreline != null) {
             checkBeamModel(bar, path + ".geometry", reader);
         }

@@ -11,9 +11,18 @@ package barwright.model;
  * @param centreline      general shape, or null
  * @param selectedArm     0-based index of the link hole in use
  * @param linkMotionRatio link travel / wheel travel at the wheel centre
+ * @param rateCalibration the measured factor on the model's link rate, or null for the model alone
+ *                        (model.md 12.1); it stays with the bar when its section, material or hole changes
  */
 public record AntiRollBar(Material material, BarSection section, UBarDimensions dimensions,
-                          BarCentreline centreline, int selectedArm, double linkMotionRatio) {
+                          BarCentreline centreline, int selectedArm, double linkMotionRatio,
+                          RateCalibration rateCalibration) {
+    /** A bar with no measured rate: the model's rate is used as it is. */
+    public AntiRollBar(Material material, BarSection section, UBarDimensions dimensions, BarCentreline centreline,
+                       int selectedArm, double linkMotionRatio) {
+        this(material, section, dimensions, centreline, selectedArm, linkMotionRatio, null);
+    }
+
     public AntiRollBar {
         if (dimensions == null && centreline == null) {
             throw new IllegalArgumentException("a bar needs U-bar dimensions or a centreline");
@@ -45,14 +54,27 @@ public record AntiRollBar(Material material, BarSection section, UBarDimensions 
     }
 
     public AntiRollBar withSection(BarSection newSection) {
-        return new AntiRollBar(material, newSection, dimensions, centreline, selectedArm, linkMotionRatio);
+        return new AntiRollBar(material, newSection, dimensions, centreline, selectedArm, linkMotionRatio,
+                rateCalibration);
     }
 
     public AntiRollBar withMaterial(Material newMaterial) {
-        return new AntiRollBar(newMaterial, section, dimensions, centreline, selectedArm, linkMotionRatio);
+        return new AntiRollBar(newMaterial, section, dimensions, centreline, selectedArm, linkMotionRatio,
+                rateCalibration);
     }
 
     public AntiRollBar withSelectedArm(int newArm) {
-        return new AntiRollBar(material, section, dimensions, centreline, newArm, linkMotionRatio);
+        return new AntiRollBar(material, section, dimensions, centreline, newArm, linkMotionRatio, rateCalibration);
+    }
+
+    /** @param newCalibration the measured factor, or null to use the model's rate alone */
+    public AntiRollBar withRateCalibration(RateCalibration newCalibration) {
+        return new AntiRollBar(material, section, dimensions, centreline, selectedArm, linkMotionRatio,
+                newCalibration);
+    }
+
+    /** @return the factor on the model's link rate: the measured one, or 1 */
+    public double effectiveRateFactor() {
+        return rateCalibration == null ? 1 : rateCalibration.effectiveRateFactor();
     }
 }

@@ -50,6 +50,7 @@ public final class ReportJson {
         for (AxlePosition axle : AxlePosition.values()) {
             ObjectNode node = axle(result.axle(axle));
             linkages.putInto(node, axle);
+            RateCalibrationOutput.putJson(node, result.vehicle().axle(axle).bar());
             report.set(axle.key(), node);
         }
         report.put("rollGradientDegPerG", toDegreesPerG(result.rollGradient()));

@@ -1,5 +1,6 @@
 package barwright.report;
 
+import barwright.model.AntiRollBar;
 import barwright.report.linkage.LinkageFigures;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
@@ -114,6 +115,11 @@ public final class TextSummary {
         pair("bar model", barText(front.bar(), b -> b.model().key()), barText(rear.bar(), b -> b.model().key()));
         pair("bar link rate", barText(front.bar(), b -> f(b.linkRate(), Quantity.LINEAR_RATE, 1)),
                 barText(rear.bar(), b -> f(b.linkRate(), Quantity.LINEAR_RATE, 1)));
+        AntiRollBar frontBar = result.vehicle().front().bar();
+        AntiRollBar rearBar = result.vehicle().rear().bar();
+        if (RateCalibrationOutput.anyMeasured(frontBar, rearBar)) {
+            pair("bar rate factor", RateCalibrationOutput.text(frontBar), RateCalibrationOutput.text(rearBar));
+        }
         pair("bar mass", barText(front.bar(), b -> f(b.mass(), Quantity.MASS, 2)),
                 barText(rear.bar(), b -> f(b.mass(), Quantity.MASS, 2)));
         pair("bar max stress at check travel", barText(front.bar(), b -> f(b.maxVonMisesStress(), Quantity.STRESS, 0)),

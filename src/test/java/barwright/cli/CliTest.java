@@ -30,7 +30,9 @@ class CliTest {
             "barModel", "barMaxStressAtMm", "barBushingLoadsN",
             // the suspension-linkage figures (file-format.md, analysis report)
             "rollCentreHeightMm", "rollCentreHeightAtLimitMm", "rollCentreMigrationMmPerDeg",
-            "outsideCamberAtLimitDeg", "insideCamberAtLimitDeg", "camberChangePerDegRollDeg");
+            "outsideCamberAtLimitDeg", "insideCamberAtLimitDeg", "camberChangePerDegRollDeg",
+            // a measured rate factor on the bar (model.md 12.1, file-format.md)
+            "barEffectiveRateFactor", "barRateMeasuredOn");
     private static final Set<String> LINKAGE_AT_LIMIT = Set.of("rollCentreHeightAtLimitMm",
             "rollCentreMigrationMmPerDeg", "outsideCamberAtLimitDeg", "insideCamberAtLimitDeg", "camberChangePerDegRollDeg");
     private static final Set<String> TOP_KEYS = Set.of("format", "version", "vehicle", "front", "rear",

@@ -26,4 +26,20 @@ public record BarResult(BarModel model, double linkRate, double mass, double rel
         bushingLoads = List.copyOf(bushingLoads);
         deflectedShape = List.copyOf(deflectedShape);
     }
+
+    /**
+     * The result with a measured factor on the rate (model.md 12.1). At the same link travel the link force
+     * scales with the rate; the bar's stresses and bushing loads scale with the force it carries, and the
+     * safety factor inversely. The deflected shape is that of the model.
+     *
+     * @param factor measured link rate / this result's link rate
+     */
+    public BarResult calibrated(double factor) {
+        if (factor == 1) {
+            return this;
+        }
+        return new BarResult(model, linkRate * factor, mass, relativeLinkTravel, linkForce * factor,
+                torsionalShearStress * factor, maxVonMisesStress * factor, maxStressAt, safetyFactor / factor,
+                bushingLoads.stream().map(load -> load * factor).toList(), deflectedShape);
+    }
 }

@@ -8,6 +8,7 @@ import barwright.physics.AxleResult;
 import barwright.physics.TurnResult;
 import barwright.physics.bar.BarModel;
 import barwright.physics.bar.BarResult;
+import barwright.report.RateCalibrationOutput;
 import barwright.report.work.KeyFigure;
 import barwright.report.work.KeyFigure.Kind;
 import barwright.ui.task.ResultsModel;
@@ -101,6 +102,8 @@ public final class FiguresPanel extends JPanel {
         heading("Bars at the check travel", "Front", "Rear");
         pair("Link rate", "figure.bar.linkRate", axle -> KeyFigure.of(Kind.BAR_LINK_RATE, axle),
                 (result, axle) -> bar(result, axle, b -> format.text(b.linkRate(), Quantity.LINEAR_RATE)));
+        pair("Rate factor", "figure.bar.rateFactor", axle -> null,
+                (result, axle) -> bar(result, axle, b -> RateCalibrationOutput.text(result.vehicle().axle(axle).bar())));
         pair("Mass", "figure.bar.mass", axle -> KeyFigure.of(Kind.BAR_MASS, axle),
                 (result, axle) -> bar(result, axle, b -> format.text(b.mass(), Quantity.MASS)));
         pair("Largest stress", "figure.bar.stress", axle -> KeyFigure.of(Kind.BAR_SAFETY_FACTOR, axle),

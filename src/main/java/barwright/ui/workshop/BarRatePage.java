@@ -1,0 +1,274 @@
+package barwright.ui.workshop;
+
+import barwright.io.RateCalibrationKeys;
+import barwright.io.VehicleDocument;
+import barwright.measure.BarRateFit;
+import barwright.measure.BarRateMeasurement;
+import barwright.measure.BarReading;
+import barwright.measure.MeasurementException;
+import barwright.model.AntiRollBar;
+import barwright.model.AxlePosition;
+import barwright.model.RateCalibration;
+import barwright.physics.BarAnalysis;
+import barwright.report.Cautions;
+import barwright.ui.chart.BarRateChart;
+import barwright.ui.document.OpenDocument;
+import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.Palette;
+import barwright.ui.task.BackgroundWork;
+import barwright.units.DisplayUnit;
+import barwright.units.Figures;
+import barwright.units.Quantity;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import javax.swing.AbstractAction;
+import javax.swing.BorderFactory;
+import javax.swing.JButton;
+import javax.swing.JComboBox;
+import javax.swing.JComponent;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTable;
+import javax.swing.KeyStroke;
+import javax.swing.UIManager;
+import javax.swing.table.DefaultTableModel;
+import java.awt.BorderLayout;
+import java.awt.FlowLayout;
+import java.awt.Toolkit;
+import java.awt.datatransfer.DataFlavor;
+import java.awt.event.ActionEvent;
+import java.awt.event.KeyEvent;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * Readings typed into a table or pasted from a spreadsheet (two columns: load, deflection, in the view's
+ * units), the fit drawn over them, the model's rate for the chosen axle's bar, and "Use this in the car",
+ * which puts the measured factor into the open car as one undoable edit. The fit runs off the event thread.
+ */
+public final class BarRatePage extends JPanel {
+    private static final int ROWS = 12;
+    private final OpenDocument document;
+    private final ViewSettings view;
+    private final DefaultTableModel readings;
+    private final JTable table;
+    private final JComboBox<String> axle = new JComboBox<>(new String[] {"front", "rear"});
+    private final JLabel summary = new JLabel(" ");
+    private final JButton use = new JButton("Use this in the car");
+    private final BarRateChart chart = new BarRateChart();
+    private final BackgroundWork<Request, Outcome> worker;
+    private Outcome current;
+
+    /** What the fit is asked: the readings and the bar they are compared with (null for none). */
+    private record Request(List<BarReading> readings, AntiRollBar bar) {
+    }
+
+    /** The fit and the model's rate, or why there is none. */
+    private record Outcome(BarRateFit fit, Double modelRate, String refusal) {
+    }
+
+    public BarRatePage(OpenDocument document, ViewSettings view) {
+        super(new BorderLayout(8, 8));
+        setName("workshop.page");
+        this.document = document;
+        this.view = view;
+        readings = new DefaultTableModel(ROWS, 4) {
+            @Override
+            public boolean isCellEditable(int row, int column) {
+                return column < 2;
+            }
+        };
+        table = new JTable(readings);
+        table.setName("workshop.readings");
+        table.getInputMap(JComponent.WHEN_FOCUSED).put(KeyStroke.getKeyStroke(KeyEvent.VK_V,
+                Toolkit.getDefaultToolkit().getMenuShortcutKeyMaskEx()), "paste-readings");
+        table.getActionMap().put("paste-readings", new AbstractAction() {
+            @Override
+            public void actionPerformed(ActionEvent event) {
+                try {
+                    paste((String) Toolkit.getDefaultToolkit().getSystemClipboard().getData(DataFlavor.stringFlavor));
+                } catch (Exception nothingToPaste) {
+                    summary.setText("Nothing to paste: copy two columns, load and deflection, from a spreadsheet.");
+                }
+            }
+        });
+        // the residual and role columns are the page's own output: only the readings' columns refit
+        readings.addTableModelListener(event -> {
+            if (event.getColumn() < 2) {
+                refit();
+            }
+        });
+        axle.setName("workshop.axle");
+        axle.addActionListener(event -> refit());
+        use.setName("workshop.use");
+        use.setEnabled(false);
+        use.setToolTipText("Put the measured factor into the car (one step; Edit > Undo takes it back)");
+        use.addActionListener(event -> useInCar());
+        summary.setName("workshop.summary");
+
+        JPanel top = new JPanel(new FlowLayout(FlowLayout.LEADING));
+        top.add(new JLabel("Bar on the"));
+        top.add(axle);
+        top.add(new JLabel("axle: hang loads on one link point, hold the other, read the travel. Paste with Ctrl+V."));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(table), chart.component());
+        split.setResizeWeight(0.4);
+        JPanel bottom = new JPanel(new BorderLayout(4, 4));
+        bottom.add(summary, BorderLayout.CENTER);
+        bottom.add(use, BorderLayout.EAST);
+        JLabel caution = new JLabel("<html>" + Cautions.SHORT + "</html>");
+        caution.setForeground(Palette.muted());
+        bottom.add(caution, BorderLayout.SOUTH);
+        setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
+        add(top, BorderLayout.NORTH);
+        add(split, BorderLayout.CENTER);
+        add(bottom, BorderLayout.SOUTH);
+        worker = BackgroundWork.newestOnly(BarRatePage::fit, this::arrived, message -> summary.setText(message));
+        view.addListener(this::relabel);
+        document.addListener(event -> refit());
+        relabel();
+    }
+
+    /** Fills the table from text copied from a spreadsheet: one reading a line, load then deflection. */
+    public void paste(String text) {
+        List<String[]> rows = new ArrayList<>();
+        for (String line : text.split("\\R")) {
+            if (!line.isBlank()) {
+                rows.add(line.trim().split(line.contains("\t") ? "\t" : "[,;]"));
+            }
+        }
+        readings.setRowCount(Math.max(ROWS, rows.size()));
+        for (int r = 0; r < readings.getRowCount(); r++) {
+            for (int c = 0; c < 4; c++) {
+                readings.setValueAt(r < rows.size() && c < 2 && c < rows.get(r).length ? rows.get(r)[c].trim() : null,
+                        r, c);
+            }
+        }
+    }
+
+    /** The work, off the event thread. */
+    private static Outcome fit(Request request) {
+        try {
+            BarRateFit fit = BarRateMeasurement.fit(request.readings());
+            Double model = request.bar() == null ? null : BarAnalysis.model(request.bar(), 0).linkRate();
+            return new Outcome(fit, model, null);
+        } catch (MeasurementException refused) {
+            return new Outcome(null, null, refused.getMessage());
+        }
+    }
+
+    private void refit() {
+        DisplayUnit force = Quantity.FORCE.unit(view.units());
+        DisplayUnit length = Quantity.LENGTH.unit(view.units());
+        List<BarReading> list = new ArrayList<>();
+        for (int r = 0; r < readings.getRowCount(); r++) {
+            Object load = readings.getValueAt(r, 0);
+            Object deflection = readings.getValueAt(r, 1);
+            if (blank(load) && blank(deflection)) {
+                continue;
+            }
+            try {
+                list.add(new BarReading(length.toSi(number(deflection)), force.toSi(number(load)), "row " + (r + 1)));
+            } catch (NumberFormatException notANumber) {
+                show(new Outcome(null, null, String.format(Locale.ROOT, "Row %d: \"%s\", \"%s\" is not two numbers "
+                        + "(load, deflection).", r + 1, text(load), text(deflection))));
+                return;
+            }
+        }
+        if (list.isEmpty()) {
+            show(new Outcome(null, null, "Type or paste the readings: load and deflection, one a row."));
+            return;
+        }
+        VehicleDocument car = document.lastValid();
+        AntiRollBar bar = car == null ? null : car.vehicle().axle(selectedAxle()).bar();
+        worker.submit(new Request(List.copyOf(list), bar));
+    }
+
+    private void arrived(Outcome outcome) {
+        show(outcome);
+    }
+
+    private void show(Outcome outcome) {
+        current = outcome;
+        if (outcome.fit() == null) {
+            summary.setText(outcome.refusal());
+            summary.setForeground(Palette.warning());
+            chart.clear();
+            use.setEnabled(false);
+            return;
+        }
+        BarRateFit fit = outcome.fit();
+        StringBuilder text = new StringBuilder(String.format(Locale.ROOT, "Rate %s, free play %s, R² %.4f",
+                f(fit.rate(), Quantity.LINEAR_RATE, 1), f(fit.lash(), Quantity.LENGTH, 2), fit.rSquared()));
+        if (outcome.modelRate() != null) {
+            text.append(String.format(Locale.ROOT, "; the model gives %s: measured / model %.3f",
+                    f(outcome.modelRate(), Quantity.LINEAR_RATE, 1), factor()));
+        } else {
+            text.append("; this axle has no bar to compare with");
+        }
+        fit.warnings().forEach(w -> text.append(". ").append(w));
+        summary.setText("<html>" + text + "</html>");
+        summary.setForeground(UIManager.getColor("Label.foreground"));
+        chart.show(fit, view.units());
+        for (int i = 0, r = 0; r < readings.getRowCount() && i < fit.readings().size(); r++) {
+            if (blank(readings.getValueAt(r, 0)) && blank(readings.getValueAt(r, 1))) {
+                continue;
+            }
+            readings.setValueAt(f(fit.residuals().get(i), Quantity.FORCE, 1), r, 2);
+            readings.setValueAt(fit.roles().get(i).words(), r, 3);
+            i++;
+        }
+        double factor = factor();
+        use.setEnabled(outcome.modelRate() != null && factor >= RateCalibration.LOWEST
+                && factor <= RateCalibration.HIGHEST);
+    }
+
+    private double factor() {
+        return current.fit().rate() / current.modelRate();
+    }
+
+    /** Puts the measured factor into the car's bar: one edit, one undo step. */
+    public void useInCar() {
+        if (current == null || current.fit() == null || current.modelRate() == null) {
+            return;
+        }
+        RateCalibration calibration = new RateCalibration(factor(), LocalDate.now(), String.format(Locale.ROOT,
+                "%d readings in the workshop page, R² %.4f", current.fit().readings().size(), current.fit().rSquared()));
+        String key = selectedAxle().key();
+        document.editAll(tree -> RateCalibrationKeys.put((ObjectNode) tree.path(key).path("bar"), calibration), this);
+        document.closeEditStep();
+    }
+
+    private void relabel() {
+        readings.setColumnIdentifiers(new Object[] {"Load (" + Quantity.FORCE.unit(view.units()).symbol() + ")",
+                "Deflection (" + Quantity.LENGTH.unit(view.units()).symbol() + ")", "Residual", "Used as"});
+        refit();
+    }
+
+    private AxlePosition selectedAxle() {
+        return "rear".equals(axle.getSelectedItem()) ? AxlePosition.REAR : AxlePosition.FRONT;
+    }
+
+    private String f(double si, Quantity quantity, int decimals) {
+        return Figures.format(si, quantity, view.units(), decimals, view.locale());
+    }
+
+    private static boolean blank(Object cell) {
+        return cell == null || cell.toString().isBlank();
+    }
+
+    private static String text(Object cell) {
+        return cell == null ? "" : cell.toString();
+    }
+
+    private static double number(Object cell) {
+        double value = Double.parseDouble(text(cell).trim().replace(',', '.'));
+        if (!Double.isFinite(value)) {
+            throw new NumberFormatException();
+        }
+        return value;
+    }
+}
