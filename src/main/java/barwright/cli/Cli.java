@@ -29,6 +29,7 @@ public final class Cli {
             new MapCommand(),
             new CompareCommand(),
             new PreloadCommand(),
+            new FatigueCommand(),
             new SheetCommand());
 
     private Cli() {

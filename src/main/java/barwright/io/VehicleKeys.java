@@ -27,6 +27,13 @@ public final class VehicleKeys {
     public static final String OUTER_DIAMETER_MM = "outerDiameterMm";
     public static final String WALL_MM = "wallMm";
 
+    /** Optional fatigue keys (docs/file-format.md, fatigue): inside {@code material}, and a bar's own. */
+    public static final String ULTIMATE_STRENGTH_MPA = "ultimateStrengthMPa";
+    public static final String ENDURANCE_LIMIT_MPA = "enduranceLimitMPa";
+    public static final String FATIGUE = "fatigue";
+    public static final String SURFACE = "surface";
+    public static final String STRESS_CONCENTRATION = "stressConcentration";
+
     private VehicleKeys() {
     }
 }
