@@ -10,7 +10,7 @@ import barwright.physics.AnalysisPipeline;
 import barwright.physics.fatigue.FatigueAnalysis;
 import barwright.physics.fatigue.FatigueResult;
 import barwright.physics.fatigue.MeanStressCorrection;
-import barwright.physics.fatigue.SpectrumLevel;
+import barwright.model.SpectrumLevel;
 import barwright.report.fatigue.FatigueJson;
 import barwright.report.fatigue.FatigueText;
 

@@ -4,9 +4,9 @@ import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.model.FatigueStrength;
 import barwright.model.MaterialLibrary;
-import barwright.physics.fatigue.BarFatigueInputs;
-import barwright.physics.fatigue.BarFatigueSettings;
-import barwright.physics.fatigue.SurfaceFinish;
+import barwright.model.BarFatigueInputs;
+import barwright.model.BarFatigueSettings;
+import barwright.model.SurfaceFinish;
 import com.fasterxml.jackson.databind.JsonNode;
 
 import java.util.Arrays;

@@ -5,7 +5,7 @@ import barwright.io.csv.CsvReader;
 import barwright.io.csv.CsvRow;
 import barwright.io.csv.CsvSchema;
 import barwright.io.csv.CsvTable;
-import barwright.physics.fatigue.SpectrumLevel;
+import barwright.model.SpectrumLevel;
 
 import java.io.IOException;
 import java.nio.file.Path;

@@ -1,5 +1,7 @@
 package barwright.physics.fatigue;
 
+import barwright.model.SpectrumLevel;
+
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.physics.AnalysisPipeline;

@@ -1,5 +1,8 @@
 package barwright.physics.fatigue;
 
+import barwright.model.BarFatigueInputs;
+import barwright.model.SpectrumLevel;
+
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.physics.AnalysisPipeline;

@@ -1,5 +1,7 @@
 package barwright.physics.fatigue;
 
+import barwright.model.SurfaceFinish;
+
 import barwright.model.FatigueStrength;
 
 /**

@@ -1,5 +1,7 @@
 package barwright.physics.fatigue;
 
+import barwright.model.SurfaceFinish;
+
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;

@@ -1,5 +1,10 @@
 package barwright.physics.fatigue;
 
+import barwright.model.SurfaceFinish;
+import barwright.model.BarFatigueSettings;
+import barwright.model.BarFatigueInputs;
+import barwright.model.SpectrumLevel;
+
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.model.FatigueStrength;

@@ -1,4 +1,4 @@
-package barwright.physics.fatigue;
+package barwright.model;
 
 import java.util.Locale;
 import java.util.Optional;

@@ -1,6 +1,5 @@
-package barwright.physics.fatigue;
+package barwright.model;
 
-import barwright.model.FatigueStrength;
 
 /**
  * Everything the fatigue check needs of one bar beyond its geometry.

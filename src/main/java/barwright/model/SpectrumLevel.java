@@ -1,4 +1,4 @@
-package barwright.physics.fatigue;
+package barwright.model;
 
 /**
  * One row of a lateral-acceleration spectrum: a corner of that peak a_y, met that many times per lap.

@@ -1,4 +1,4 @@
-package barwright.physics.fatigue;
+package barwright.model;
 
 /**
  * A bar's fatigue inputs beyond its material.
