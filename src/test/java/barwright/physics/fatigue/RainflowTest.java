@@ -22,7 +22,7 @@ class RainflowTest {
      * The history -2, 1, -3, 5, -1, 3, -4, 4, -2 is the one we recall (from memory) as the rainflow example of
      * ASTM E1049-85 section 5.4.4; its published table was NOT read here (the search found only the standard's
      * first pages). The expected counts are an independent hand count done for this test with the three-point
-     * rule, written out in docs/model.md 11 (reference values): ranges 3: 0.5, 4: 1.5, 6: 0.5, 8: 1.0, 9: 0.5.
+     * rule, written out in docs/validation.md, section Fatigue: ranges 3: 0.5, 4: 1.5, 6: 0.5, 8: 1.0, 9: 0.5.
      * Exact: counting involves no rounding.
      */
     @Test
