@@ -29,6 +29,7 @@ public final class Cli {
             new MapCommand(),
             new CompareCommand(),
             new PreloadCommand(),
+            new FatigueCommand(),
             new MeasureCommand(),
             new SheetCommand(),
             new GeometryCommand(),

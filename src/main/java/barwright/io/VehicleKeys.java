@@ -43,6 +43,12 @@ public final class VehicleKeys {
     public static final String CAMBER_FOR_PEAK_GRIP_DEG = "camberForPeakGripDeg";
     public static final String PEAK_FRICTION_LOSS_PER_DEG_SQUARED = "peakFrictionLossPerDegSquared";
     public static final String CAMBER_STIFFNESS_PER_LOAD = "camberStiffnessPerLoad";
+    /** Optional fatigue keys (docs/file-format.md, fatigue): inside {@code material}, and a bar's own. */
+    public static final String ULTIMATE_STRENGTH_MPA = "ultimateStrengthMPa";
+    public static final String ENDURANCE_LIMIT_MPA = "enduranceLimitMPa";
+    public static final String FATIGUE = "fatigue";
+    public static final String SURFACE = "surface";
+    public static final String STRESS_CONCENTRATION = "stressConcentration";
 
     private VehicleKeys() {
     }

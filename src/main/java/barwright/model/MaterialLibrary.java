@@ -2,6 +2,7 @@ package barwright.model;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -51,7 +52,26 @@ public final class MaterialLibrary {
     private static final List<Material> ALL = List.of(SPRING_STEEL, CHROMOLY_4130, TITANIUM_6AL_4V,
             ALUMINIUM_7075_T6);
 
+    /**
+     * Fatigue data of the built-in materials, by name (docs/model.md 11). All from memory, typical values, not
+     * read in print here: spring steel S_ut 1500 MPa (quenched and tempered 5160 class) with S'_e = 700 MPa, the
+     * cap of Shigley's S'_e = 0.5 S_ut rule above S_ut = 1400 MPa; 4130 normalised S_ut 670 MPa, S'_e = 0.5 S_ut
+     * = 335 MPa (same rule); Ti-6Al-4V annealed S_ut 950 MPa, S'_e 510 MPa at 10^7 cycles (ASM-type data);
+     * 7075-T6 S_ut 572 MPa, fatigue strength 159 MPa at 5x10^8 cycles (ASM/MatWeb-type data; aluminium has no
+     * true endurance limit).
+     */
+    private static final Map<String, FatigueStrength> FATIGUE = Map.of(
+            SPRING_STEEL.name(), new FatigueStrength(1500 * MPA, 700 * MPA, FatigueStrength.STEEL_KNEE_CYCLES),
+            CHROMOLY_4130.name(), new FatigueStrength(670 * MPA, 335 * MPA, FatigueStrength.STEEL_KNEE_CYCLES),
+            TITANIUM_6AL_4V.name(), new FatigueStrength(950 * MPA, 510 * MPA, 1e7),
+            ALUMINIUM_7075_T6.name(), new FatigueStrength(572 * MPA, 159 * MPA, 5e8));
+
     private MaterialLibrary() {
+    }
+
+    /** @return the fatigue data of a built-in material of that name, or empty */
+    public static Optional<FatigueStrength> fatigueStrength(String name) {
+        return byName(name).map(material -> FATIGUE.get(material.name()));
     }
 
     /** @return every built-in material */
