@@ -1,9 +1,12 @@
 package barwright.cli;
 
+import barwright.io.FileWriteException;
 import barwright.io.VehicleFileException;
 import barwright.physics.ImpossibleVehicleException;
+import barwright.solver.RootNotFoundException;
 
 import java.io.PrintStream;
+import java.nio.file.NoSuchFileException;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
@@ -46,12 +49,16 @@ public final class Cli {
             err.print(usage());
             return REFUSED;
         }
-        List<String> rest = Arrays.asList(args).subList(1, args.length);
+        return run(command.get(), Arrays.asList(args).subList(1, args.length), out, err);
+    }
+
+    /** Runs one command and turns every refusal into its message and exit code 2. */
+    static int run(Command command, List<String> rest, PrintStream out, PrintStream err) {
         try {
-            return command.get().run(rest, out, err);
+            return command.run(rest, out, err);
         } catch (UsageException usage) {
-            err.println("barwright " + command.get().name() + ": " + usage.getMessage());
-            err.println("usage: barwright " + command.get().synopsis());
+            err.println("barwright " + command.name() + ": " + usage.getMessage());
+            err.println("usage: barwright " + command.synopsis());
             return REFUSED;
         } catch (VehicleFileException refused) {
             err.println("barwright: the vehicle file was refused:");
@@ -60,7 +67,13 @@ public final class Cli {
         } catch (ImpossibleVehicleException impossible) {
             err.println("barwright: this car cannot be analysed: " + impossible.getMessage());
             return REFUSED;
-        } catch (java.nio.file.NoSuchFileException missing) {
+        } catch (RootNotFoundException unsolved) {
+            err.println("barwright: this car cannot be analysed: " + unsolved.getMessage());
+            return REFUSED;
+        } catch (FileWriteException unwritable) {
+            err.println("barwright: " + unwritable.getMessage());
+            return REFUSED;
+        } catch (NoSuchFileException missing) {
             err.println("barwright: file not found: " + missing.getFile());
             return REFUSED;
         } catch (Exception | Error internal) {

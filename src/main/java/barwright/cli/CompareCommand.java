@@ -1,12 +1,13 @@
 package barwright.cli;
 
+import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
+import barwright.io.VehicleEdits;
 import barwright.io.VehicleFileWriter;
 import barwright.report.Cautions;
 import barwright.report.sizing.ComparisonJson;
 import barwright.report.sizing.ComparisonText;
 import barwright.report.sizing.SweepOutput;
-import barwright.sizing.VehicleEdits;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
 
@@ -86,7 +87,7 @@ final class CompareCommand implements Command {
         if (csv != null) {
             StringWriter text = new StringWriter();
             SweepOutput.chartsCsv(comparison.charts(), text);
-            VehicleFileWriter.writeAtomically(Path.of(csv), text.toString());
+            AtomicFileWriter.writeText(Path.of(csv), text.toString());
         }
         if (parsed.has("json")) {
             out.print(VehicleFileWriter.toJson(ComparisonJson.of(comparison)));

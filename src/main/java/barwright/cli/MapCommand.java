@@ -1,7 +1,11 @@
 package barwright.cli;
 
+import barwright.io.AtomicFileWriter;
+import barwright.io.JsonInput;
+import barwright.io.JsonInputException;
 import barwright.io.Problem;
 import barwright.io.VehicleDocument;
+import barwright.io.VehicleEdits;
 import barwright.io.VehicleFileException;
 import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
@@ -16,19 +20,21 @@ import barwright.sizing.map.AdjustmentMap.LabelledBar;
 import barwright.solver.Progress;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
-import java.io.IOException;
 import java.io.PrintStream;
 import java.io.StringWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+
+import static barwright.io.VehicleKeys.BAR;
+import static barwright.io.VehicleKeys.MATERIAL;
+import static barwright.io.VehicleKeys.SECTION;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
 
 /**
  * {@code map FILE ...}: every front arm hole against every rear one, for the car's bars or for the candidates
@@ -70,7 +76,7 @@ final class MapCommand implements Command {
         if (csv != null) {
             StringWriter text = new StringWriter();
             MapOutput.csv(map, text);
-            VehicleFileWriter.writeAtomically(Path.of(csv), text.toString());
+            AtomicFileWriter.writeText(Path.of(csv), text.toString());
         }
         if (parsed.has("json")) {
             out.print(VehicleFileWriter.toJson(MapOutput.json(map)));
@@ -83,14 +89,14 @@ final class MapCommand implements Command {
 
     /** Adds the bars of a sizing result's candidates to the axles they were sized for. */
     private static void addCandidates(VehicleDocument document, Path file, Map<AxlePosition, List<LabelledBar>> bars)
-            throws UsageException, IOException, VehicleFileException {
+            throws UsageException, VehicleFileException {
         JsonNode root;
         try {
-            root = new ObjectMapper().readTree(Files.readAllBytes(file));
-        } catch (JsonProcessingException bad) {
-            throw new UsageException("--candidates " + file + ": not valid JSON: " + bad.getOriginalMessage());
+            root = JsonInput.read(file, "a sizing result");
+        } catch (JsonInputException refused) {
+            throw new UsageException("--candidates " + file + ": " + refused.getMessage());
         }
-        if (root == null || !SizingJson.FORMAT.equals(root.path("format").asText())) {
+        if (!SizingJson.FORMAT.equals(root.path("format").asText())) {
             throw new UsageException("--candidates " + file + ": not a sizing result (format \"" + SizingJson.FORMAT
                     + "\", as 'size --json' prints)");
         }
@@ -98,7 +104,7 @@ final class MapCommand implements Command {
         for (JsonNode candidate : root.path("candidates")) {
             for (AxlePosition axle : AxlePosition.values()) {
                 JsonNode choice = candidate.path("axle").asText().equals(axle.key()) ? candidate : candidate.path(axle.key());
-                if (choice.isObject() && choice.has("section")) {
+                if (choice.isObject() && choice.has(SECTION)) {
                     bars.get(axle).add(new LabelledBar("#" + candidate.path("rank").asInt(index + 1) + " "
                             + choice.path("sizeLabel").asText(""), barFrom(document, axle, choice, index)));
                 }
@@ -111,14 +117,12 @@ final class MapCommand implements Command {
     private static AntiRollBar barFrom(VehicleDocument document, AxlePosition axle, JsonNode choice, int index)
             throws VehicleFileException {
         ObjectNode tree = document.editableTree();
-        JsonNode bar = tree.path(axle.key()).path("bar");
-        if (!(bar instanceof ObjectNode barNode)) {
-            throw new VehicleFileException(List.of(new Problem(axle.key() + ".bar",
-                    "is null: candidate " + (index + 1) + " needs the bar's geometry from the vehicle file")));
+        try {
+            VehicleEdits.putBar(tree, axle, choice.path(MATERIAL), choice.path(SECTION), choice.path(SELECTED_ARM));
+        } catch (VehicleFileException noBar) {
+            throw new VehicleFileException(List.of(new Problem(axle.key() + "." + BAR, "is missing: candidate "
+                    + (index + 1) + " needs the bar's geometry from the vehicle file")));
         }
-        barNode.set("material", choice.path("material"));
-        barNode.set("section", choice.path("section"));
-        barNode.set("selectedArm", choice.path("selectedArm"));
         return VehicleFileReader.fromTree(tree).vehicle().axle(axle).bar();
     }
 }

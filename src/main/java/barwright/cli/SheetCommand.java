@@ -1,7 +1,7 @@
 package barwright.cli;
 
+import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileWriter;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.sheet.SetupSheet;
@@ -69,7 +69,7 @@ final class SheetCommand implements Command {
         if (mapCsv != null) {
             StringWriter text = new StringWriter();
             MapOutput.csv(content.map(), text);
-            VehicleFileWriter.writeAtomically(Path.of(mapCsv), text.toString());
+            AtomicFileWriter.writeText(Path.of(mapCsv), text.toString());
         }
         out.println("wrote " + output + (mapCsv == null ? "" : " and " + mapCsv));
         return Cli.OK;

@@ -1,5 +1,6 @@
 package barwright.cli;
 
+import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileWriter;
 import barwright.model.AntiRollBar;
@@ -25,7 +26,7 @@ import barwright.sizing.SizingRequest;
 import barwright.sizing.SizingResult;
 import barwright.sizing.Targets;
 import barwright.sizing.TubeEquivalents;
-import barwright.sizing.VehicleEdits;
+import barwright.io.VehicleEdits;
 import barwright.sizing.catalogue.Catalogue;
 import barwright.sizing.catalogue.CatalogueFileException;
 import barwright.sizing.catalogue.Catalogues;
@@ -131,7 +132,7 @@ final class SizeCommand implements Command {
                 StringWriter csv = new StringWriter();
                 SweepOutput.diameterCsv(DiameterSweep.of(evaluator, axle, material, hole, 10e-3, 40e-3, 60),
                         axle == AxlePosition.FRONT, csv);
-                VehicleFileWriter.writeAtomically(Path.of(sweepFile), csv.toString());
+                AtomicFileWriter.writeText(Path.of(sweepFile), csv.toString());
             }
         }
         applyCandidate(parsed, document, result);
@@ -160,7 +161,7 @@ final class SizeCommand implements Command {
                     + " candidates");
         }
         Candidate candidate = result.candidates().get(rank - 1);
-        VehicleFileWriter.save(VehicleEdits.withCandidate(document, candidate), Path.of(output));
+        VehicleFileWriter.save(VehicleEdits.withBars(document, candidate.settings()), Path.of(output));
     }
 
     private int tubesLikeSolid(Arguments parsed, VehicleDocument document, List<AxlePosition> axles,

@@ -9,11 +9,14 @@ import barwright.physics.ImpossibleVehicleException;
 import barwright.physics.LoadTransferParts;
 import barwright.physics.RollResponse;
 import barwright.physics.VehicleAnalysis;
-import org.apache.commons.math3.analysis.UnivariateFunction;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import barwright.solver.RootFinder;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import java.util.function.DoubleUnaryOperator;
+
+import static barwright.units.Constants.RADIANS_PER_DEGREE;
 
 /**
  * What a flexible chassis costs (model.md 6): the front share of load transfer and the roll gradient against
@@ -33,11 +36,20 @@ public final class ChassisStudy {
     public static final double DELIVERED_TARGET = 0.8;
     /** The bar change: the bar's rate raised by this fraction (both elastic moduli of its material raised). */
     public static final double BAR_CHANGE = 0.10;
-    /** The target is sought between these multiples of the total roll stiffness. */
+    /**
+     * The target is sought from this multiple of the total roll stiffness, or from just above the stability
+     * limit where the body needs a chassis to stand ...
+     */
     private static final double SEARCH_LOW = 1e-3;
+    /** ... up to this multiple. */
     private static final double SEARCH_HIGH = 1e3;
-    /** Accuracy of the target search, in decades of stiffness: 1e-9 is a relative 2.3e-9. */
-    private static final double SEARCH_ACCURACY = 1e-9;
+    /** Points per decade of the scan that brackets the target before it is solved for. */
+    private static final int SCAN_PER_DECADE = 20;
+    /** The scan starts this fraction above the stability limit, where the two-end equations are still solvable. */
+    private static final double ABOVE_LIMIT = 1e-6;
+    /** The target to 1e-9 decades of stiffness (a relative 2.3e-9), within 200 evaluations. */
+    private static final RootFinder TARGET_STIFFNESS = RootFinder.of("the chassis stiffness at which a bar change "
+            + "delivers 80 % of its rigid effect", 1e-9, 200);
 
     private final AnalysisResult base;
     private final AnalysisResult changed;
@@ -60,14 +72,14 @@ public final class ChassisStudy {
             if (bar != null) {
                 Vehicle stiffer = vehicle.withAxle(position, vehicle.axle(position).withBar(stiffened(bar)));
                 return new ChassisStudy(analysis, VehicleAnalysis.analyse(stiffer),
-                        String.format(java.util.Locale.ROOT, "a %s bar %.0f %% stiffer", position.key(),
+                        String.format(Locale.ROOT, "a %s bar %.0f %% stiffer", position.key(),
                                 BAR_CHANGE * 100));
             }
         }
         // no bar at either end: the same roll stiffness change made with the front springs
         Vehicle stiffer = vehicle.withFront(vehicle.front().withSpringRate(vehicle.front().springRate()
                 * (1 + BAR_CHANGE)));
-        return new ChassisStudy(analysis, VehicleAnalysis.analyse(stiffer), String.format(java.util.Locale.ROOT,
+        return new ChassisStudy(analysis, VehicleAnalysis.analyse(stiffer), String.format(Locale.ROOT,
                 "front springs %.0f %% stiffer (the car has no bar)", BAR_CHANGE * 100));
     }
 
@@ -80,6 +92,15 @@ public final class ChassisStudy {
         Material material = bar.material();
         return bar.withMaterial(new Material(material.name(), material.youngsModulus() * (1 + BAR_CHANGE),
                 material.shearModulus() * (1 + BAR_CHANGE), material.density(), material.yieldStrength()));
+    }
+
+    /**
+     * @return the chassis stiffness above which the body of that car has a stable roll position (N m/rad): 0
+     *     where each body end can hold its share of the sprung mass on its own axle (model.md 6)
+     */
+    private static double stabilityLimit(AnalysisResult result) {
+        return RollResponse.chassisStabilityLimit(result.masses(), result.front().stiffness().rollStiffness(),
+                result.rear().stiffness().rollStiffness());
     }
 
     /** @return K_f + K_r of the car as it is (N m/rad) */
@@ -132,60 +153,103 @@ public final class ChassisStudy {
                 deliveredShare(chassisStiffness));
     }
 
+    private static boolean finite(ChassisPoint point) {
+        return Double.isFinite(point.frontShare()) && Double.isFinite(point.rollGradient())
+                && Double.isFinite(point.deliveredShare());
+    }
+
     public ChassisStudyResult compute() {
         List<String> notes = new ArrayList<>();
         double total = totalRollStiffness();
+        double limit = stabilityLimit(base);
         List<ChassisPoint> sweep = new ArrayList<>(POINTS);
-        int unstable = 0;
+        int leftOut = 0;
         for (int i = 0; i < POINTS; i++) {
             double decades = Math.log10(LOWEST) + (Math.log10(HIGHEST) - Math.log10(LOWEST)) * i / (POINTS - 1);
             try {
-                sweep.add(point(total * Math.pow(10, decades)));
+                ChassisPoint point = point(total * Math.pow(10, decades));
+                if (finite(point)) {
+                    sweep.add(point);
+                } else {
+                    leftOut++;
+                }
             } catch (ImpossibleVehicleException noStableRoll) {
-                unstable++;
+                leftOut++;
             }
         }
-        if (unstable > 0) {
-            notes.add("At the lowest chassis stiffnesses of the sweep the body has no stable roll position: "
-                    + unstable + " points are left out.");
+        if (limit > 0) {
+            notes.add(String.format(Locale.ROOT, "One body end cannot hold its share of the sprung mass on its own "
+                    + "axle: the body has a stable roll position only with a chassis stiffer than %.1f N·m/deg "
+                    + "(the stability limit of model.md 6).", limit * RADIANS_PER_DEGREE));
+        }
+        if (leftOut > 0) {
+            notes.add(String.format(Locale.ROOT, "%d points of the sweep lie at or below the stability limit, where "
+                    + "the body has no stable roll position, and are left out.", leftOut));
         }
         ChassisPoint rigid = new ChassisPoint(Double.POSITIVE_INFINITY, frontShare(null), rollGradient(null), 1.0);
         ChassisPoint decoupled = null;
         try {
             decoupled = point(0.0);
         } catch (ImpossibleVehicleException noStableRoll) {
-            notes.add("With no chassis stiffness at all one body end could not hold its share of the sprung mass.");
+            // the stability limit's note above already says that an end cannot stand alone
         }
         Double ownStiffness = base.vehicle().chassisTorsionalStiffness();
         ChassisPoint current = ownStiffness == null ? null : point(ownStiffness);
-        Double target = stiffnessForTarget(total);
-        if (target == null) {
-            notes.add(String.format(java.util.Locale.ROOT, "No chassis stiffness between %.0e and %.0e times the "
-                    + "total roll stiffness lets the bar change deliver %.0f %% of its rigid effect.",
-                    SEARCH_LOW, SEARCH_HIGH, DELIVERED_TARGET * 100));
-        }
+        Double target = stiffnessForTarget(total, notes);
         return new ChassisStudyResult(base.vehicle().name(), total, barChange, sweep, rigid, decoupled, current,
                 target, notes);
     }
 
     /**
-     * @return K_c at which the delivered share is {@link #DELIVERED_TARGET} (N m/rad), by a Brent solver on the
-     *     logarithm of K_c; null where it is not bracketed in the search range
+     * The delivered share is scanned on a logarithmic grid from the lowest stiffness at which both the car and
+     * the changed car stand (their stability limits, else {@link #SEARCH_LOW} times the total roll stiffness) to
+     * {@link #SEARCH_HIGH} times it; the last rise through {@link #DELIVERED_TARGET} is then solved for on the
+     * logarithm of K_c, so every stiffness of the scan above the answer delivers at least the target.
+     *
+     * @return K_c at which the delivered share is {@link #DELIVERED_TARGET} (N m/rad); null where the scan finds
+     *     no rise through it, with a note that says why
      */
-    private Double stiffnessForTarget(double total) {
-        UnivariateFunction shortfall = decades -> deliveredShare(total * Math.pow(10, decades)) - DELIVERED_TARGET;
-        double high = Math.log10(SEARCH_HIGH);
-        for (double low : new double[]{Math.log10(SEARCH_LOW), Math.log10(LOWEST)}) {
+    private Double stiffnessForTarget(double total, List<String> notes) {
+        double standing = Math.max(stabilityLimit(base), stabilityLimit(changed));
+        double low = standing > 0 ? Math.log10(standing * (1 + ABOVE_LIMIT)) : Math.log10(SEARCH_LOW * total);
+        double high = Math.log10(SEARCH_HIGH * total);
+        DoubleUnaryOperator shortfall = decades -> deliveredShare(Math.pow(10, decades)) - DELIVERED_TARGET;
+        int steps = Math.max(1, (int) Math.ceil((high - low) * SCAN_PER_DECADE));
+        double risingFrom = Double.NaN;
+        double risingTo = Double.NaN;
+        boolean anyBelow = false;
+        double previous = Double.NaN;
+        double previousX = Double.NaN;
+        for (int i = 0; i <= steps && low < high; i++) {
+            double x = low + (high - low) * i / steps;
+            double value;
             try {
-                if (!(shortfall.value(low) < 0 && shortfall.value(high) > 0)) {
-                    return null;
-                }
-                double decades = new BrentSolver(SEARCH_ACCURACY).solve(200, shortfall, low, high);
-                return total * Math.pow(10, decades);
+                value = shortfall.applyAsDouble(x);
             } catch (ImpossibleVehicleException noStableRoll) {
-                // so soft a chassis cannot hold the body: search again from the start of the sweep
+                value = Double.NaN;
             }
+            if (!Double.isFinite(value)) {
+                previous = Double.NaN;
+                continue;
+            }
+            anyBelow |= value < 0;
+            if (previous < 0 && value >= 0) {
+                risingFrom = previousX;
+                risingTo = x;
+            }
+            previous = value;
+            previousX = x;
         }
+        if (!Double.isNaN(risingFrom)) {
+            return Math.pow(10, TARGET_STIFFNESS.solve(shortfall, risingFrom, risingTo));
+        }
+        String from = standing > 0
+                ? String.format(Locale.ROOT, "just above the stability limit of %.1f N·m/deg",
+                        standing * RADIANS_PER_DEGREE)
+                : String.format(Locale.ROOT, "%.0e times the total roll stiffness", SEARCH_LOW);
+        notes.add(String.format(Locale.ROOT, "%s chassis stiffness from %s up to %.0e times the total roll stiffness "
+                + "lets the bar change deliver %s%.0f %% of its rigid effect.", anyBelow ? "No" : "Every", from,
+                SEARCH_HIGH, anyBelow ? "" : "at least ", DELIVERED_TARGET * 100));
         return null;
     }
 }

@@ -13,6 +13,7 @@ import barwright.units.Quantity;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.function.UnaryOperator;
 
 /**
@@ -178,7 +179,7 @@ public final class InputChanges {
             return;
         }
         changes.add(new InputChange("ballastForward", "mass on the front axle",
-                String.format(java.util.Locale.ROOT, "%.0f kg of ballast moved forward", BALLAST), Quantity.MASS,
+                String.format(Locale.ROOT, "%.0f kg of ballast moved forward", BALLAST), Quantity.MASS,
                 frontMass, frontMass + BALLAST, InputChanges::withBallastForward));
     }
 

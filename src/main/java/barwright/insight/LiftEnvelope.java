@@ -7,13 +7,13 @@ import barwright.physics.MassProperties;
 import barwright.physics.SteadyCornering;
 import barwright.physics.VehicleAnalysis;
 import barwright.physics.WheelLoads;
-import org.apache.commons.math3.analysis.UnivariateFunction;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import barwright.solver.RootFinder;
 
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.TreeSet;
+import java.util.function.DoubleUnaryOperator;
 
 import static barwright.units.Constants.STANDARD_GRAVITY;
 
@@ -39,7 +39,12 @@ public final class LiftEnvelope {
     static final double ACCURACY = 1e-9;
     /** A lift past this counts as "never" when solving for a crossing (m/s^2). */
     private static final double NEVER = 100 * STANDARD_GRAVITY;
-    private static final int EVALUATIONS = 200;
+    /** Where the first axle to lift changes, to {@link #ACCURACY} within 200 evaluations. */
+    private static final RootFinder CORNER = RootFinder.of("the braking or acceleration at which the first axle "
+            + "to lift changes", ACCURACY, 200);
+    /** Where a lift crosses the lateral limit, to {@link #ACCURACY} within 200 evaluations. */
+    private static final RootFinder CROSSING = RootFinder.of("the braking or acceleration at which a wheel's "
+            + "lift meets the lateral limit", ACCURACY, 200);
 
     private final AnalysisResult analysis;
 
@@ -124,15 +129,14 @@ public final class LiftEnvelope {
         QUOTED.stream().filter(value -> value >= braking && value <= acceleration).forEach(values::add);
         // the first axle to lift is the one whose inside wheel would lift first alone: where the two are
         // equal the boundaries have a corner
-        UnivariateFunction difference = ax -> aloneLift(turn, AxlePosition.FRONT, ax)
+        DoubleUnaryOperator difference = ax -> aloneLift(turn, AxlePosition.FRONT, ax)
                 - aloneLift(turn, AxlePosition.REAR, ax);
         List<Double> grid = new ArrayList<>(values);
-        BrentSolver solver = new BrentSolver(ACCURACY);
         for (int i = 1; i < grid.size(); i++) {
-            double low = difference.value(grid.get(i - 1));
-            double high = difference.value(grid.get(i));
+            double low = difference.applyAsDouble(grid.get(i - 1));
+            double high = difference.applyAsDouble(grid.get(i));
             if (Double.isFinite(low) && Double.isFinite(high) && low * high < 0) {
-                values.add(solver.solve(EVALUATIONS, difference, grid.get(i - 1), grid.get(i)));
+                values.add(CORNER.solve(difference, grid.get(i - 1), grid.get(i)));
             }
         }
         // a grid value and a quoted or solved one that differ by round-off only are one point
@@ -179,20 +183,19 @@ public final class LiftEnvelope {
     /** The spans of a_x in which the wheel lifts below the lateral limit; the crossings found with Brent. */
     private List<LongitudinalRange> liftsBeforeLimit(Wheel wheel, List<EnvelopePoint> points) {
         double limit = analysis.turn(wheel.insideIn()).limit();
-        UnivariateFunction margin = ax -> Math.min(lift(wheel, ax), NEVER) - limit;
-        BrentSolver solver = new BrentSolver(ACCURACY);
+        DoubleUnaryOperator margin = ax -> Math.min(lift(wheel, ax), NEVER) - limit;
         List<LongitudinalRange> ranges = new ArrayList<>();
-        Double start = margin.value(points.get(0).longitudinalAcceleration()) < 0
+        Double start = margin.applyAsDouble(points.get(0).longitudinalAcceleration()) < 0
                 ? points.get(0).longitudinalAcceleration() : null;
         for (int i = 1; i < points.size(); i++) {
             double low = points.get(i - 1).longitudinalAcceleration();
             double high = points.get(i).longitudinalAcceleration();
-            boolean liftsLow = margin.value(low) < 0;
-            boolean liftsHigh = margin.value(high) < 0;
+            boolean liftsLow = margin.applyAsDouble(low) < 0;
+            boolean liftsHigh = margin.applyAsDouble(high) < 0;
             if (liftsLow == liftsHigh) {
                 continue;
             }
-            double crossing = solver.solve(EVALUATIONS, margin, low, high);
+            double crossing = CROSSING.solve(margin, low, high);
             if (liftsHigh) {
                 start = crossing;
             } else {

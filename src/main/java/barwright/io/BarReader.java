@@ -14,6 +14,22 @@ import com.fasterxml.jackson.databind.JsonNode;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+
+import static barwright.io.VehicleKeys.DENSITY_KG_PER_M3;
+import static barwright.io.VehicleKeys.MATERIAL;
+import static barwright.io.VehicleKeys.MATERIAL_PROPERTIES;
+import static barwright.io.VehicleKeys.NAME;
+import static barwright.io.VehicleKeys.OUTER_DIAMETER_MM;
+import static barwright.io.VehicleKeys.SECTION;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
+import static barwright.io.VehicleKeys.SHAPE;
+import static barwright.io.VehicleKeys.SHEAR_MODULUS_GPA;
+import static barwright.io.VehicleKeys.SOLID;
+import static barwright.io.VehicleKeys.TUBE;
+import static barwright.io.VehicleKeys.WALL_MM;
+import static barwright.io.VehicleKeys.YIELD_STRENGTH_MPA;
+import static barwright.io.VehicleKeys.YOUNGS_MODULUS_GPA;
 
 /** Reads a {@code bar} object: material, section, U-bar dimensions and/or a shaped centreline. */
 final class BarReader {
@@ -37,7 +53,7 @@ final class BarReader {
         UBarDimensions dimensions = closedFormGiven ? readDimensions(node, path, reader) : null;
         int holes = centreline != null ? centreline.holeSetbacks().size()
                 : dimensions != null ? dimensions.armLengths().size() : 1;
-        int selected = reader.integer(node, path, "selectedArm", 0, holes - 1);
+        int selected = reader.integer(node, path, SELECTED_ARM, 0, holes - 1);
         double linkRatio = reader.number(node, path, "linkMotionRatio", Range.between(0.1, 3, ""));
         if (reader.problems().size() > before || material == null || section == null) {
             return null;
@@ -69,12 +85,13 @@ final class BarReader {
 
     private static Material readMaterial(JsonNode node, String path, NodeReader reader) {
         String materialPath = path + ".material";
-        JsonNode materialNode = reader.object(node, path, "material", true);
+        JsonNode materialNode = reader.object(node, path, MATERIAL, true);
         if (materialNode == null) {
             return null;
         }
-        String name = reader.text(materialNode, materialPath, "name", true);
-        boolean nameOnly = materialNode.size() == 1 && materialNode.has("name");
+        String name = reader.text(materialNode, materialPath, NAME, true);
+        // a material is named (a built-in one) where none of its four properties is given; other keys are kept
+        boolean nameOnly = MATERIAL_PROPERTIES.stream().allMatch(key -> NodeReader.isAbsent(materialNode, key));
         if (nameOnly) {
             if (name.isEmpty()) {
                 return null;
@@ -86,33 +103,33 @@ final class BarReader {
                 return null;
             });
         }
-        double youngs = reader.number(materialNode, materialPath, "youngsModulusGPa", Range.between(1, 1000, "GPa"));
-        double shear = reader.number(materialNode, materialPath, "shearModulusGPa", Range.between(1, 500, "GPa"));
-        double density = reader.number(materialNode, materialPath, "densityKgPerM3", Range.between(500, 25000, "kg/m³"));
-        double yield = reader.number(materialNode, materialPath, "yieldStrengthMPa", Range.between(10, 5000, "MPa"));
+        double youngs = reader.number(materialNode, materialPath, YOUNGS_MODULUS_GPA, Range.between(1, 1000, "GPa"));
+        double shear = reader.number(materialNode, materialPath, SHEAR_MODULUS_GPA, Range.between(1, 500, "GPa"));
+        double density = reader.number(materialNode, materialPath, DENSITY_KG_PER_M3, Range.between(500, 25000, "kg/m³"));
+        double yield = reader.number(materialNode, materialPath, YIELD_STRENGTH_MPA, Range.between(10, 5000, "MPa"));
         return new Material(name, youngs * 1e9, shear * 1e9, density, yield * 1e6);
     }
 
     private static BarSection readSection(JsonNode node, String path, NodeReader reader) {
         String sectionPath = path + ".section";
-        JsonNode sectionNode = reader.object(node, path, "section", true);
+        JsonNode sectionNode = reader.object(node, path, SECTION, true);
         if (sectionNode == null) {
             return null;
         }
-        String shape = reader.text(sectionNode, sectionPath, "shape", true);
+        String shape = reader.text(sectionNode, sectionPath, SHAPE, true);
         int beforeDiameter = reader.problems().size();
-        double diameter = reader.number(sectionNode, sectionPath, "outerDiameterMm", DIAMETER);
+        double diameter = reader.number(sectionNode, sectionPath, OUTER_DIAMETER_MM, DIAMETER);
         switch (shape) {
-            case "solid" -> {
-                if (sectionNode.has("wallMm") && !sectionNode.get("wallMm").isNull()) {
+            case SOLID -> {
+                if (sectionNode.has(WALL_MM) && !sectionNode.get(WALL_MM).isNull()) {
                     reader.problem(sectionPath + ".wallMm", "is given for a solid bar: remove it, or set shape to "
                             + "\"tube\"");
                 }
                 return new SolidSection(diameter * 1e-3);
             }
-            case "tube" -> {
+            case TUBE -> {
                 // the wall is judged against the diameter only where both were accepted
-                double wall = reader.number(sectionNode, sectionPath, "wallMm", Range.above(0, 100, "mm"));
+                double wall = reader.number(sectionNode, sectionPath, WALL_MM, Range.above(0, 100, "mm"));
                 int before = beforeDiameter;
                 if (reader.problems().size() == before && !(wall < diameter / 2)) {
                     reader.problem(sectionPath + ".wallMm", "= " + Range.format(wall) + " mm: must be less than half "
@@ -184,7 +201,7 @@ final class BarReader {
         for (int b = 0; b < bushings.size(); b++) {
             double distance = distanceToPolyline(bushings.get(b), points);
             if (distance > ON_CENTRELINE_TOLERANCE_MM) {
-                reader.problem(path + ".bushingsMm[" + b + "]", String.format(java.util.Locale.ROOT,
+                reader.problem(path + ".bushingsMm[" + b + "]", String.format(Locale.ROOT,
                         "is %.1f mm off the centreline: a bushing must lie on it (within %.0f mm)", distance,
                         ON_CENTRELINE_TOLERANCE_MM));
             }

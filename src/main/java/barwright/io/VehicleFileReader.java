@@ -4,25 +4,10 @@ import barwright.model.Axle;
 import barwright.model.CornerMasses;
 import barwright.model.Tyre;
 import barwright.model.Vehicle;
-import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonLocation;
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.JsonParser;
-import com.fasterxml.jackson.core.StreamReadConstraints;
-import com.fasterxml.jackson.core.exc.StreamConstraintsException;
-import com.fasterxml.jackson.core.json.JsonReadFeature;
-import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.exc.MismatchedInputException;
-import com.fasterxml.jackson.databind.json.JsonMapper;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.Locale;
 
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
 
@@ -35,84 +20,44 @@ public final class VehicleFileReader {
     public static final String FORMAT = "barwright.vehicle";
     /** The newest file version this program reads and writes. */
     public static final int VERSION = 1;
-    /** A vehicle file is a few kilobytes; anything past this is refused before parsing (bytes). */
-    public static final long MAX_BYTES = 4L * 1024 * 1024;
-    /** Nesting deeper than this is refused while parsing; a vehicle file is 4 levels deep. */
-    public static final int MAX_NESTING = 32;
+    /** The largest vehicle file read (bytes), the limit of every file the program reads. */
+    public static final long MAX_BYTES = JsonInput.MAX_BYTES;
     /** The bar stress check travel where the file gives none (mm), files.md. */
     public static final double DEFAULT_DIFFERENTIAL_TRAVEL_MM = 60;
 
-    private static final ObjectMapper MAPPER = JsonMapper.builder(JsonFactory.builder()
-                    .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_NESTING).build())
-                    .build())
-            // NaN and Infinity are read so that they can be refused by key path like any other bad value
-            .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
-            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
-            // one JSON object and nothing after it: "{...} {...}" or "{...} junk" is not a vehicle file
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-            .build();
+    private static final String KIND = "a vehicle file";
 
     private VehicleFileReader() {
     }
 
-    /** @return the shared, configured mapper (also used for writing) */
-    static ObjectMapper mapper() {
-        return MAPPER;
-    }
-
     /** Reads and validates a file; nothing is returned unless the whole file is good. */
-    public static VehicleDocument read(Path file) throws VehicleFileException, IOException {
-        long size;
+    public static VehicleDocument read(Path file) throws VehicleFileException {
         try {
-            size = Files.size(file);
-        } catch (NoSuchFileException missing) {
-            throw new VehicleFileException("file not found: " + file);
-        }
-        if (size > MAX_BYTES) {
-            throw new VehicleFileException(String.format("the file is %.1f MB: a vehicle file must be under %d MB",
-                    size / 1048576.0, MAX_BYTES / 1048576));
-        }
-        try (InputStream in = Files.newInputStream(file)) {
-            return parse(in.readNBytes((int) MAX_BYTES + 1));
+            return parse(JsonInput.readBytes(file, KIND));
+        } catch (JsonInputException refused) {
+            throw new VehicleFileException(refused.problems());
         }
     }
 
-    /** Parses and validates the bytes of a vehicle file (UTF-8). */
+    /** Parses and validates the bytes of a vehicle file (UTF-8, with or without a byte-order mark). */
     public static VehicleDocument parse(byte[] content) throws VehicleFileException {
-        if (content.length > MAX_BYTES) {
-            throw new VehicleFileException("the file is larger than " + MAX_BYTES / 1048576 + " MB");
-        }
-        String text = new String(content, StandardCharsets.UTF_8);
-        if (text.isBlank()) {
-            throw new VehicleFileException("the file is empty: a vehicle file is a JSON object");
-        }
         JsonNode tree;
         try {
-            tree = MAPPER.readTree(text);
-        } catch (StreamConstraintsException tooDeep) {
-            throw new VehicleFileException("the file is nested too deeply to be a vehicle file (over "
-                    + MAX_NESTING + " levels)");
-        } catch (MismatchedInputException trailing) {
-            // with FAIL_ON_TRAILING_TOKENS, readTree reports text after the object this way
-            throw new VehicleFileException("not valid JSON" + at(trailing.getLocation())
-                    + ": there is more text after the end of the object; a vehicle file holds one JSON object");
-        } catch (JsonProcessingException bad) {
-            throw new VehicleFileException("not valid JSON" + at(bad.getLocation()) + ": " + bad.getOriginalMessage());
-        } catch (IOException bad) {
-            throw new VehicleFileException("not valid JSON: " + bad.getMessage());
+            if (JsonInput.decode(content).isBlank()) {
+                throw new VehicleFileException("the file is empty: a vehicle file is a JSON object");
+            }
+            tree = JsonInput.parse(content, KIND);
+        } catch (JsonInputException refused) {
+            throw new VehicleFileException(refused.problems());
         }
         return fromTree(tree);
-    }
-
-    private static String at(JsonLocation where) {
-        return where == null ? "" : " at line " + where.getLineNr() + ", column " + where.getColumnNr();
     }
 
     /** Validates a tree (for example the open document after an edit) and builds the car from it. */
     public static VehicleDocument fromTree(JsonNode tree) throws VehicleFileException {
         if (tree == null || !tree.isObject()) {
             throw new VehicleFileException("the file must hold one JSON object {...}, not "
-                    + (tree == null ? "nothing" : tree.getNodeType().toString().toLowerCase(java.util.Locale.ROOT)));
+                    + (tree == null ? "nothing" : tree.getNodeType().toString().toLowerCase(Locale.ROOT)));
         }
         NodeReader reader = new NodeReader();
         checkHeader(tree, reader);
@@ -133,8 +78,8 @@ public final class VehicleFileReader {
             reader.problem("format", "= \"" + format + "\": must be \"" + FORMAT + "\"");
         }
         JsonNode version = tree.get("version");
-        if (version != null && version.isNumber() && version.doubleValue() > VERSION
-                && version.doubleValue() == Math.rint(version.doubleValue())) {
+        if (version != null && version.isNumber() && Double.isFinite(version.doubleValue())
+                && version.doubleValue() > VERSION && version.doubleValue() == Math.rint(version.doubleValue())) {
             reader.problem("version", "= " + version.asText() + ": this file was written by a newer Barwright "
                     + "(file version " + version.asText() + "); this program reads versions up to " + VERSION
                     + ". Update Barwright to open it.");

@@ -4,23 +4,16 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 
-import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.ByteBuffer;
-import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
 
-/**
- * Saves a vehicle tree. The text goes to a temporary file beside the target, is flushed to disk, then moved
- * over the target in one step, so a failed save never damages the file that was there.
- */
+/** Saves a vehicle tree as JSON text, through the atomic writer, in a form the reader accepts again. */
 public final class VehicleFileWriter {
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
     private VehicleFileWriter() {
     }
 
@@ -30,38 +23,38 @@ public final class VehicleFileWriter {
                 .withObjectIndenter(new DefaultIndenter("  ", "\n"))
                 .withArrayIndenter(new DefaultIndenter("  ", "\n"));
         try {
-            return VehicleFileReader.mapper().writer(printer).writeValueAsString(tree) + "\n";
+            return MAPPER.writer(printer).writeValueAsString(tree) + "\n";
         } catch (JsonProcessingException impossible) {
             throw new UncheckedIOException(impossible); // a tree of plain JSON nodes always serialises
         }
     }
 
-    /** Writes the document atomically; the old file stays whole if anything fails. */
-    public static void save(VehicleDocument document, Path target) throws IOException {
-        writeAtomically(target, toJson(document.tree()));
+    /**
+     * Writes the document atomically ({@link AtomicFileWriter}); the old file stays whole if anything fails.
+     * The text is pretty-printed where that stays within the reader's {@link JsonInput#MAX_BYTES}, else
+     * written compact, so that every file saved opens again; a tree too large even compact is refused.
+     */
+    public static void save(VehicleDocument document, Path target) throws FileWriteException {
+        save(document.tree(), target);
     }
 
-    /** Writes text to a file atomically (temporary file, flush, move into place). */
-    public static void writeAtomically(Path target, String text) throws IOException {
-        Path absolute = target.toAbsolutePath();
-        Path directory = absolute.getParent();
-        Path temporary = Files.createTempFile(directory, "." + absolute.getFileName(), ".tmp");
-        try {
-            try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.WRITE,
-                    StandardOpenOption.TRUNCATE_EXISTING)) {
-                ByteBuffer bytes = ByteBuffer.wrap(text.getBytes(StandardCharsets.UTF_8));
-                while (bytes.hasRemaining()) {
-                    channel.write(bytes);
-                }
-                channel.force(true);
-            }
-            try {
-                Files.move(temporary, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException noAtomicMove) {
-                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temporary);
+    /** Writes a vehicle tree (the open document's, validated by the caller) as {@link #save(VehicleDocument, Path)}. */
+    public static void save(JsonNode tree, Path target) throws FileWriteException {
+        AtomicFileWriter.writeBytes(target, readableBytes(tree, target));
+    }
+
+    /** @return the tree as UTF-8 text the reader accepts again: pretty where that fits, else compact */
+    static byte[] readableBytes(JsonNode tree, Path target) throws FileWriteException {
+        byte[] pretty = toJson(tree).getBytes(StandardCharsets.UTF_8);
+        if (pretty.length <= JsonInput.MAX_BYTES) {
+            return pretty;
         }
+        byte[] compact = (tree.toString() + "\n").getBytes(StandardCharsets.UTF_8);
+        if (compact.length <= JsonInput.MAX_BYTES) {
+            return compact;
+        }
+        throw new FileWriteException(target, String.format("the vehicle file would be %.1f MB, over the %d MB "
+                + "a vehicle file may have; it is not written", compact.length / 1048576.0,
+                JsonInput.MAX_BYTES / 1048576));
     }
 }

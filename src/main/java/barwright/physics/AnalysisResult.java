@@ -38,6 +38,12 @@ public record AnalysisResult(Vehicle vehicle, MassProperties masses, AxleResult 
         return direction == TurnDirection.LEFT ? leftTurn : rightTurn;
     }
 
+    /** @return the linear stage of this analysis: roll stiffnesses, body roll and load transfer per a_y */
+    public RollBalance rollBalance() {
+        return new RollBalance(front.stiffness().rollStiffness(), rear.stiffness().rollStiffness(), roll,
+                front.loadTransfer(), rear.loadTransfer());
+    }
+
     /** @return roll gradient: body roll per unit a_y (rad s^2/m) */
     public double rollGradient() {
         return roll.rollPerAccel();

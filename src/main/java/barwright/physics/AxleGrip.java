@@ -1,7 +1,7 @@
 package barwright.physics;
 
+import barwright.solver.RootFinder;
 import org.apache.commons.math3.analysis.UnivariateFunction;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -13,7 +13,9 @@ import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
  * required force. Forces in N, slip angles in rad.
  */
 public final class AxleGrip {
-    private static final double SLIP_ACCURACY = 1e-10;
+    /** The common slip angle to 1e-10 rad (about 6e-9 deg), within 200 evaluations. */
+    private static final RootFinder SLIP_ANGLE = RootFinder.of("the common slip angle of an axle's tyres", 1e-10,
+            200);
     private final TyreModel tyre;
 
     public AxleGrip(TyreModel tyre) {
@@ -48,10 +50,9 @@ public final class AxleGrip {
         TyreModel.LoadedCurve inside = tyre.atLoad(insideLoad);
         UnivariateFunction surplus = slip -> outside.lateralForce(slip) + inside.lateralForce(slip) - requiredForce;
         double firstPeak = Math.min(outside.peakSlipAngle(), inside.peakSlipAngle());
-        BrentSolver solver = new BrentSolver(SLIP_ACCURACY);
         if (surplus.value(firstPeak) >= 0) {
             // both curves still rise up to the first tyre's peak: the root is unique there
-            return solver.solve(200, surplus, 0, firstPeak);
+            return SLIP_ANGLE.solve(surplus::value, 0, firstPeak);
         }
         double lastPeak = Math.max(outside.peakSlipAngle(), inside.peakSlipAngle());
         if (lastPeak <= firstPeak) {
@@ -64,6 +65,6 @@ public final class AxleGrip {
         if (surplus.value(top) < 0) {
             return Double.NaN;
         }
-        return solver.solve(200, surplus, firstPeak, top);
+        return SLIP_ANGLE.solve(surplus::value, firstPeak, top);
     }
 }

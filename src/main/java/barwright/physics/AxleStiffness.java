@@ -1,7 +1,10 @@
 package barwright.physics;
 
 import barwright.model.Axle;
+import barwright.model.AxlePosition;
 import barwright.physics.bar.BarResult;
+
+import static barwright.units.Constants.STANDARD_GRAVITY;
 
 /**
  * Roll stiffness and ride rates of one axle (model.md 3). Roll stiffnesses in N m/rad, rates in N/m.
@@ -46,8 +49,8 @@ public record AxleStiffness(double wheelRate, double springRollStiffness, double
      * @return the corner sprung mass, half of (static axle load / g - unsprung axle mass) (kg), model.md 3
      * @throws ImpossibleVehicleException where the unsprung mass is not less than the axle's static mass
      */
-    public static double cornerSprungMass(Axle axle, barwright.model.AxlePosition position, double axleLoad) {
-        double gravity = barwright.units.Constants.STANDARD_GRAVITY;
+    public static double cornerSprungMass(Axle axle, AxlePosition position, double axleLoad) {
+        double gravity = STANDARD_GRAVITY;
         double cornerSprungMass = (axleLoad / gravity - axle.unsprungMass()) / 2;
         if (!(cornerSprungMass > 0)) {
             throw new ImpossibleVehicleException(String.format(

@@ -1,5 +1,7 @@
 package barwright.physics;
 
+import static barwright.units.Constants.STANDARD_GRAVITY;
+
 /** Which axle reaches its grip limit first as a_y rises (model.md 8). */
 public enum Balance {
     UNDERSTEER("understeer"),
@@ -7,7 +9,7 @@ public enum Balance {
     NEUTRAL("neutral");
 
     /** Axle limits closer than this are called neutral (m/s^2): 0.01 g, model.md 8. */
-    public static final double NEUTRAL_BAND = 0.01 * barwright.units.Constants.STANDARD_GRAVITY;
+    public static final double NEUTRAL_BAND = 0.01 * STANDARD_GRAVITY;
 
     private final String key;
 

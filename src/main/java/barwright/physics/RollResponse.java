@@ -60,6 +60,26 @@ public record RollResponse(double frontRollPerAccel, double rearRollPerAccel, do
         return new RollResponse(front, rear, mean);
     }
 
+    /**
+     * The chassis stiffness above which the flexible body of model.md 6 has a stable roll position: there the
+     * two-end equations' matrix is positive definite. With a = K_f - m_sf g h' and b = K_r - m_sr g h' its
+     * determinant is a b + K_c (a + b), so where one end cannot stand alone (a or b not positive) the body needs
+     * K_c > -a b / (a + b); where both can it is stable at any K_c.
+     *
+     * @return the limit (N m/rad): 0 where each end stands alone, infinite where no chassis helps (a + b not
+     *     positive: the total roll stiffness does not exceed m_s g h')
+     */
+    public static double chassisStabilityLimit(MassProperties masses, double frontRollStiffness,
+                                               double rearRollStiffness) {
+        double gravityArm = STANDARD_GRAVITY * masses.rollArm();
+        double front = frontRollStiffness - masses.frontSprungMass() * gravityArm;
+        double rear = rearRollStiffness - masses.rearSprungMass() * gravityArm;
+        if (!(front + rear > 0)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return front > 0 && rear > 0 ? 0 : -front * rear / (front + rear);
+    }
+
     /** Refuses a car whose total roll stiffness does not exceed m_s g h' (model.md 5). */
     static void requireStable(MassProperties masses, double totalRollStiffness) {
         double needed = masses.gravityRollMoment();

@@ -1,8 +1,9 @@
 package barwright.physics;
 
 import barwright.model.AxlePosition;
-import org.apache.commons.math3.analysis.UnivariateFunction;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import barwright.solver.RootFinder;
+
+import java.util.function.DoubleUnaryOperator;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -15,7 +16,8 @@ public final class TurnAnalysis {
     static final double SEARCH_CEILING = 5 * STANDARD_GRAVITY;
     /** Step of the scan for the first crossing of required force and capacity (m/s^2). */
     private static final double SCAN_STEP = 0.1 * STANDARD_GRAVITY;
-    private static final double LIMIT_ACCURACY = 1e-9;
+    /** An axle's grip limit to 1e-9 m/s^2, within 200 evaluations. */
+    private static final RootFinder GRIP_LIMIT = RootFinder.of("an axle's grip limit", 1e-9, 200);
 
     private TurnAnalysis() {
     }
@@ -46,12 +48,12 @@ public final class TurnAnalysis {
      */
     static double axleLimit(SteadyCornering cornering, AxlePosition axle, double massShare, AxleGrip grip,
                             double ceiling) {
-        UnivariateFunction surplus = accel -> capacityAt(cornering, axle, grip, accel) - massShare * accel;
+        DoubleUnaryOperator surplus = accel -> capacityAt(cornering, axle, grip, accel) - massShare * accel;
         double low = 0;
         while (low < ceiling) {
             double high = Math.min(ceiling, low + SCAN_STEP);
-            if (surplus.value(high) <= 0) {
-                return new BrentSolver(LIMIT_ACCURACY).solve(200, surplus, low, high);
+            if (surplus.applyAsDouble(high) <= 0) {
+                return GRIP_LIMIT.solve(surplus, low, high);
             }
             low = high;
         }

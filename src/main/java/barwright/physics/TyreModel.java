@@ -1,7 +1,7 @@
 package barwright.physics;
 
 import barwright.model.Tyre;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import barwright.solver.RootFinder;
 
 /**
  * One tyre's lateral force (model.md 8): load-sensitive friction, load-dependent cornering stiffness and the
@@ -10,6 +10,10 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
 public final class TyreModel {
     /** Slip angles are never sought beyond this (rad, about 29 deg): far past any real tyre's peak. */
     static final double MAX_SLIP = 0.5;
+
+    /** x* to 1e-14, or a relative 1e-12, within 200 evaluations. */
+    private static final RootFinder PEAK_ARGUMENT = new RootFinder("the slip at the tyre curve's peak", 1e-14,
+            1e-12, RootFinder.DEFAULT_FUNCTION_ACCURACY, 200);
 
     private final Tyre tyre;
     private final double stiffnessNormaliser;
@@ -37,8 +41,7 @@ public final class TyreModel {
                 return Double.POSITIVE_INFINITY;
             }
         }
-        return new BrentSolver(1e-12, 1e-14).solve(200,
-                x -> x - curvature * (x - Math.atan(x)) - tangent, 0, upper);
+        return PEAK_ARGUMENT.solve(x -> x - curvature * (x - Math.atan(x)) - tangent, 0, upper);
     }
 
     /** @return mu(F_z) = mu_0 (1 + s (F_z/F_z0 - 1)), never below zero */

@@ -7,6 +7,7 @@ import barwright.physics.bar.BarResult;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
 import static barwright.units.Constants.STANDARD_GRAVITY;
 
@@ -44,7 +45,7 @@ public final class Warnings {
         return warnings;
     }
 
-    private static java.util.Optional<Warning> liftWarning(AnalysisResult result, AxlePosition axle) {
+    private static Optional<Warning> liftWarning(AnalysisResult result, AxlePosition axle) {
         List<String> cases = new ArrayList<>();
         for (TurnDirection direction : TurnDirection.values()) {
             TurnResult turn = result.turn(direction);
@@ -55,14 +56,14 @@ public final class Warnings {
             }
         }
         if (cases.isEmpty()) {
-            return java.util.Optional.empty();
+            return Optional.empty();
         }
         String code = axle.key().toUpperCase(Locale.ROOT) + "_INSIDE_LIFT_BEFORE_LIMIT";
-        return java.util.Optional.of(new Warning(code, "The inside " + axle.key()
+        return Optional.of(new Warning(code, "The inside " + axle.key()
                 + " wheel lifts before the grip limit, " + String.join(" and ", cases) + "."));
     }
 
-    private static java.util.Optional<Warning> rolloverWarning(AnalysisResult result) {
+    private static Optional<Warning> rolloverWarning(AnalysisResult result) {
         List<String> cases = new ArrayList<>();
         for (TurnDirection direction : TurnDirection.values()) {
             TurnResult turn = result.turn(direction);
@@ -72,9 +73,9 @@ public final class Warnings {
             }
         }
         if (cases.isEmpty()) {
-            return java.util.Optional.empty();
+            return Optional.empty();
         }
-        return java.util.Optional.of(new Warning("ROLLOVER_BEFORE_LIMIT",
+        return Optional.of(new Warning("ROLLOVER_BEFORE_LIMIT",
                 "Both inside wheels leave the ground before the tyres reach their grip: the car would roll over "
                         + String.join(" and ", cases) + "."));
     }

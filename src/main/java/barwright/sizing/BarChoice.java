@@ -1,5 +1,6 @@
 package barwright.sizing;
 
+import barwright.io.BarSetting;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
@@ -15,6 +16,11 @@ import barwright.sizing.catalogue.StockSize;
  * @param selectedArm the 0-based arm hole
  */
 public record BarChoice(AxlePosition axle, Material material, StockSize size, int selectedArm) {
+    /** @return what goes into the vehicle file for this bar */
+    public BarSetting setting() {
+        return new BarSetting(axle, material, size.section(), selectedArm);
+    }
+
     /** @return the vehicle's bar with this material, section and hole */
     public AntiRollBar applyTo(AntiRollBar bar) {
         return bar.withMaterial(material).withSection(size.section()).withSelectedArm(selectedArm);

@@ -5,6 +5,7 @@ import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.Vehicle;
 import barwright.physics.ImpossibleVehicleException;
+import barwright.physics.RollBalance;
 import barwright.sizing.catalogue.StockSize;
 import barwright.solver.Progress;
 
@@ -13,6 +14,7 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.stream.IntStream;
@@ -126,7 +128,7 @@ public final class BarSearch {
                     request.choices().get(AxlePosition.REAR));
             long pairCount = (long) frontChoices.size() * rearChoices.size();
             if (pairCount > MAX_PAIRS) {
-                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
+                throw new IllegalArgumentException(String.format(Locale.ROOT,
                         "%d front x %d rear bars make %d pairs, more than the %d a search tries: give fewer "
                                 + "materials, sizes or holes", frontChoices.size(), rearChoices.size(), pairCount,
                         MAX_PAIRS));

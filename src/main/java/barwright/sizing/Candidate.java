@@ -1,5 +1,6 @@
 package barwright.sizing;
 
+import barwright.io.BarSetting;
 import barwright.model.AxlePosition;
 
 import java.util.List;
@@ -20,6 +21,11 @@ public record Candidate(List<BarChoice> bars, SetupFigures figures, double miss)
     /** @return the choice for that axle, where it was sized */
     public Optional<BarChoice> bar(AxlePosition axle) {
         return bars.stream().filter(choice -> choice.axle() == axle).findFirst();
+    }
+
+    /** @return what goes into the vehicle file for these bars */
+    public List<BarSetting> settings() {
+        return bars.stream().map(BarChoice::setting).toList();
     }
 
     /** @return the mass of the sized bars (kg) */

@@ -33,16 +33,4 @@ public record Constraints(double minSafetyFactor, Set<AxlePosition> mustNotLiftB
     public static Constraints safetyFactor(double minSafetyFactor) {
         return new Constraints(minSafetyFactor, Set.of(), null, null);
     }
-
-    public Constraints withNoLift(Set<AxlePosition> axles) {
-        return new Constraints(minSafetyFactor, axles, maxBarMass, maxOuterDiameter);
-    }
-
-    public Constraints withMaxBarMass(Double mass) {
-        return new Constraints(minSafetyFactor, mustNotLiftBeforeLimit, mass, maxOuterDiameter);
-    }
-
-    public Constraints withMaxOuterDiameter(Double diameter) {
-        return new Constraints(minSafetyFactor, mustNotLiftBeforeLimit, maxBarMass, diameter);
-    }
 }

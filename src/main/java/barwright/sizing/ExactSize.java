@@ -7,27 +7,29 @@ import barwright.model.Material;
 import barwright.model.SolidSection;
 import barwright.model.TubeSection;
 import barwright.physics.ImpossibleVehicleException;
-import org.apache.commons.math3.analysis.UnivariateFunction;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import barwright.physics.RollBalance;
+import barwright.solver.RootFinder;
 
 import java.util.function.DoubleFunction;
+import java.util.function.DoubleUnaryOperator;
 
 /**
  * The exact solid diameter, or the exact wall of a tube of given outside diameter, at which one axle's bar
  * meets a target: the front share where one is aimed at, else the roll gradient. The figure is scanned over
  * the whole range first (the car may have no stable roll with a thin bar), then the first bracket is closed
- * with Brent's method (Apache Commons Math {@link BrentSolver}).
+ * with Brent's method ({@link RootFinder}).
  */
 public final class ExactSize {
     /** Diameters tried: the range a vehicle file allows, 3 to 200 mm (m). */
     static final double MIN_DIAMETER = 3e-3;
     static final double MAX_DIAMETER = 200e-3;
     private static final int SCAN_POINTS = 160;
-    /** Accuracy in the dimension (m): 1e-12 m moves a share by about 1e-11, far below the 1e-6 asked. */
-    private static final double ABSOLUTE_ACCURACY = 1e-12;
-    private static final double RELATIVE_ACCURACY = 1e-14;
-    private static final double FUNCTION_ACCURACY = 1e-13;
-    private static final int MAX_EVALUATIONS = 500;
+    /**
+     * Accuracy in the logarithm of the dimension: 1e-12 moves a share by about 1e-11, far below the 1e-6 asked;
+     * a figure within 1e-13 of its target is met; at most 500 evaluations.
+     */
+    private static final RootFinder EXACT_SIZE = new RootFinder("the bar size that meets the target", 1e-12, 1e-14,
+            1e-13, 500);
 
     private ExactSize() {
     }
@@ -63,7 +65,7 @@ public final class ExactSize {
                 : ExactSolution.TargetFigure.ROLL_GRADIENT;
         double target = share ? targets.shareFor(evaluator.masses().frontMassFraction()) : targets.rollGradient();
         // the figure minus its target, against the logarithm of the dimension; NaN where the body is unstable
-        UnivariateFunction missOf = logDimension -> {
+        DoubleUnaryOperator missOf = logDimension -> {
             AxleState state = evaluator.axle(axle, base.withSection(section.apply(Math.exp(logDimension))));
             try {
                 RollBalance balance = axle == AxlePosition.FRONT ? evaluator.balance(state, other)
@@ -79,7 +81,7 @@ public final class ExactSize {
         double previousY = Double.NaN;
         for (int i = 0; i < SCAN_POINTS; i++) {
             double x = logLow + (logHigh - logLow) * i / (SCAN_POINTS - 1);
-            double y = missOf.value(x);
+            double y = missOf.applyAsDouble(x);
             if (Double.isNaN(y)) {
                 previousX = Double.NaN;
                 continue;
@@ -90,9 +92,9 @@ public final class ExactSize {
                 return new ExactSolution(Math.exp(x), figure, target, target, lowest, highest);
             }
             if (!Double.isNaN(previousX) && Math.signum(y) != Math.signum(previousY)) {
-                double root = new BrentSolver(RELATIVE_ACCURACY, ABSOLUTE_ACCURACY, FUNCTION_ACCURACY)
-                        .solve(MAX_EVALUATIONS, missOf, previousX, x);
-                return new ExactSolution(Math.exp(root), figure, target, missOf.value(root) + target, lowest, highest);
+                double root = EXACT_SIZE.solve(missOf, previousX, x);
+                return new ExactSolution(Math.exp(root), figure, target, missOf.applyAsDouble(root) + target, lowest,
+                        highest);
             }
             previousX = x;
             previousY = y;

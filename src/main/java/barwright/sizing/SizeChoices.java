@@ -4,6 +4,7 @@ import barwright.model.Material;
 import barwright.sizing.catalogue.StockSize;
 
 import java.util.List;
+import java.util.stream.IntStream;
 
 /**
  * What a search may pick for one axle's bar.
@@ -28,7 +29,7 @@ public record SizeChoices(List<Material> materials, List<StockSize> sizes, List<
     /** @return the holes to try on a bar with this many */
     public List<Integer> holesOf(int holeCount) {
         if (holes.isEmpty()) {
-            return java.util.stream.IntStream.range(0, holeCount).boxed().toList();
+            return IntStream.range(0, holeCount).boxed().toList();
         }
         for (int hole : holes) {
             if (hole < 0 || hole >= holeCount) {

@@ -1,5 +1,6 @@
 package barwright.sizing;
 
+import barwright.io.VehicleEdits;
 import barwright.io.VehicleDocument;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
@@ -51,7 +52,7 @@ class BarSearchTest {
         SizingResult result = BarSearch.run(document.vehicle(), request, Progress.NONE);
         assertThat(result.candidates()).isNotEmpty();
         for (Candidate candidate : result.candidates()) {
-            AnalysisResult analysed = VehicleAnalysis.analyse(VehicleEdits.withCandidate(document, candidate).vehicle());
+            AnalysisResult analysed = VehicleAnalysis.analyse(VehicleEdits.withBars(document, candidate.settings()).vehicle());
             SetupFigures listed = candidate.figures();
             assertThat(listed.frontLoadTransferShare()).isCloseTo(analysed.frontLoadTransferShare(),
                     within(SAME_ARITHMETIC));
@@ -92,7 +93,7 @@ class BarSearchTest {
                     BarChoice choice = new BarChoice(AxlePosition.FRONT, MATERIALS.get(m), sizes.get(s), hole);
                     AnalysisResult analysed;
                     try {
-                        analysed = VehicleAnalysis.analyse(VehicleEdits.withBar(document, choice).vehicle());
+                        analysed = VehicleAnalysis.analyse(VehicleEdits.withBars(document, List.of(choice.setting())).vehicle());
                     } catch (ImpossibleVehicleException unstable) {
                         continue;
                     }
@@ -142,7 +143,7 @@ class BarSearchTest {
                                 new BarChoice(AxlePosition.REAR, MaterialLibrary.SPRING_STEEL, rear, rearHole)),
                                 new SetupEvaluator(document.vehicle()).figures(), 0);
                         AnalysisResult analysed = VehicleAnalysis.analyse(
-                                VehicleEdits.withCandidate(document, pair).vehicle());
+                                VehicleEdits.withBars(document, pair.settings()).vehicle());
                         if (analysed.front().bar().safetyFactor() < 1.5 || analysed.rear().bar().safetyFactor() < 1.5) {
                             continue;
                         }

@@ -59,8 +59,10 @@ public final class ChassisText {
         String rule = " Sizing the chassis against the suspension's roll stiffness so that suspension changes keep "
                 + "their effect is a rule discussed by Deakin et al., SAE 2000-01-3554.";
         if (study.stiffnessForTarget() == null) {
-            return "No chassis stiffness in the range searched lets the bar change (" + study.barChange() + ") deliver "
-                    + wholePercent(ChassisStudy.DELIVERED_TARGET) + " of its rigid-chassis effect." + rule;
+            // the study's notes say why: no stiffness in the range searched reaches it, or every stable one does
+            return "No single chassis stiffness is stated for the bar change (" + study.barChange() + ") to deliver "
+                    + wholePercent(ChassisStudy.DELIVERED_TARGET) + " of its rigid-chassis effect: see the notes."
+                    + rule;
         }
         double target = study.stiffnessForTarget();
         return String.format(Locale.ROOT, "For a bar change (%s) to deliver %s of its rigid-chassis effect on the front share, "

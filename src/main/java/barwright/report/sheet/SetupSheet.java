@@ -1,5 +1,6 @@
 package barwright.report.sheet;
 
+import barwright.io.AtomicFileWriter;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
@@ -22,9 +23,7 @@ import org.apache.pdfbox.pdmodel.common.PDRectangle;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.LocalDate;
 import java.util.List;
 import java.util.Locale;
@@ -83,17 +82,9 @@ public final class SetupSheet {
         }
     }
 
-    /** Writes the sheet to a file atomically: a temporary file beside it, then moved into place. */
+    /** Writes the sheet to a file atomically ({@link AtomicFileWriter}). */
     public static void save(SheetContent content, Path target) throws IOException {
-        byte[] pdf = toPdf(content);
-        Path absolute = target.toAbsolutePath();
-        Path temporary = Files.createTempFile(absolute.getParent(), "." + absolute.getFileName(), ".tmp");
-        try {
-            Files.write(temporary, pdf);
-            Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-        } finally {
-            Files.deleteIfExists(temporary);
-        }
+        AtomicFileWriter.writeBytes(target, toPdf(content));
     }
 
     private void write() throws IOException {

@@ -3,7 +3,7 @@ package barwright.report.sizing;
 import barwright.report.ReportJson;
 import barwright.sizing.BarChoice;
 import barwright.sizing.BarFigures;
-import barwright.sizing.BarNodes;
+import barwright.io.BarNodes;
 import barwright.sizing.Candidate;
 import barwright.sizing.ExactSolution;
 import barwright.sizing.Rejection;
@@ -15,6 +15,9 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.Map;
 
+import static barwright.io.VehicleKeys.MATERIAL;
+import static barwright.io.VehicleKeys.SECTION;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
 import static barwright.units.Conversions.toDegreesPerG;
 import static barwright.units.Conversions.toMillimetres;
 
@@ -89,9 +92,9 @@ public final class SizingJson {
 
     private static void putChoice(ObjectNode node, BarChoice choice, BarFigures bar) {
         node.put("sizeLabel", choice.size().label());
-        node.set("material", BarNodes.material(choice.material()));
-        node.set("section", BarNodes.section(choice.size().section()));
-        node.put("selectedArm", choice.selectedArm());
+        node.set(MATERIAL, BarNodes.material(choice.material()));
+        node.set(SECTION, BarNodes.section(choice.size().section()));
+        node.put(SELECTED_ARM, choice.selectedArm());
         Json.putBar(node, bar);
     }
 }

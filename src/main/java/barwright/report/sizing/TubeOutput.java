@@ -1,7 +1,7 @@
 package barwright.report.sizing;
 
 import barwright.physics.bar.BarResult;
-import barwright.sizing.BarNodes;
+import barwright.io.BarNodes;
 import barwright.sizing.TubeEquivalents;
 import barwright.sizing.TubeMatch;
 import barwright.units.Quantity;
@@ -12,6 +12,9 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.Locale;
 
+import static barwright.io.VehicleKeys.MATERIAL;
+import static barwright.io.VehicleKeys.SECTION;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
 import static barwright.units.Conversions.perMillimetre;
 import static barwright.units.Conversions.toMegapascals;
 import static barwright.units.Conversions.toPercent;
@@ -30,9 +33,9 @@ public final class TubeOutput {
         root.put("version", VERSION);
         BarResult solid = comparison.solid();
         ObjectNode solidNode = root.putObject("solid");
-        solidNode.set("material", BarNodes.material(comparison.solidBar().material()));
-        solidNode.set("section", BarNodes.section(comparison.solidBar().section()));
-        solidNode.put("selectedArm", comparison.solidBar().selectedArm());
+        solidNode.set(MATERIAL, BarNodes.material(comparison.solidBar().material()));
+        solidNode.set(SECTION, BarNodes.section(comparison.solidBar().section()));
+        solidNode.put(SELECTED_ARM, comparison.solidBar().selectedArm());
         solidNode.put("barLinkRateNPerMm", perMillimetre(solid.linkRate()));
         solidNode.put("barMassKg", solid.mass());
         solidNode.put("barMaxVonMisesStressMPa", toMegapascals(solid.maxVonMisesStress()));
@@ -41,8 +44,8 @@ public final class TubeOutput {
         for (TubeMatch match : comparison.matches()) {
             ObjectNode node = tubes.addObject();
             node.put("sizeLabel", match.size().label());
-            node.set("material", BarNodes.material(match.material()));
-            node.set("section", BarNodes.section(match.size().section()));
+            node.set(MATERIAL, BarNodes.material(match.material()));
+            node.set(SECTION, BarNodes.section(match.size().section()));
             node.put("barLinkRateNPerMm", perMillimetre(match.linkRate()));
             node.put("rateDifference", match.rateDifference());
             node.put("barMassKg", match.mass());

@@ -1,20 +1,23 @@
 package barwright.sizing.catalogue;
 
+import barwright.io.JsonInput;
+import barwright.io.JsonInputException;
 import barwright.io.Problem;
 import barwright.io.Range;
 import barwright.model.BarSection;
 import barwright.model.SolidSection;
 import barwright.model.TubeSection;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 
-import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+
+import static barwright.io.VehicleKeys.OUTER_DIAMETER_MM;
+import static barwright.io.VehicleKeys.SHAPE;
+import static barwright.io.VehicleKeys.SOLID;
+import static barwright.io.VehicleKeys.TUBE;
+import static barwright.io.VehicleKeys.WALL_MM;
 
 /**
  * Reads a catalogue file (docs/sizing.md gives the format): refused whole with every problem and its key
@@ -26,20 +29,17 @@ public final class CatalogueReader {
     /** The same diameter range as a bar in the vehicle file (mm). */
     static final Range DIAMETER = Range.between(3, 200, "mm");
     static final int MAX_SIZES = 5000;
-    private static final long MAX_BYTES = 4L * 1024 * 1024;
-    private static final ObjectMapper MAPPER = new ObjectMapper();
+    private static final String KIND = "a catalogue file";
 
     private CatalogueReader() {
     }
 
-    public static Catalogue read(Path file) throws CatalogueFileException, IOException {
+    /** Reads a catalogue file within the limits every file the program reads keeps ({@link JsonInput}). */
+    public static Catalogue read(Path file) throws CatalogueFileException {
         try {
-            if (Files.size(file) > MAX_BYTES) {
-                throw refused("", "the file is larger than 4 MB: a catalogue file is a short list of sizes");
-            }
-            return parse(file.toString(), Files.readAllBytes(file));
-        } catch (NoSuchFileException missing) {
-            throw refused("", "catalogue file not found: " + file);
+            return parse(file.toString(), JsonInput.readBytes(file, KIND));
+        } catch (JsonInputException refused) {
+            throw new CatalogueFileException(refused.problems());
         }
     }
 
@@ -49,12 +49,9 @@ public final class CatalogueReader {
     public static Catalogue parse(String id, byte[] content) throws CatalogueFileException {
         JsonNode tree;
         try {
-            tree = MAPPER.readTree(content);
-        } catch (JsonProcessingException bad) {
-            throw refused("", "not valid JSON at line " + bad.getLocation().getLineNr() + ", column "
-                    + bad.getLocation().getColumnNr() + ": " + bad.getOriginalMessage());
-        } catch (IOException bad) {
-            throw refused("", "not valid JSON: " + bad.getMessage());
+            tree = JsonInput.parse(content, KIND);
+        } catch (JsonInputException refused) {
+            throw new CatalogueFileException(refused.problems());
         }
         if (tree == null || !tree.isObject()) {
             throw refused("", "a catalogue file must hold one JSON object {...}");
@@ -94,12 +91,12 @@ public final class CatalogueReader {
             return null;
         }
         int before = problems.size();
-        String shape = node.path("shape").asText("");
-        double diameter = number(node, path, "outerDiameterMm", DIAMETER, problems);
+        String shape = node.path(SHAPE).asText("");
+        double diameter = number(node, path, OUTER_DIAMETER_MM, DIAMETER, problems);
         BarSection section = null;
         switch (shape) {
-            case "solid" -> {
-                if (node.has("wallMm")) {
+            case SOLID -> {
+                if (node.has(WALL_MM)) {
                     problems.add(new Problem(path + ".wallMm", "is given for a solid bar: remove it, or set shape "
                             + "to \"tube\""));
                 }
@@ -107,8 +104,8 @@ public final class CatalogueReader {
                     section = new SolidSection(diameter * 1e-3);
                 }
             }
-            case "tube" -> {
-                double wall = number(node, path, "wallMm", Range.above(0, 100, "mm"), problems);
+            case TUBE -> {
+                double wall = number(node, path, WALL_MM, Range.above(0, 100, "mm"), problems);
                 if (problems.size() == before && !(wall < diameter / 2)) {
                     problems.add(new Problem(path + ".wallMm", "= " + Range.format(wall)
                             + " mm: must be less than half of outerDiameterMm (" + Range.format(diameter / 2) + " mm)"));
@@ -117,7 +114,7 @@ public final class CatalogueReader {
                     section = new TubeSection(diameter * 1e-3, wall * 1e-3);
                 }
             }
-            default -> problems.add(new Problem(path + ".shape", "= " + shorten(node.path("shape"))
+            default -> problems.add(new Problem(path + ".shape", "= " + shorten(node.path(SHAPE))
                     + ": must be \"solid\" or \"tube\""));
         }
         if (section == null) {

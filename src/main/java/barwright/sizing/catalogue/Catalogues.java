@@ -1,5 +1,7 @@
 package barwright.sizing.catalogue;
 
+import barwright.io.Problem;
+
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -52,14 +54,14 @@ public final class Catalogues {
      * @param nameOrPath a built-in name, or the path of a catalogue file
      * @throws CatalogueFileException where it is neither, or the file is refused
      */
-    public static Catalogue find(String nameOrPath) throws CatalogueFileException, IOException {
+    public static Catalogue find(String nameOrPath) throws CatalogueFileException {
         Optional<Catalogue> builtIn = builtIn(nameOrPath);
         if (builtIn.isPresent()) {
             return builtIn.get();
         }
         Path path = Path.of(nameOrPath);
         if (!Files.exists(path)) {
-            throw new CatalogueFileException(List.of(new barwright.io.Problem("", "no catalogue '" + nameOrPath
+            throw new CatalogueFileException(List.of(new Problem("", "no catalogue '" + nameOrPath
                     + "': give a built-in one (" + String.join(", ", BUILT_IN) + ") or the path of a catalogue file")));
         }
         return CatalogueReader.read(path);

@@ -10,6 +10,7 @@ import barwright.solver.Progress;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.atomic.AtomicLong;
 import java.util.stream.IntStream;
 
 /**
@@ -52,7 +53,7 @@ public record AdjustmentMap(Vehicle vehicle, List<BarOption> rows, List<BarOptio
         List<AxleState> rearStates = columns.stream().map(o -> evaluator.axle(AxlePosition.REAR, o.bar())).toList();
         int count = rows.size() * columns.size();
         MapCell[] cells = new MapCell[count];
-        java.util.concurrent.atomic.AtomicLong done = new java.util.concurrent.atomic.AtomicLong();
+        AtomicLong done = new AtomicLong();
         IntStream.range(0, count).parallel().forEach(i -> {
             progress.checkCancelled();
             int row = i / columns.size();

@@ -2,6 +2,8 @@ package barwright.sizing.map;
 
 import barwright.model.AntiRollBar;
 
+import java.util.Locale;
+
 /**
  * One row or column of an adjustment map: a bar in one hole, or no bar.
  *
@@ -21,7 +23,7 @@ public record BarOption(String barLabel, AntiRollBar bar, double armLength, bool
         if (bar == null) {
             return "no bar";
         }
-        String arm = Double.isNaN(armLength) ? "" : String.format(java.util.Locale.ROOT, " (%.0f mm)", armLength * 1e3);
+        String arm = Double.isNaN(armLength) ? "" : String.format(Locale.ROOT, " (%.0f mm)", armLength * 1e3);
         return barLabel + ", hole " + (hole() + 1) + arm;
     }
 }

@@ -1,5 +1,6 @@
 package barwright.ui.action;
 
+import barwright.io.FileWriteException;
 import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
@@ -9,9 +10,9 @@ import barwright.ui.chart.ResultChart;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.document.Samples;
 
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.stream.Collectors;
 
 /**
@@ -76,10 +77,6 @@ public final class FileCommands {
                     + "is unchanged.\n\n" + refused.problems().stream().map(Problem::toString)
                     .collect(Collectors.joining("\n")));
             return false;
-        } catch (IOException unreadable) {
-            dialogs.showError("Cannot open " + file.getFileName(), "The file could not be read (" + unreadable
-                    + "); the car you had open is unchanged.");
-            return false;
         }
         document.replace(read, file, file.getFileName().toString());
         recent.add(file);
@@ -110,9 +107,9 @@ public final class FileCommands {
             document.saveTo(target);
             recent.add(target);
             return true;
-        } catch (IOException failed) {
-            dialogs.showError("Not saved", "The file could not be written (" + failed + "). Any file that was "
-                    + "there is unchanged.");
+        } catch (FileWriteException failed) {
+            dialogs.showError("Not saved", "The file could not be written: " + failed.getMessage() + ". Any file "
+                    + "that was there is unchanged.");
             return false;
         }
     }
@@ -125,8 +122,8 @@ public final class FileCommands {
         }
         try {
             ChartExport.write(chart.chart(), withExtension(target, type));
-        } catch (IOException failed) {
-            dialogs.showError("Chart not exported", "The chart could not be written (" + failed + ").");
+        } catch (FileWriteException failed) {
+            dialogs.showError("Chart not exported", "The chart could not be written: " + failed.getMessage() + ".");
         }
     }
 
@@ -148,12 +145,12 @@ public final class FileCommands {
 
     static Path withExtension(Path file, String extension) {
         String name = file.getFileName().toString();
-        return name.toLowerCase(java.util.Locale.ROOT).endsWith("." + extension) ? file
+        return name.toLowerCase(Locale.ROOT).endsWith("." + extension) ? file
                 : file.resolveSibling(name + "." + extension);
     }
 
     private static String slug(String name) {
-        String slug = name.toLowerCase(java.util.Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
+        String slug = name.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("(^-|-$)", "");
         return slug.isEmpty() ? "vehicle" : slug;
     }
 }

@@ -1,5 +1,7 @@
 package barwright.ui.document;
 
+import barwright.io.FileWriteException;
+import barwright.io.KeyPath;
 import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
@@ -8,7 +10,6 @@ import barwright.io.VehicleFileWriter;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -141,11 +142,11 @@ public final class OpenDocument {
      *
      * @throws IllegalStateException where the core refuses a value: a saved file must always open again
      */
-    public void saveTo(Path target) throws IOException {
+    public void saveTo(Path target) throws FileWriteException {
         if (!isValid()) {
             throw new IllegalStateException("Fix the marked values before saving: " + problems.get(0));
         }
-        VehicleFileWriter.writeAtomically(target, VehicleFileWriter.toJson(tree));
+        VehicleFileWriter.save(tree, target);
         savedTree = tree.deepCopy();
         file = target;
         fire(DocumentEvent.Kind.SAVED, null);

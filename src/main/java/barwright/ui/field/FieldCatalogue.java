@@ -6,6 +6,13 @@ import java.util.List;
 
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
 
+import static barwright.io.VehicleKeys.DENSITY_KG_PER_M3;
+import static barwright.io.VehicleKeys.OUTER_DIAMETER_MM;
+import static barwright.io.VehicleKeys.SHEAR_MODULUS_GPA;
+import static barwright.io.VehicleKeys.WALL_MM;
+import static barwright.io.VehicleKeys.YIELD_STRENGTH_MPA;
+import static barwright.io.VehicleKeys.YOUNGS_MODULUS_GPA;
+
 /**
  * Every number of the vehicle file (files.md) with its label and help, grouped the way a person measures a
  * car: on the scales, on the car, per axle, from the tyre's data, on the bar.
@@ -128,23 +135,23 @@ public final class FieldCatalogue {
 
     /** Under {@code front.bar.material}: a custom material's values. */
     public static final List<FieldSpec> MATERIAL = List.of(
-            field("youngsModulusGPa", "Young's modulus E", Quantity.MODULUS, 1e9,
+            field(YOUNGS_MODULUS_GPA, "Young's modulus E", Quantity.MODULUS, 1e9,
                     "Stiffness in bending: about 205-207 GPa for steels, 114 GPa for Ti-6Al-4V, 72 GPa for "
                             + "7075 aluminium. From the material's data sheet."),
-            field("shearModulusGPa", "Shear modulus G", Quantity.MODULUS, 1e9,
+            field(SHEAR_MODULUS_GPA, "Shear modulus G", Quantity.MODULUS, 1e9,
                     "Stiffness in twisting, which sets most of a bar's rate: about 79-80 GPa for steels. From the "
                             + "data sheet."),
-            field("densityKgPerM3", "Density", Quantity.DENSITY, NONE,
+            field(DENSITY_KG_PER_M3, "Density", Quantity.DENSITY, NONE,
                     "Mass per volume, for the bar's mass: about 7850 kg/m³ for steels."),
-            field("yieldStrengthMPa", "Yield strength", Quantity.STRESS, 1e6,
+            field(YIELD_STRENGTH_MPA, "Yield strength", Quantity.STRESS, 1e6,
                     "Stress at which the material takes a permanent set; the bar's safety factor is measured "
                             + "against it. Use the certified value for the bar as heat-treated."));
 
     /** Under {@code front.bar.section}. */
-    public static final FieldSpec DIAMETER = field("outerDiameterMm", "Outside diameter", Quantity.LENGTH, MM,
+    public static final FieldSpec DIAMETER = field(OUTER_DIAMETER_MM, "Outside diameter", Quantity.LENGTH, MM,
             "Outside diameter of the bar, measured with callipers on the straight middle section, away from "
                     + "bends and splines.");
-    public static final FieldSpec WALL = field("wallMm", "Tube wall", Quantity.LENGTH, MM,
+    public static final FieldSpec WALL = field(WALL_MM, "Tube wall", Quantity.LENGTH, MM,
             "Wall thickness of a tubular bar, measured at a cut end or taken from the maker. It must be less "
                     + "than half the outside diameter.");
 

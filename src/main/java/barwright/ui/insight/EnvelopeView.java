@@ -24,8 +24,6 @@ import javax.swing.UIManager;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.file.Path;
 
 /**
@@ -101,8 +99,6 @@ public final class EnvelopeView extends JPanel {
             return LiftEnvelope.of(VehicleAnalysis.analyse(VehicleFileReader.read(file).vehicle()));
         } catch (VehicleFileException refused) {
             throw new IllegalArgumentException("the file was refused: " + refused.problems().get(0), refused);
-        } catch (IOException unreadable) {
-            throw new UncheckedIOException("the file could not be read: " + unreadable.getMessage(), unreadable);
         }
     }
 

@@ -1,21 +1,24 @@
 package barwright.ui.panel;
 
+import barwright.io.KeyPath;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
-import barwright.ui.document.KeyPath;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.FieldCatalogue;
 import barwright.ui.field.NumberText;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Figures;
 import barwright.units.Quantity;
+import barwright.units.UnitSystem;
 import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.IntNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.node.TextNode;
 
+import javax.swing.Box;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
@@ -23,6 +26,18 @@ import javax.swing.JPanel;
 import java.awt.FlowLayout;
 import java.util.ArrayList;
 import java.util.List;
+
+import static barwright.io.VehicleKeys.DENSITY_KG_PER_M3;
+import static barwright.io.VehicleKeys.MATERIAL;
+import static barwright.io.VehicleKeys.OUTER_DIAMETER_MM;
+import static barwright.io.VehicleKeys.SECTION;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
+import static barwright.io.VehicleKeys.SHAPE;
+import static barwright.io.VehicleKeys.SHEAR_MODULUS_GPA;
+import static barwright.io.VehicleKeys.SOLID;
+import static barwright.io.VehicleKeys.WALL_MM;
+import static barwright.io.VehicleKeys.YIELD_STRENGTH_MPA;
+import static barwright.io.VehicleKeys.YOUNGS_MODULUS_GPA;
 
 /** One axle's anti-roll bar: fitted or not, material, section, lengths, arm holes and the link. */
 final class BarPage extends EditorPage {
@@ -109,7 +124,7 @@ final class BarPage extends EditorPage {
         return "E " + Figures.format(material.youngsModulus(), Quantity.MODULUS, units, 1, locale)
                 + ", G " + Figures.format(material.shearModulus(), Quantity.MODULUS, units, 1, locale)
                 + ", density " + Figures.format(material.density(), Quantity.DENSITY, units,
-                units == barwright.units.UnitSystem.US ? 3 : 0, locale)
+                units == UnitSystem.US ? 3 : 0, locale)
                 + ", yield " + Figures.format(material.yieldStrength(), Quantity.STRESS, units, 0, locale)
                 + " (typical values; the maker's certificate wins)";
     }
@@ -123,10 +138,10 @@ final class BarPage extends EditorPage {
                 + "wall sets its strength).", 300));
         shape.addActionListener(event -> chooseShape(shape.getSelectedIndex() == 1));
         form.field("Shape", shape, null, null);
-        form.field(new NumberField(document, view, KeyPath.of(bar + ".section").child("outerDiameterMm"),
+        form.field(new NumberField(document, view, KeyPath.of(bar + "." + SECTION).child(OUTER_DIAMETER_MM),
                 FieldCatalogue.DIAMETER));
         if ("tube".equals(text(bar + ".section.shape"))) {
-            form.field(new NumberField(document, view, KeyPath.of(bar + ".section").child("wallMm"),
+            form.field(new NumberField(document, view, KeyPath.of(bar + "." + SECTION).child(WALL_MM),
                     FieldCatalogue.WALL));
         }
     }
@@ -148,7 +163,7 @@ final class BarPage extends EditorPage {
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         buttons.setOpaque(false);
         buttons.add(add);
-        buttons.add(javax.swing.Box.createHorizontalStrut(6));
+        buttons.add(Box.createHorizontalStrut(6));
         buttons.add(remove);
         form.note(buttons);
     }
@@ -188,12 +203,12 @@ final class BarPage extends EditorPage {
     /** A plain solid steel U-bar to start from when a bar is added where there was none. */
     private static ObjectNode defaultBar() {
         ObjectNode node = JsonNodeFactory.instance.objectNode();
-        node.putObject("material").put("name", MaterialLibrary.SPRING_STEEL.name());
-        node.putObject("section").put("shape", "solid").put("outerDiameterMm", 18);
+        node.putObject(MATERIAL).put("name", MaterialLibrary.SPRING_STEEL.name());
+        node.putObject(SECTION).put(SHAPE, SOLID).put(OUTER_DIAMETER_MM, 18);
         node.put("torsionLengthMm", 900);
         node.put("bushingSpanMm", 760);
         node.putArray("armLengthsMm").add(180).add(200).add(220);
-        node.put("selectedArm", 1);
+        node.put(SELECTED_ARM, 1);
         node.put("linkMotionRatio", 0.8);
         return node;
     }
@@ -208,10 +223,10 @@ final class BarPage extends EditorPage {
             Material base = currentMaterial();
             ObjectNode custom = JsonNodeFactory.instance.objectNode();
             custom.put("name", "custom " + base.name());
-            custom.put("youngsModulusGPa", NumberText.forFile(base.youngsModulus() / 1e9));
-            custom.put("shearModulusGPa", NumberText.forFile(base.shearModulus() / 1e9));
-            custom.put("densityKgPerM3", NumberText.forFile(base.density()));
-            custom.put("yieldStrengthMPa", NumberText.forFile(base.yieldStrength() / 1e6));
+            custom.put(YOUNGS_MODULUS_GPA, NumberText.forFile(base.youngsModulus() / 1e9));
+            custom.put(SHEAR_MODULUS_GPA, NumberText.forFile(base.shearModulus() / 1e9));
+            custom.put(DENSITY_KG_PER_M3, NumberText.forFile(base.density()));
+            custom.put(YIELD_STRENGTH_MPA, NumberText.forFile(base.yieldStrength() / 1e6));
             document.edit(path, custom, null, this);
         } else {
             document.edit(path, JsonNodeFactory.instance.objectNode().put("name", name), null, this);
@@ -229,21 +244,21 @@ final class BarPage extends EditorPage {
             return;
         }
         document.editAll(tree -> {
-            ObjectNode section = (ObjectNode) KeyPath.of(bar + ".section").get(tree);
+            ObjectNode section = (ObjectNode) KeyPath.of(bar + "." + SECTION).get(tree);
             section.set("shape", TextNode.valueOf(tube ? "tube" : "solid"));
             if (tube) {
-                JsonNode diameter = section.get("outerDiameterMm");
+                JsonNode diameter = section.get(OUTER_DIAMETER_MM);
                 double outside = diameter != null && diameter.isNumber() ? diameter.doubleValue() : 25;
-                section.put("wallMm", NumberText.forFile(Math.min(3.0, outside / 6)));
+                section.put(WALL_MM, NumberText.forFile(Math.min(3.0, outside / 6)));
             } else {
-                section.remove("wallMm");
+                section.remove(WALL_MM);
             }
         }, this);
     }
 
     private void addHole() {
         document.editAll(tree -> {
-            var arms = (com.fasterxml.jackson.databind.node.ArrayNode) KeyPath.of(bar + ".armLengthsMm").get(tree);
+            var arms = (ArrayNode) KeyPath.of(bar + ".armLengthsMm").get(tree);
             JsonNode last = arms.get(arms.size() - 1);
             arms.add(last != null && last.isNumber() ? last.doubleValue() + 20 : 200);
         }, this);
@@ -251,13 +266,13 @@ final class BarPage extends EditorPage {
 
     private void removeHole() {
         document.editAll(tree -> {
-            var arms = (com.fasterxml.jackson.databind.node.ArrayNode) KeyPath.of(bar + ".armLengthsMm").get(tree);
+            var arms = (ArrayNode) KeyPath.of(bar + ".armLengthsMm").get(tree);
             if (arms.size() > 1) {
                 arms.remove(arms.size() - 1);
                 ObjectNode barNode = (ObjectNode) KeyPath.of(bar).get(tree);
-                JsonNode selected = barNode.get("selectedArm");
+                JsonNode selected = barNode.get(SELECTED_ARM);
                 if (selected != null && selected.canConvertToInt() && selected.intValue() >= arms.size()) {
-                    barNode.put("selectedArm", arms.size() - 1);
+                    barNode.put(SELECTED_ARM, arms.size() - 1);
                 }
             }
         }, this);

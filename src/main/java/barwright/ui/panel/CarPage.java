@@ -1,6 +1,6 @@
 package barwright.ui.panel;
 
-import barwright.ui.document.KeyPath;
+import barwright.io.KeyPath;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.FieldCatalogue;
 import barwright.ui.field.NumberText;

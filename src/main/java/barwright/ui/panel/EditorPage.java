@@ -1,7 +1,7 @@
 package barwright.ui.panel;
 
 import barwright.ui.document.DocumentEvent;
-import barwright.ui.document.KeyPath;
+import barwright.io.KeyPath;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.FieldSpec;
 import barwright.ui.field.ViewSettings;

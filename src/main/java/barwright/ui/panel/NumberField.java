@@ -2,7 +2,7 @@ package barwright.ui.panel;
 
 import barwright.io.Problem;
 import barwright.ui.document.DocumentEvent;
-import barwright.ui.document.KeyPath;
+import barwright.io.KeyPath;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.FieldSpec;
 import barwright.ui.field.NumberText;
@@ -23,6 +23,7 @@ import java.awt.event.FocusEvent;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Consumer;
+import javax.swing.SwingUtilities;
 
 /**
  * A text field bound to one number of the open document by its key path. Every keystroke that changes the
@@ -128,7 +129,7 @@ public final class NumberField extends JTextField {
             return;
         }
         editPending = true;
-        javax.swing.SwingUtilities.invokeLater(() -> {
+        SwingUtilities.invokeLater(() -> {
             editPending = false;
             typed();
         });

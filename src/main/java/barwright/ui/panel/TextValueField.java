@@ -1,7 +1,7 @@
 package barwright.ui.panel;
 
 import barwright.ui.document.DocumentEvent;
-import barwright.ui.document.KeyPath;
+import barwright.io.KeyPath;
 import barwright.ui.document.OpenDocument;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.TextNode;

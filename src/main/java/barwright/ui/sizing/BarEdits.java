@@ -1,15 +1,19 @@
 package barwright.ui.sizing;
 
+import barwright.io.KeyPath;
+import barwright.io.VehicleEdits;
+import barwright.io.VehicleFileException;
+import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
-import barwright.model.Material;
 import barwright.sizing.BarChoice;
-import barwright.sizing.BarNodes;
-import barwright.ui.document.KeyPath;
 import barwright.ui.document.OpenDocument;
 import com.fasterxml.jackson.databind.node.IntNode;
 
 import java.util.List;
 import java.util.Map;
+
+import static barwright.io.VehicleKeys.BAR;
+import static barwright.io.VehicleKeys.SELECTED_ARM;
 
 /**
  * Puts bars the views found into the open document through its key paths, each call one undo step, so that
@@ -28,15 +32,13 @@ final class BarEdits {
         var vehicle = document.lastValid().vehicle();
         document.editAll(tree -> {
             for (BarChoice choice : choices) {
-                KeyPath bar = KeyPath.of(choice.axle().key() + ".bar");
-                Material own = vehicle.axle(choice.axle()).bar() == null ? null
-                        : vehicle.axle(choice.axle()).bar().material();
-                if (!choice.material().equals(own)) {
+                AntiRollBar own = vehicle.axle(choice.axle()).bar();
+                try {
                     // the bar's own material stays written as the file had it (by name, or in full)
-                    bar.child("material").set(tree, BarNodes.material(choice.material()));
+                    VehicleEdits.putBar(tree, choice.setting(), own == null ? null : own.material());
+                } catch (VehicleFileException noBar) {
+                    throw new IllegalStateException("the views size only bars the car has: " + noBar.getMessage());
                 }
-                bar.child("section").set(tree, BarNodes.section(choice.size().section()));
-                bar.child("selectedArm").set(tree, IntNode.valueOf(choice.selectedArm()));
             }
         }, source);
     }
@@ -48,6 +50,6 @@ final class BarEdits {
      */
     static void putHoles(OpenDocument document, Map<AxlePosition, Integer> holes, Object source) {
         document.editAll(tree -> holes.forEach((axle, hole) ->
-                KeyPath.of(axle.key() + ".bar.selectedArm").set(tree, IntNode.valueOf(hole))), source);
+                KeyPath.of(axle.key()).child(BAR).child(SELECTED_ARM).set(tree, IntNode.valueOf(hole))), source);
     }
 }

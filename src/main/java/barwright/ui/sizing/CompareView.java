@@ -6,7 +6,7 @@ import barwright.io.VehicleFileException;
 import barwright.io.VehicleFileReader;
 import barwright.model.Vehicle;
 import barwright.physics.curve.Chart;
-import barwright.sizing.VehicleEdits;
+import barwright.io.VehicleEdits;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
 import barwright.sizing.compare.FigureRow;
@@ -29,7 +29,6 @@ import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.GridLayout;
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -146,9 +145,6 @@ final class CompareView extends JPanel {
         } catch (VehicleFileException refused) {
             context.dialogs().showError("Cannot compare " + file.getFileName(), "The file was not added:\n\n"
                     + refused.problems().stream().map(Problem::toString).collect(Collectors.joining("\n")));
-        } catch (IOException unreadable) {
-            context.dialogs().showError("Cannot compare " + file.getFileName(), "The file could not be read ("
-                    + unreadable + ").");
         }
     }
 

@@ -1,6 +1,6 @@
 package barwright.ui.sizing;
 
-import barwright.io.VehicleFileWriter;
+import barwright.io.AtomicFileWriter;
 import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.MassProperties;
@@ -70,7 +70,7 @@ final class Exports {
         run(done, "The map was not written", target, () -> {
             StringWriter text = new StringWriter();
             MapOutput.csv(AdjustmentMap.of(vehicle), text);
-            VehicleFileWriter.writeAtomically(target, text.toString());
+            AtomicFileWriter.writeText(target, text.toString());
         });
     }
 

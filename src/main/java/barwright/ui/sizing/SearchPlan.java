@@ -17,7 +17,6 @@ import barwright.sizing.catalogue.Catalogues;
 import barwright.sizing.catalogue.StockSize;
 import barwright.solver.Progress;
 
-import java.io.IOException;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.EnumSet;
@@ -154,8 +153,6 @@ final class SearchPlan {
                 sizes.addAll(Catalogues.find(name).sizes());
             } catch (CatalogueFileException refused) {
                 throw new IllegalArgumentException("The catalogue " + name + " is refused:\n" + refused.getMessage());
-            } catch (IOException unreadable) {
-                throw new IllegalArgumentException("The catalogue " + name + " could not be read: " + unreadable);
             }
         }
         return sizes;

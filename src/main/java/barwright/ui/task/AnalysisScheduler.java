@@ -4,6 +4,7 @@ import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.ImpossibleVehicleException;
 import barwright.physics.VehicleAnalysis;
+import barwright.solver.RootNotFoundException;
 
 import java.util.function.Consumer;
 
@@ -61,7 +62,7 @@ public final class AnalysisScheduler {
             AnalysisResult result = VehicleAnalysis.analyse(vehicle);
             return new AnalysisOutcome(revision, vehicle, result, sweep == null ? null : BarSweep.run(vehicle, sweep),
                     withoutBars(vehicle), null);
-        } catch (ImpossibleVehicleException impossible) {
+        } catch (ImpossibleVehicleException | RootNotFoundException impossible) {
             return new AnalysisOutcome(revision, vehicle, null, null, null, impossible.getMessage());
         } catch (UnsupportedOperationException notBuilt) {
             return new AnalysisOutcome(revision, vehicle, null, null, null,

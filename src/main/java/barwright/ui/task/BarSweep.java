@@ -8,8 +8,8 @@ import barwright.model.TubeSection;
 import barwright.model.Vehicle;
 import barwright.model.AxlePosition;
 import barwright.physics.ImpossibleVehicleException;
+import barwright.physics.RollBalance;
 import barwright.sizing.AxleState;
-import barwright.sizing.RollBalance;
 import barwright.sizing.SetupEvaluator;
 
 import java.util.ArrayList;

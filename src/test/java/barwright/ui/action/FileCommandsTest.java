@@ -2,7 +2,7 @@ package barwright.ui.action;
 
 import barwright.io.VehicleFileWriter;
 import barwright.ui.ScriptedDialogs;
-import barwright.ui.document.KeyPath;
+import barwright.io.KeyPath;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.document.Samples;
 import com.fasterxml.jackson.databind.JsonNode;

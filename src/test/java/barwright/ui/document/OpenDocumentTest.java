@@ -1,5 +1,6 @@
 package barwright.ui.document;
 
+import barwright.io.KeyPath;
 import barwright.io.VehicleFileReader;
 import com.fasterxml.jackson.databind.node.DoubleNode;
 import com.fasterxml.jackson.databind.node.IntNode;

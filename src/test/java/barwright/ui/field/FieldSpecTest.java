@@ -1,6 +1,6 @@
 package barwright.ui.field;
 
-import barwright.ui.document.KeyPath;
+import barwright.io.KeyPath;
 import barwright.ui.document.Samples;
 import barwright.units.UnitSystem;
 import com.fasterxml.jackson.databind.JsonNode;

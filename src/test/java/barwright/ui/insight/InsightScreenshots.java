@@ -3,7 +3,7 @@ package barwright.ui.insight;
 import barwright.ui.action.Settings;
 import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
-import barwright.ui.document.KeyPath;
+import barwright.io.KeyPath;
 import com.fasterxml.jackson.databind.node.IntNode;
 
 import javax.imageio.ImageIO;

@@ -7,7 +7,7 @@ import barwright.model.MaterialLibrary;
 import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
-import barwright.sizing.BarNodes;
+import barwright.io.BarNodes;
 import barwright.sizing.TubeEquivalents;
 import barwright.sizing.TubeMatch;
 import barwright.sizing.catalogue.Catalogues;

@@ -5,7 +5,7 @@ import barwright.model.AxlePosition;
 import barwright.model.Vehicle;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.sizing.MapOutput;
-import barwright.sizing.BarNodes;
+import barwright.io.BarNodes;
 import barwright.sizing.BarSearch;
 import barwright.sizing.Candidate;
 import barwright.sizing.Constraints;

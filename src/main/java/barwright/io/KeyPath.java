@@ -1,4 +1,4 @@
-package barwright.ui.document;
+package barwright.io;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -64,6 +64,31 @@ public final class KeyPath {
             node = step instanceof String key ? node.get(key) : node.get((Integer) step);
         }
         return node;
+    }
+
+    /**
+     * @return why this path names no list entry of the tree, e.g. {@code names no entry: armLengthsMm has 2
+     *     entries}, or null where every index on the way is in its list (a key may be new)
+     */
+    public String missingEntry(JsonNode tree) {
+        JsonNode node = tree;
+        String lastKey = "";
+        for (Object step : steps) {
+            if (node == null || node.isNull()) {
+                return null; // objects are made on the way; a list is never made to hold an index
+            }
+            if (step instanceof String key) {
+                lastKey = key;
+                node = node.get(key);
+            } else {
+                int index = (Integer) step;
+                if (!node.isArray() || index >= node.size()) {
+                    return "names no entry: " + lastKey + " has " + (node.isArray() ? node.size() : 0) + " entries";
+                }
+                node = node.get(index);
+            }
+        }
+        return null;
     }
 
     /**

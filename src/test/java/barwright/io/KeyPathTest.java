@@ -1,4 +1,4 @@
-package barwright.ui.document;
+package barwright.io;
 
 import com.fasterxml.jackson.databind.node.IntNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
