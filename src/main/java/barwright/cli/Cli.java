@@ -29,7 +29,8 @@ public final class Cli {
             new MapCommand(),
             new CompareCommand(),
             new PreloadCommand(),
-            new SheetCommand());
+            new SheetCommand(),
+            new TransientCommand());
 
     private Cli() {
     }

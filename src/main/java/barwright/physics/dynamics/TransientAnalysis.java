@@ -1,6 +1,7 @@
 package barwright.physics.dynamics;
 
 import barwright.model.DynamicsInputs;
+import barwright.model.LapLog;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
 import barwright.physics.SteadyCornering;
@@ -45,7 +46,7 @@ public final class TransientAnalysis {
             count++;
         }
         double[] times = java.util.Arrays.copyOf(all, count);
-        RollSimulation.Run run = RollSimulation.run(model, log, times, RollSimulation.DEFAULT_INTEGRATION);
+        RollSimulation.Run run = RollSimulation.run(model, new LoggedInput(log), times, RollSimulation.DEFAULT_INTEGRATION);
         return TransientResult.of(RollModes.of(model), run, Double.NaN);
     }
 

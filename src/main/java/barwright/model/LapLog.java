@@ -1,4 +1,4 @@
-package barwright.physics.dynamics;
+package barwright.model;
 
 import java.util.Arrays;
 
@@ -11,8 +11,7 @@ import java.util.Arrays;
  * @param longitudinal a_x at each sample (m/s^2, forward positive); zeros where the log has none
  * @param speeds       speed at each sample (m/s), or null where the log has none
  */
-public record LapLog(double[] times, double[] lateral, double[] longitudinal, double[] speeds)
-        implements LateralInput {
+public record LapLog(double[] times, double[] lateral, double[] longitudinal, double[] speeds) {
     public LapLog {
         if (times.length < 2 || lateral.length != times.length || longitudinal.length != times.length
                 || (speeds != null && speeds.length != times.length)) {
@@ -25,18 +24,18 @@ public record LapLog(double[] times, double[] lateral, double[] longitudinal, do
         }
     }
 
-    @Override
-    public double lateral(double time) {
+    /** @return a_y at a time (m/s^2) */
+    public double lateralAt(double time) {
         return interpolate(lateral, time);
     }
 
-    @Override
-    public double longitudinal(double time) {
+    /** @return a_x at a time (m/s^2) */
+    public double longitudinalAt(double time) {
         return interpolate(longitudinal, time);
     }
 
-    @Override
-    public double finestFeature() {
+    /** @return the shortest time between two samples (s) */
+    public double shortestInterval() {
         double finest = Double.POSITIVE_INFINITY;
         for (int i = 1; i < times.length; i++) {
             finest = Math.min(finest, times[i] - times[i - 1]);
