@@ -13,21 +13,26 @@ public final class MaterialLibrary {
     private static final double MPA = 1e6;
 
     /**
-     * Spring steel, quenched and tempered (SAE 5160 / 50CrV4 class). E and G: Shigley's Mechanical Engineering
-     * Design, table of elastic constants for carbon and alloy steel (E = 207 GPa, G = 79.3 GPa); density
-     * 7850 kg/m^3 (same table, from memory); yield 1200 MPa is a typical tempered spring-bar value (from
-     * memory; hardness-dependent, 1100-1500 MPa in suppliers' data).
+     * Spring steel, quenched and tempered (SAE 5160 / 50CrV4 class). Yield 1005 MPa: a materials-data web page
+     * on SAE/AISI 5160 (theworldmaterial.com, "SAE AISI 5160 Steel", table for a 25 mm (1 in.) bar) prints a
+     * yield of at least 1005 MPa, tensile 1145 MPa, oil quenched from 830 C and tempered at 540 C; read there,
+     * its primary source not named in what was read. Bars tempered lower are stronger; enter a maker's
+     * certified yield as a custom material. E = 207 GPa and G = 79.3 GPa: Shigley's Mechanical Engineering
+     * Design, table of elastic constants for carbon steel (from memory); density 7850 kg/m^3 (from memory;
+     * the same 7.85 g/cm^3 is printed on the 4130 data sheet below). docs/validation.md, section "Materials".
      */
     public static final Material SPRING_STEEL = new Material("spring steel", 207 * GPA, 79.3 * GPA, 7850,
-            1200 * MPA);
+            1005 * MPA);
 
     /**
-     * 4130-type chromoly, normalised. E = 205 GPa, G = 80 GPa, density 7850 kg/m^3, yield 460 MPa: ASM
-     * Handbook vol. 1 / MatWeb data sheet for AISI 4130 normalised (from memory). Heat-treated tube reaches
-     * far more; enter its certified yield as a custom material.
+     * 4130-type chromoly, normalised. Yield 435 MPa, E = 205 GPa, G = 80 GPa, density 7.85 g/cm^3: the MatWeb
+     * data sheet "AISI 4130 Steel, normalized at 870 C (1600 F)" (asm.matweb.com, read; it marks E and G
+     * "typical for steel"). The annealed sheet of the same site prints 460 MPa, the figure used here before.
+     * Heat-treated tube reaches far more; enter its certified yield as a custom material.
+     * docs/validation.md, section "Materials".
      */
     public static final Material CHROMOLY_4130 = new Material("4130 chromoly", 205 * GPA, 80 * GPA, 7850,
-            460 * MPA);
+            435 * MPA);
 
     /**
      * Titanium Ti-6Al-4V (grade 5), annealed. E = 113.8 GPa, G = 44 GPa, density 4430 kg/m^3, yield 880 MPa:

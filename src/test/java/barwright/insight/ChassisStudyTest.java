@@ -18,7 +18,7 @@ import static barwright.units.Constants.STANDARD_GRAVITY;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-/** The chassis stiffness study against full analyses, model.md 6 in closed form and checks.md. */
+/** The chassis stiffness study against full analyses, model.md 6 in closed form and docs/validation.md. */
 class ChassisStudyTest {
     /** Two routes to the same 2x2 solution (the study's and the full analysis's): round-off only. */
     private static final double SAME_MODEL = 1e-12;
@@ -110,7 +110,7 @@ class ChassisStudyTest {
     }
 
     /**
-     * checks.md, flexible chassis (grade B): K_f = 1000, K_r = 500, K_c = 3000 N m/deg, roll moment split
+     * docs/validation.md, section "Flexible chassis" (arithmetic): K_f = 1000, K_r = 500, K_c = 3000 N m/deg, roll moment split
      * 0.5/0.5, no gravity term: elastic front share 0.6500, rigid 0.6667, K_c -> 0 gives 0.5000. The car below
      * is built to be that case: no unsprung mass and roll centres on the ground (so all transfer is elastic),
      * half the sprung mass on each axle, equal tracks, tyres a million times stiffer than the springs, and a
@@ -125,13 +125,13 @@ class ChassisStudyTest {
         double rearRate = 2 * 500 / RADIANS_PER_DEGREE / (track * track);
         Axle front = new Axle(track, 0, 0, 0, frontRate, 1, frontRate * 1e6, base.front().tyre(), null);
         Axle rear = new Axle(track, 0, 0, 0, rearRate, 1, rearRate * 1e6, base.rear().tyre(), null);
-        Vehicle example = new Vehicle("checks.md flexible chassis example", 1000, 0.5, null, 1e-3, 2.5, null,
+        Vehicle example = new Vehicle("flexible chassis example (docs/validation.md)", 1000, 0.5, null, 1e-3, 2.5, null,
                 front, rear, 0.06);
         ChassisStudy study = ChassisStudy.of(example, VehicleAnalysis.analyse(example));
         assertThat(study.frontShare(3000 / RADIANS_PER_DEGREE)).isCloseTo(0.6500, within(1e-4));
         assertThat(study.frontShare(null)).isCloseTo(2.0 / 3.0, within(1e-4));
         assertThat(study.frontShare(0.0)).isCloseTo(0.5000, within(1e-4));
-        // the test's own no-gravity closed form of the same 2x2 system (Cramer's rule) gives the printed 0.65
+        // the test's own no-gravity closed form of the same 2x2 system (Cramer's rule) gives the listed 0.65
         assertThat(elasticFrontShareWithoutGravity(1000, 500, 3000, 0.5)).isCloseTo(0.65, within(1e-12));
     }
 
@@ -198,6 +198,48 @@ class ChassisStudyTest {
             assertThat(study.sweep().get(i).deliveredShare()).isGreaterThan(study.sweep().get(i - 1).deliveredShare());
         }
         assertThat(study.sweep().get(study.sweep().size() - 1).deliveredShare()).isLessThan(1.0);
-        assertThat(study.rigid().deliveredShare()).isEqualTo(1.0);
+    }
+
+    /**
+     * Limit case (model.md 6): as K_c grows the flexible result tends to the rigid one, so the delivered share
+     * tends to 1 from below, its shortfall falling as 1/K_c (the same first-order term as the share itself):
+     * ten times stiffer leaves a tenth of it, to 1 % at a thousand times the roll stiffness; at 1e6 times
+     * (before rounding in the 2x2 determinant takes over) it is within 1e-5 of 1.
+     */
+    @ParameterizedTest
+    @MethodSource("samples")
+    void the_delivered_share_tends_to_one_as_the_chassis_stiffens(String sample) {
+        Vehicle vehicle = Samples.vehicle(sample);
+        ChassisStudy study = ChassisStudy.of(vehicle, VehicleAnalysis.analyse(vehicle));
+        double total = study.totalRollStiffness();
+        double shortfall1e3 = 1 - study.deliveredShare(1e3 * total);
+        double shortfall1e4 = 1 - study.deliveredShare(1e4 * total);
+        assertThat(shortfall1e3).isPositive();
+        assertThat(shortfall1e4 / shortfall1e3).isCloseTo(0.1, within(0.001));
+        assertThat(study.deliveredShare(1e6 * total)).isCloseTo(1.0, within(1e-5));
+    }
+
+    /**
+     * docs/validation.md, "Flexible chassis": on the car built to that example (no bar, so the study stiffens
+     * the front springs by 10 %: K_f 1000 -> 1100 N m/deg with tyres a million times stiffer), the no-gravity
+     * closed form gives the delivered share at K_c = 3000 N m/deg by hand:
+     * (1100 x 3250 / 5 350 000 - 0.65) / (1100/1600 - 1000/1500) = 0.87477. The leftover gravity term and the
+     * tyres move the shares by under 2e-4 (see above), their differences by under 1e-3 of this figure: 1e-3.
+     */
+    @Test
+    void a_car_built_to_the_checks_example_delivers_the_hand_worked_share() {
+        double track = 1.4;
+        Vehicle base = Samples.vehicle("road-saloon");
+        double frontRate = 2 * 1000 / RADIANS_PER_DEGREE / (track * track);
+        double rearRate = 2 * 500 / RADIANS_PER_DEGREE / (track * track);
+        Axle front = new Axle(track, 0, 0, 0, frontRate, 1, frontRate * 1e6, base.front().tyre(), null);
+        Axle rear = new Axle(track, 0, 0, 0, rearRate, 1, rearRate * 1e6, base.rear().tyre(), null);
+        Vehicle example = new Vehicle("flexible chassis example (docs/validation.md)", 1000, 0.5, null, 1e-3, 2.5,
+                null, front, rear, 0.06);
+        ChassisStudy study = ChassisStudy.of(example, VehicleAnalysis.analyse(example));
+        double byHand = (elasticFrontShareWithoutGravity(1100, 500, 3000, 0.5)
+                - elasticFrontShareWithoutGravity(1000, 500, 3000, 0.5)) / (1100.0 / 1600 - 1000.0 / 1500);
+        assertThat(byHand).isCloseTo(0.87477, within(0.000005));
+        assertThat(study.deliveredShare(3000 / RADIANS_PER_DEGREE)).isCloseTo(byHand, within(1e-3));
     }
 }

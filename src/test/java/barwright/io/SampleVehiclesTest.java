@@ -20,8 +20,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /**
  * Every shipped sample vehicle (sample-vehicles/*.json) loads, analyses, survives a save and a reload
- * unchanged, and gives figures in the ranges the trade expects (checks.md, facts of the trade: common
- * practice, no single source).
+ * unchanged, and gives figures in the ranges the trade expects (docs/validation.md, section "Facts of the
+ * trade": common practice, no single source).
  */
 class SampleVehiclesTest {
     private static final Path SAMPLES = Path.of("sample-vehicles");
@@ -89,7 +89,7 @@ class SampleVehiclesTest {
         String kind = KIND.get(sample.getFileName().toString());
         if ("road car".equals(kind)) {
             // road cars roll a few degrees per g (roughly 3-7 deg/g); road tyres hold 0.7-1.0 g; ride 1-1.6 Hz;
-            // they understeer (checks.md facts of the trade, common practice)
+            // they understeer (docs/validation.md, "Facts of the trade": common practice)
             assertThat(rollGradient).isBetween(3.0, 7.0);
             assertThat(result.leftTurn().limit() / G).isBetween(0.7, 1.0);
             assertThat(result.front().stiffness().rideFrequency()).isBetween(1.0, 1.6);

@@ -12,14 +12,14 @@ import static org.assertj.core.api.Assertions.withinPercentage;
 /**
  * Section properties of model.md 1 against the handbook: Roark's Formulas for Stress and Strain, torsion of
  * circular sections, and Shigley's Mechanical Engineering Design ch. 3 (J = pi d^4 / 32, I = J / 2 for a
- * circle, tau = T r / J). Values from shared/reference/checks.md, grade noted at each.
+ * circle, tau = T r / J; from memory). Values: docs/validation.md, section "Sections and torsion" (arithmetic).
  */
 class SectionTest {
     private static final double MM4 = 1e-12; // m^4 per mm^4
 
     @Test
     void solidBarPolarMomentMatchesHandbook() {
-        // checks.md, grade B: D = 25.4 mm gives J = 40 863.42 mm^4; every printed figure here is checked to
+        // docs/validation.md, "Sections and torsion" (arithmetic): D = 25.4 mm gives J = 40 863.42 mm^4; every printed figure here is checked to
         // half a unit of its last printed place, the most its rounding can hide
         SolidSection bar = new SolidSection(0.0254);
         assertThat(bar.polarMoment() / MM4).isCloseTo(40_863.42, within(0.005));
@@ -31,7 +31,8 @@ class SectionTest {
 
     @Test
     void tubePolarMomentMatchesPrintedValue() {
-        // checks.md, grade A: D = 40 mm, bore 30 mm: J = 171 805.85 mm^4 (printed to 0.01 mm^4: 1e-8 relative)
+        // docs/validation.md, "Sections and torsion" (arithmetic): D = 40 mm, bore 30 mm: J = 171 805.85 mm^4
+        // (to 0.01 mm^4: 1e-8 relative)
         TubeSection tube = new TubeSection(0.040, 0.005);
         assertThat(tube.innerDiameter()).isCloseTo(0.030, within(1e-15));
         assertThat(tube.polarMoment() / MM4).isCloseTo(171_805.85, within(0.01));
@@ -41,7 +42,7 @@ class SectionTest {
 
     @Test
     void torsionalRateAndShearOfASolidBarMatchHandbook() {
-        // checks.md, grade B: D = 25.4 mm, G = 80 GPa, L = 1 m: G J / L = 3 269.07 N m/rad = 57.0561 N m/deg;
+        // docs/validation.md, "Sections and torsion" (arithmetic): D = 25.4 mm, G = 80 GPa, L = 1 m: G J / L = 3 269.07 N m/rad = 57.0561 N m/deg;
         // T = 500 N m gives tau_max = T r / J = 155.396 MPa (Shigley ch. 3). Half a unit of the last place.
         SolidSection bar = new SolidSection(0.0254);
         double rate = 80e9 * bar.polarMoment() / 1.0;

@@ -11,15 +11,15 @@ import static org.assertj.core.api.Assertions.within;
 import static org.assertj.core.api.Assertions.withinPercentage;
 
 /**
- * Axle roll stiffness and ride rates (model.md 3) against shared/reference/checks.md ("any vehicle dynamics
- * text", grade B) and derivations in the tests. Springs in series add compliances (any statics text).
+ * Axle roll stiffness and ride rates (model.md 3) against docs/validation.md, section "Roll stiffness of springs
+ * and tyres" (arithmetic) and derivations in the tests. Springs in series add compliances (any statics text).
  */
 class AxleStiffnessTest {
     private static final double DEG = Math.PI / 180;
 
     @Test
     void springsOfThirtyNewtonsPerMillimetreOnATrackOfOnePointFourMetres() {
-        // checks.md: wheel rate 30 N/mm per side, track 1.40 m: K = k_w t^2 / 2 = 29 400 N m/rad = 513.127 N m/deg
+        // docs/validation.md, "Roll stiffness of springs and tyres": wheel rate 30 N/mm per side, track 1.40 m: K = k_w t^2 / 2 = 29 400 N m/rad = 513.127 N m/deg
         // (a roll angle phi moves each wheel t phi / 2, each spring pushes back k_w t phi / 2 on a lever t / 2)
         Axle axle = TestCars.axle(1.40, 0.05, 60, 0.3, 30e3, 1.0, 200e3, null);
         AxleStiffness stiffness = AxleStiffness.of(axle, null, 200);
@@ -41,7 +41,7 @@ class AxleStiffnessTest {
 
     @Test
     void suspensionInSeriesWithTyresMatchesChecksValue() {
-        // checks.md: suspension 800 N m/deg in series with tyres of 200 N/mm each on a 1.40 m track
+        // docs/validation.md, "Roll stiffness of springs and tyres": suspension 800 N m/deg in series with tyres of 200 N/mm each on a 1.40 m track
         // (K_tyre = 3 420.85 N m/deg): 648.372 N m/deg
         double suspension = 800 / DEG;
         double wheelRate = 2 * suspension / (1.40 * 1.40);
@@ -77,7 +77,7 @@ class AxleStiffnessTest {
     void rideRateAndFrequency() {
         // ride rate: wheel rate in series with the tyre, 1 / (1/k_w + 1/k_t); natural frequency of a mass on a
         // spring sqrt(k / m) / (2 pi) (any vibration text). 30 N/mm with a 200 N/mm tyre: 26.0870 N/mm; on
-        // 250 kg: 1.6258 Hz (arithmetic in this comment, checked below to rounding).
+        // 250 kg: 1.6258 Hz (arithmetic, also in docs/validation.md; checked below to rounding).
         Axle axle = TestCars.axle(1.40, 0.05, 60, 0.3, 30e3, 1.0, 200e3, null);
         AxleStiffness stiffness = AxleStiffness.of(axle, null, 250);
         assertThat(stiffness.rideRate()).isCloseTo(1 / (1 / 30e3 + 1 / 200e3), withinPercentage(1e-12));

@@ -10,8 +10,9 @@ import static org.assertj.core.api.Assertions.within;
 import static org.assertj.core.api.Assertions.withinPercentage;
 
 /**
- * The flexible chassis of model.md 6 (the idea: Deakin et al., SAE 2000-01-3554; Milliken & Milliken ch. 16):
- * the checks.md value, Cramer's rule on the two roll equations, and the rigid limit.
+ * The flexible chassis of model.md 6 (its subject: Deakin et al., SAE 2000-01-3554, title page read; Milliken &
+ * Milliken ch. 16, from memory): the value of docs/validation.md (section "Flexible chassis"), Cramer's rule on
+ * the two roll equations, and the rigid limit.
  */
 class FlexibleChassisTest {
     private static final double G = 9.80665;
@@ -20,7 +21,7 @@ class FlexibleChassisTest {
     /** Masses for the two-equation roll model alone: m_sf = m_sr = 1 kg on a 1 mm roll arm. */
     private static MassProperties evenSplitNoGravity() {
         // m_s g h' = 0.0196 N m/rad against axle stiffnesses of 3e4-6e4 N m/rad: the gravity term is 7e-7 of
-        // them, which is how "no gravity term" of checks.md is met in a model that always has one
+        // them, which is how "no gravity term" of docs/validation.md is met in a model that always has one
         MassProperties.StaticWheelLoads loads = new MassProperties.StaticWheelLoads(5, 5, 5, 5);
         return new MassProperties(2, 0.5, 1, 1, 2, 0.3, 1, 1, 1, 0.299, 0.001, loads);
     }
@@ -34,7 +35,7 @@ class FlexibleChassisTest {
 
     @Test
     void checksValueForAnEvenMomentSplit() {
-        // checks.md (B): K_f = 1000, K_r = 500, K_c = 3000 N m/deg, roll moment split 0.5/0.5, no gravity term:
+        // docs/validation.md, section "Flexible chassis" (arithmetic): K_f = 1000, K_r = 500, K_c = 3000 N m/deg, roll moment split 0.5/0.5, no gravity term:
         // elastic front share 0.6500 (rigid 0.6667; K_c -> 0 gives 0.5000). Tolerance 1e-5: the print's
         // 4 decimals are exact fractions here (13/20, 2/3, 1/2), and the leftover gravity term moves them 1e-6.
         MassProperties masses = evenSplitNoGravity();
@@ -97,7 +98,7 @@ class FlexibleChassisTest {
     @Test
     void flexibleChassisMovesTransferTowardsTheSofterEnd() {
         // A soft body cannot pass roll moment from one end to the other: each end's share moves towards its
-        // own sprung-mass share (checks.md: 0.6667 rigid -> 0.65 -> 0.5); common practice says the same.
+        // own sprung-mass share (docs/validation.md, "Flexible chassis": 0.6667 rigid -> 0.65 -> 0.5); common practice says the same.
         Vehicle car = TestCars.clubCar();
         AnalysisResult rigid = VehicleAnalysis.analyse(car);
         AnalysisResult soft = VehicleAnalysis.analyse(car.withChassisTorsionalStiffness(2000 / DEG));

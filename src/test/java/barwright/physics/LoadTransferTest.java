@@ -51,7 +51,8 @@ class LoadTransferTest {
     @ParameterizedTest
     @ValueSource(longs = {21, 22, 23, 24, 25})
     void threePartsFollowTheirFormulas(long seed) {
-        // model.md 5: unsprung m_u a_y h_u / t, geometric m_s,axle a_y z / t, elastic K phi / t (per a_y here)
+        // model.md 5: unsprung m_u a_y h_u / t, geometric m_s,axle a_y z / t, elastic K phi / t (per a_y here);
+        // their total and the front share are checked against a hand moment balance in the next test
         Vehicle car = TestCars.random(new Random(seed), false);
         AnalysisResult result = VehicleAnalysis.analyse(car);
         MassProperties masses = result.masses();
@@ -67,10 +68,44 @@ class LoadTransferTest {
         assertThat(result.rollGradient()).isCloseTo(phi, withinPercentage(1e-10));
         assertThat(parts.elastic()).isCloseTo(result.front().stiffness().rollStiffness() * phi / front.track(),
                 withinPercentage(1e-10));
-        assertThat(parts.total()).isCloseTo(parts.unsprung() + parts.geometric() + parts.elastic(),
-                withinPercentage(1e-12));
-        assertThat(result.frontLoadTransferShare()).isCloseTo(parts.total()
-                / (parts.total() + result.rear().loadTransfer().total()), withinPercentage(1e-12));
+    }
+
+    /**
+     * A car whose roll stiffness, unsprung masses and sprung mass all split front to rear in its weight split f,
+     * with equal tracks and equal roll-centre and unsprung heights: each end is then f (or 1 - f) of the same
+     * car, so each axle carries that share of the whole overturning moment, m a_y h plus the lateral shift
+     * m_s g h' phi of the sprung CG (moment balance, worked out by hand below from the inputs alone: the front
+     * sprung mass is f m - m_uf = f m_s, so the axle moments need no roll-axis geometry). The front share is
+     * then f exactly. 1e-10 relative: rounding only; a part left out or counted twice moves it by percents.
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {0.45, 0.52, 0.61})
+    void aCarWhoseEveryFigureFollowsItsWeightSplitTransfersLoadInThatSplit(double frontFraction) {
+        double mass = 1100;
+        double unsprung = 130;
+        double cgHeight = 0.48;
+        double track = 1.5;
+        double rollCentre = 0.08;
+        double unsprungHeight = 0.30;
+        double totalRoll = 60_000;
+        Axle front = axleWithRollStiffness(track, rollCentre, frontFraction * unsprung, unsprungHeight,
+                frontFraction * totalRoll);
+        Axle rear = axleWithRollStiffness(track, rollCentre, (1 - frontFraction) * unsprung, unsprungHeight,
+                (1 - frontFraction) * totalRoll);
+        Vehicle car = new Vehicle("weight-split car (invented)", mass, frontFraction, null, cgHeight, 2.6, null,
+                front, rear, 0.05);
+        AnalysisResult result = VehicleAnalysis.analyse(car);
+
+        double sprungMass = mass - unsprung;
+        double sprungHeight = (mass * cgHeight - unsprung * unsprungHeight) / sprungMass;
+        double arm = sprungHeight - rollCentre; // the roll axis is level at the roll-centre height
+        double roll = sprungMass * arm / (totalRoll - sprungMass * G * arm); // per a_y (model.md 5)
+        double moment = mass * cgHeight + sprungMass * G * arm * roll; // per a_y
+        assertThat(result.front().loadTransfer().total() * track)
+                .isCloseTo(frontFraction * moment, withinPercentage(1e-8));
+        assertThat(result.rear().loadTransfer().total() * track)
+                .isCloseTo((1 - frontFraction) * moment, withinPercentage(1e-8));
+        assertThat(result.frontLoadTransferShare()).isCloseTo(frontFraction, within(1e-10));
     }
 
     @Test
@@ -92,7 +127,7 @@ class LoadTransferTest {
 
     /**
      * Barton & Fieldhouse, Automotive Chassis Engineering (Springer), ch. 3, worked example on load transfer,
-     * p. 174 as read (publisher and year from memory; figures via shared/reference/checks.md, grade A). The
+     * p. 174 as read (publisher and year from memory; figures in docs/validation.md, section "Lateral load transfer"). The
      * example gives the sprung mass, its split and its height above the roll axis, not the wheelbase or the
      * total CG height: those are derived here so that the car has exactly the example's sprung values (the
      * wheelbase, 2.5 m, is free: no checked figure depends on it). The front/rear roll stiffness split could
@@ -132,7 +167,7 @@ class LoadTransferTest {
         assertThat(rearParts.geometric() * accel).isCloseTo(760, within(0.5));
         assertThat(frontParts.unsprung() * accel).isCloseTo(158, within(0.5));
         assertThat(rearParts.unsprung() * accel).isCloseTo(218, within(0.5));
-        // re-computed in checks.md to 0.01 N: half of that
+        // re-computed from the printed inputs to 0.01 N (docs/validation.md): half of that
         assertThat(frontParts.geometric() * accel).isCloseTo(195.06, within(0.005));
         assertThat(rearParts.geometric() * accel).isCloseTo(759.60, within(0.005));
         assertThat(frontParts.unsprung() * accel).isCloseTo(158.04, within(0.005));

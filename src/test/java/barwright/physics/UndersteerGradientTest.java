@@ -18,8 +18,8 @@ import static org.assertj.core.api.Assertions.withinPercentage;
 
 /**
  * Understeer gradient, axle limits and balance (model.md 8). The understeer gradient
- * K = W_f/C_f - W_r/C_r is Gillespie's (Fundamentals of Vehicle Dynamics, ch. 6; SAE J670 defines the term);
- * the handling curve's slope at small a_y must equal it.
+ * K = W_f/C_f - W_r/C_r is the usual one (Gillespie, Fundamentals of Vehicle Dynamics, ch. 6, from memory;
+ * SAE J670 defines the term); the handling curve's slope at small a_y must equal it.
  */
 class UndersteerGradientTest {
     private static final double G = 9.80665;
@@ -29,14 +29,15 @@ class UndersteerGradientTest {
     private static final double FOOT = 0.3048; // m, NIST SP 811
 
     /**
-     * Gillespie, ch. 6, a published problem (inputs via checks.md): W = 4520 lb, wheelbase 10.5 ft, CG at
-     * 0.45 of the wheelbase behind the front axle, 8750 lb/rad per front tyre and 8600 lb/rad per rear tyre.
-     * K = 2486/17 500 - 2034/17 200 = 0.023801 rad/g = 1.3637 deg/g; characteristic speed sqrt(g L / K) =
-     * 119.14 ft/s = 130.73 km/h (grade B). The tyres are made to have exactly those stiffnesses at their
+     * A problem read on a question-and-answer web page that names no book (docs/validation.md, section
+     * "Understeer gradient: a published problem"): W = 4520 lb, wheelbase 10.5 ft, CG at 0.45 of the wheelbase
+     * behind the front axle, 8750 lb/rad per front tyre and 8600 lb/rad per rear tyre. The page prints no
+     * answer; by arithmetic K = 2486/17 500 - 2034/17 200 = 0.023801 rad/g = 1.3637 deg/g; characteristic speed
+     * sqrt(g L / K) = 119.14 ft/s = 130.73 km/h. The tyres are made to have exactly those stiffnesses at their
      * static loads (C(F_z0) = k_c F_z0 with F_z0 the static load); track, heights and springs are invented.
      */
     @Test
-    void gillespieProblem() {
+    void publishedUndersteerProblem() {
         double weightLb = 4520;
         double frontWheelLb = weightLb * 0.55 / 2;
         double rearWheelLb = weightLb * 0.45 / 2;
@@ -45,7 +46,7 @@ class UndersteerGradientTest {
         Axle frontAxle = new Axle(1.6, 0.08, 110, 0.33, 45e3, 0.9, 250e3, front,
                 TestCars.solidBar(0.026, 1.0, 0.85, 0.25, 0.8));
         Axle rearAxle = new Axle(1.6, 0.12, 120, 0.34, 50e3, 0.9, 250e3, rear, null);
-        Vehicle car = new Vehicle("Gillespie problem", weightLb * POUND, 0.55, null, 0.56, 10.5 * FOOT, null,
+        Vehicle car = new Vehicle("published understeer problem", weightLb * POUND, 0.55, null, 0.56, 10.5 * FOOT, null,
                 frontAxle, rearAxle, 0.06);
         AnalysisResult result = VehicleAnalysis.analyse(car);
 
@@ -153,7 +154,7 @@ class UndersteerGradientTest {
 
     @Test
     void stifferRearBarMovesTheBalanceTowardsOversteer() {
-        // common practice (checks.md, facts of the trade): more rear roll stiffness moves load transfer to the
+        // common practice (docs/validation.md, section "Facts of the trade"): more rear roll stiffness moves load transfer to the
         // rear, and with load-sensitive tyres (s < 0) the rear's grip falls: rear limit down, front limit up
         Vehicle car = TestCars.clubCar();
         Vehicle stiffRear = car.withRear(car.rear().withBar(TestCars.solidBar(0.024, 1.0, 0.9, 0.18, 0.9)));

@@ -12,7 +12,7 @@ import static org.assertj.core.api.Assertions.withinPercentage;
 /**
  * Conversion factors against NIST Special Publication 811 (Guide for the Use of the International System of
  * Units), appendix B: 1 in = 0.0254 m and 1 lb = 0.453 592 37 kg exactly; g_n = 9.806 65 m/s^2 exactly; so
- * 1 lbf = 4.448 221 615 260 5 N (the table's figure). Derived values as in shared/reference/checks.md.
+ * 1 lbf = 4.448 221 615 260 5 N (the table's figure). Derived values: docs/validation.md, section "Units".
  */
 class UnitsTest {
     @Test
@@ -25,7 +25,8 @@ class UnitsTest {
 
     @Test
     void poundForceMatchesTheNistTable() {
-        // NIST SP 811 B.8: 1 lbf = 4.448 222 E+00 N; B.9 (footnote, exact): 4.448 221 615 260 5 N
+        // NIST SP 811 B.8/B.9 as recalled (from memory): 1 lbf = 4.448 222 E+00 N, exactly 4.448 221 615 260 5 N,
+        // which is also exact arithmetic from the definitions (docs/validation.md, section "Units")
         assertThat(Constants.NEWTONS_PER_POUND_FORCE).isCloseTo(4.4482216152605, within(1e-13));
         // NIST SP 811 B.8: 1 psi = 6.894 757 E+03 Pa (7 figures: half a unit of the last)
         assertThat(Constants.PASCALS_PER_PSI).isCloseTo(6.894757e3, within(0.0005));
@@ -33,7 +34,7 @@ class UnitsTest {
 
     @Test
     void displayUnitsOfTheTradeMatchChecks() {
-        // checks.md: 1 lbf/in = 0.175 126 835 N/mm; 1 ft lbf/deg = 1.355 817 948 N m/deg (9 figures: 5e-10)
+        // docs/validation.md, "Units" (arithmetic): 1 lbf/in = 0.175 126 835 N/mm; 1 ft lbf/deg = 1.355 817 948 N m/deg (9 figures: 5e-10)
         DisplayUnit rate = Quantity.LINEAR_RATE.unit(UnitSystem.US);
         assertThat(rate.toSi(1) / 1e3).isCloseTo(0.175126835, within(5e-10));
         DisplayUnit roll = Quantity.ROLL_STIFFNESS.unit(UnitSystem.US);

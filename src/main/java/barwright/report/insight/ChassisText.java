@@ -56,8 +56,11 @@ public final class ChassisText {
 
     /** @return the sentence on how stiff the chassis must be, with the source of the rule */
     public String statement(ChassisStudyResult study) {
-        String rule = " Sizing the chassis against the suspension's roll stiffness so that suspension changes keep "
-                + "their effect is a rule discussed by Deakin et al., SAE 2000-01-3554.";
+        // Only the paper's title page was read: cite it for its subject, and the target as the program's own
+        // choice (docs/validation.md, sections "Flexible chassis" and "The program's own choices").
+        String rule = " The " + wholePercent(ChassisStudy.DELIVERED_TARGET) + " target is this program's own choice, "
+                + "not a published figure; sizing the chassis against the suspension's roll stiffness is the subject "
+                + "of Deakin et al., SAE 2000-01-3554, cited here for its subject only.";
         if (study.stiffnessForTarget() == null) {
             // the study's notes say why: no stiffness in the range searched reaches it, or every stable one does
             return "No single chassis stiffness is stated for the bar change (" + study.barChange() + ") to deliver "

@@ -18,8 +18,8 @@ import static barwright.units.Conversions.toPercent;
 final class BalanceWork {
     private static final String ROLL_SOURCE = "model.md section 5: Milliken & Milliken, Race Car Vehicle Dynamics, "
             + "ch. 18; Gillespie, Fundamentals of Vehicle Dynamics, ch. 8";
-    private static final String FLEXIBLE_SOURCE = ROLL_SOURCE + "; flexible chassis model.md section 6: Deakin et "
-            + "al., SAE 2000-01-3554; Milliken & Milliken ch. 16";
+    private static final String FLEXIBLE_SOURCE = ROLL_SOURCE + "; flexible chassis model.md section 6 (its subject: "
+            + "Deakin et al., SAE 2000-01-3554); Milliken & Milliken ch. 16";
 
     private BalanceWork() {
     }

@@ -6,8 +6,8 @@ package barwright.solver.frame;
  *
  * <p>The local 12 x 12 matrix is the standard one of the direct stiffness method without shear deformation:
  * Przemieniecki, Theory of Matrix Structural Analysis (McGraw-Hill 1968, Dover 1985), ch. 5, the prismatic
- * space-frame element; the same matrix is printed in McGuire, Gallagher and Ziemian, Matrix Structural
- * Analysis (2nd ed., Wiley 2000), ch. 4. Split into 3 x 3 blocks (t = translations, r = rotations, A = start,
+ * space-frame element; the same matrix appears in McGuire, Gallagher and Ziemian, Matrix Structural
+ * Analysis (2nd ed., Wiley 2000), ch. 4 (both books and chapters cited from memory). Split into 3 x 3 blocks (t = translations, r = rotations, A = start,
  * B = end) it has only four distinct ones:
  * <pre>
  *   D     = K[tA,tA] = diag(EA/L, 12 EI_z/L^3, 12 EI_y/L^3)

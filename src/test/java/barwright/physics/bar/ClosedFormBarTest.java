@@ -23,7 +23,7 @@ import static org.assertj.core.api.Assertions.withinPercentage;
  * The closed-form U-bar of model.md 2 against independent derivations: pure torsion G J / (a^2 L) (Roark,
  * torsion of circular shafts), the cantilever deflection F a^3 / (3 E I) (Roark / Shigley, beam tables), an
  * energy integration of the bar's moment diagram worked out by statics in this test (Castigliano's theorem),
- * the series values of shared/reference/checks.md, and the stress formulas of Shigley ch. 3 and 5.
+ * the series values of docs/validation.md (section "Bar rate, series model"), and the stress formulas of Shigley ch. 3 and 5.
  */
 class ClosedFormBarTest {
     /** Effectively rigid: 1e30 Pa makes a compliance term 1e-19 of the others, far below double rounding. */
@@ -48,7 +48,7 @@ class ClosedFormBarTest {
         double rate = ClosedFormBar.linkRate(material(RIGID, 80e9), section, dimensions(1.0, 1.0, 0.25), 0.25);
         // closed form against closed form: 1e-12 relative (rounding only)
         assertThat(rate).isCloseTo(expected, withinPercentage(1e-10));
-        // checks.md, grade B: 52.3052 N/mm, checked to half a unit of the last printed place
+        // docs/validation.md, "Bar rate, series model" (arithmetic): 52.3052 N/mm, checked to half a unit of the last printed place
         assertThat(rate / 1e3).isCloseTo(52.3052, within(0.00005));
     }
 
@@ -58,7 +58,7 @@ class ClosedFormBarTest {
         // The two arms add their deflections to the relative travel: rate 3 E I / (2 a^3).
         SolidSection section = new SolidSection(CHECKS_D);
         double oneCantilever = 3 * 205e9 * section.bendingMoment() / Math.pow(0.25, 3);
-        // checks.md, grade B: one arm as a cantilever 804.192 N/mm
+        // docs/validation.md, "Bar rate, series model" (arithmetic): one arm as a cantilever 804.192 N/mm
         assertThat(oneCantilever / 1e3).isCloseTo(804.192, within(0.0005));
         double rate = ClosedFormBar.linkRate(material(205e9, RIGID), section, dimensions(1.0, 1.0, 0.25), 0.25);
         assertThat(rate).isCloseTo(oneCantilever / 2, withinPercentage(1e-10));
@@ -66,7 +66,7 @@ class ClosedFormBarTest {
 
     @Test
     void seriesModelMatchesTheChecksValues() {
-        // checks.md, grade B: 1 / (1/52.3052 + 2/804.192) = 46.2844 N/mm; with link motion ratio 0.70 and track
+        // docs/validation.md, "Bar rate, series model" (arithmetic): 1 / (1/52.3052 + 2/804.192) = 46.2844 N/mm; with link motion ratio 0.70 and track
         // 1.40 m, K_bar = k_link r^2 t^2 = 44 451.6 N m/rad = 775.826 N m/deg (torsion only 876.747 N m/deg)
         Material steel = material(205e9, 80e9);
         AntiRollBar bar = new AntiRollBar(steel, new SolidSection(CHECKS_D), dimensions(1.0, 1.0, 0.25), null, 0, 0.70);
@@ -84,7 +84,7 @@ class ClosedFormBarTest {
 
     @Test
     void imperialRuleOfThumbAgreesLoosely() {
-        // Puhn, How to Make Your Car Handle (from memory, via checks.md): k = 500 000 D^4 / (0.4244 A^2 B +
+        // Puhn, How to Make Your Car Handle (from memory; docs/validation.md, "Bar rate, series model"): k = 500 000 D^4 / (0.4244 A^2 B +
         // 0.2264 C^3) lb/in; D = 1 in, A = 10 in, B = 40 in, C = 10 in gives 259.875 lb/in for G = 12.0 Msi and
         // E = 30.0 Msi. A loose cross-check only: 0.01 % (its constants are rounded to 4 figures).
         double inch = 0.0254;
@@ -146,7 +146,7 @@ class ClosedFormBarTest {
         SolidSection section = new SolidSection(CHECKS_D);
         AntiRollBar bar = new AntiRollBar(steel, section, dimensions(1.0, 0.6, 0.25), null, 0, 0.8);
         double linkRate = ClosedFormBar.linkRate(bar);
-        // travel that puts T = F a = 500 N m on the tube: checks.md, grade B, tau = 155.396 MPa
+        // travel that puts T = F a = 500 N m on the tube: docs/validation.md, "Sections and torsion", tau = 155.396 MPa
         double force = 500 / 0.25;
         BarResult result = ClosedFormBar.analyse(bar, force / linkRate);
         assertThat(result.linkForce()).isCloseTo(force, withinPercentage(1e-10));

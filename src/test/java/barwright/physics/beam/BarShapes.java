@@ -17,8 +17,8 @@ import java.util.List;
  */
 final class BarShapes {
     /**
-     * Steel: E = 205 GPa and G = 80 GPa as in the check values of shared/reference/checks.md (bar rate,
-     * series model); density 7850 kg/m^3 (common practice for carbon steel); the yield strength is a test
+     * Steel: E = 205 GPa and G = 80 GPa as in docs/validation.md, section "Bar rate, series
+     * model"; density 7850 kg/m^3 (common practice for carbon steel); the yield strength is a test
      * value, used only through ratios.
      */
     static final Material STEEL = new Material("steel (test values)", 205e9, 80e9, 7850, 1100e6);

@@ -99,10 +99,10 @@ class BeamBarClosedFormTest {
     }
 
     @Test
-    void matchesThePublishedSeriesModelValue() {
-        // shared/reference/checks.md, "Bar rate, series model" (grade B, Castigliano): D = 25.4 mm solid,
+    void matchesTheSeriesModelValue() {
+        // docs/validation.md, section "Bar rate, series model" (arithmetic, Castigliano): D = 25.4 mm solid,
         // L = 1.0 m, a = 0.25 m, bushings at the bends, G = 80 GPa, E = 205 GPa: 46.2844 N/mm. The value is
-        // printed to 6 figures, so it is good to 1.1e-6 relative: allow 2e-6.
+        // given to 6 figures, so it is good to 1.1e-6 relative: allow 2e-6.
         AntiRollBar bar = uBar(new SolidSection(0.0254), 1.0, 1.0, 0.25, 0);
         double newtonsPerMillimetre = BeamBar.analyse(bar, TRAVEL).linkRate() / 1000;
         assertThat(newtonsPerMillimetre).isCloseTo(46.2844, within(2e-6 * 46.2844));

@@ -26,7 +26,7 @@ import static org.assertj.core.api.Assertions.withinPercentage;
 /**
  * The show-the-work derivations: each one's numbers must give its result by its own formula (re-computed
  * here, independently of the core), its result must be the figure the analysis reports, and where a
- * published figure exists (checks.md) the derivation must reach it.
+ * reference figure exists (docs/validation.md) the derivation must reach it.
  */
 class DerivationsTest {
     /** Closed forms re-computed from the shown inputs agree to rounding of doubles. */
@@ -110,8 +110,8 @@ class DerivationsTest {
 
     @Test
     void springAndTyreRollStiffnessMatchThePublishedChecks() throws Exception {
-        // checks.md, "Roll stiffness of springs and tyres": wheel rate 30 N/mm per side on a 1.40 m track gives
-        // 513.127 N m/deg; tyres of 200 N/mm each on 1.40 m give 3 420.85 N m/deg (printed to 6 digits)
+        // docs/validation.md, section "Roll stiffness of springs and tyres" (arithmetic): wheel rate 30 N/mm per side on a 1.40 m track gives
+        // 513.127 N m/deg; tyres of 200 N/mm each on 1.40 m give 3 420.85 N m/deg (6 digits)
         AnalysisResult result = analyse(tree -> {
             ObjectNode front = (ObjectNode) tree.get("front");
             front.put("springRateNPerMm", 30).put("springMotionRatio", 1.0).put("trackMm", 1400)
@@ -127,7 +127,7 @@ class DerivationsTest {
 
     @Test
     void theBarLinkRateMatchesThePublishedSeriesModelCheck() throws Exception {
-        // checks.md, "Bar rate, series model": D = 25.4 mm solid, L = 1.0 m, a = 0.25 m, bushings at the bends,
+        // docs/validation.md, section "Bar rate, series model" (arithmetic): D = 25.4 mm solid, L = 1.0 m, a = 0.25 m, bushings at the bends,
         // G = 80 GPa, E = 205 GPa: 46.2844 N/mm; with r = 0.70 and t = 1.40 m, 775.826 N m/deg (6 digits)
         AnalysisResult result = analyse(tree -> {
             ObjectNode front = (ObjectNode) tree.get("front");
@@ -222,10 +222,11 @@ class DerivationsTest {
     }
 
     @Test
-    void theUndersteerGradientMatchesGillespiesPublishedProblem() throws Exception {
-        // checks.md, "Understeer gradient": W = 4520 lb, wheelbase 10.5 ft, CG 0.45 of the wheelbase behind the
+    void theUndersteerGradientMatchesThePublishedProblem() throws Exception {
+        // docs/validation.md, section "Understeer gradient: a published problem" (a question-and-answer
+        // page naming no book; K by arithmetic from its inputs): W = 4520 lb, wheelbase 10.5 ft, CG 0.45 of the wheelbase behind the
         // front axle (front weight 0.55), 8750 lb/rad per front tyre and 8600 lb/rad per rear tyre:
-        // K = 1.3637 deg/g (B, from the printed inputs). Each tyre's reference load is set to its static load,
+        // K = 1.3637 deg/g. Each tyre's reference load is set to its static load,
         // so that its cornering stiffness there is k_c F_z0 exactly (model.md 8).
         double poundForce = 0.45359237 * STANDARD_GRAVITY;
         double frontWheel = 4520 * 0.55 / 2 * poundForce;

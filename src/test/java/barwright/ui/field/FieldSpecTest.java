@@ -14,7 +14,7 @@ import static org.assertj.core.api.Assertions.within;
 class FieldSpecTest {
     @Test
     void usCustomaryFieldsConvertByTheNistFactors() {
-        // NIST SP 811 appendix B (checks.md): 1 in = 25.4 mm, 1 lbf/in = 0.175 126 835 N/mm,
+        // docs/validation.md, section "Units" (NIST SP 811 appendix B definitions): 1 in = 25.4 mm, 1 lbf/in = 0.175 126 835 N/mm,
         // 1 lb = 0.453 592 37 kg, 1 ft lbf/deg = 1.355 817 948 N m/deg. The printed rate factors are rounded to
         // 9 and 10 significant digits, so they agree to 1e-8; the inch and the pound are exact.
         assertThat(FieldCatalogue.DIAMETER.toDisplay(25.4, UnitSystem.US)).isCloseTo(1.0, within(1e-12));

@@ -29,7 +29,7 @@ class BarSweepTest {
 
     @Test
     void aThickerFrontBarRaisesTheFrontShareAndLowersTheRoll() {
-        // common practice (checks.md, facts of the trade): a stiffer bar at one end takes more of the load
+        // common practice (docs/validation.md, section "Facts of the trade"): a stiffer bar at one end takes more of the load
         // transfer there and reduces body roll; J grows with D^4, so both move monotonically
         List<SweepResult.Point> points = BarSweep.run(car,
                 new SweepRequest(AxlePosition.FRONT, SweepParameter.DIAMETER)).points();

@@ -134,7 +134,7 @@ class MainWindowTest {
         assertThat(spring.text()).isEqualTo("70");
         fixture.frame.toggleButton("units.us").click();
         fixture.robot.waitForIdle();
-        // 1 lbf/in = 0.175 126 835 N/mm (NIST SP 811 appendix B, as in checks.md); shown with two decimals
+        // 1 lbf/in = 0.175 126 835 N/mm (docs/validation.md, section "Units"); shown with two decimals
         double shown = Double.parseDouble(spring.text().replace(',', '.'));
         assertThat(shown).isCloseTo(70 / 0.175126835, within(0.005));
         assertThat(fixture.frame.label("front.springRateNPerMm.unit").text()).isEqualTo("lbf/in");
