@@ -54,6 +54,38 @@ class HeldAccelerationTest {
         assertTrue(result.run().firstLift() > 0, "the lift is found as an event");
     }
 
+    /**
+     * A ramp of a_y over 40 s: at each a_y the roll is the steady analysis's, within the lag a damped system
+     * has behind a ramp. A linear I phi'' + C phi' + K phi = F t follows F (t - C/K) / K once its transient has
+     * decayed (from memory: the ramp response of a second-order system), so the relative lag at time t is
+     * (C/K)/t, with C the dampers' roll damping at low speed, MR^2 t^2/4 (bump slope + rebound slope) per axle
+     * (derived here from the damper curve) and K the stiffness left after gravity. The check allows 1.5 times
+     * that (the tyres in series make the true lag a little smaller, never larger); 1e-6 is out of reach for any
+     * finite ramp, which is why the held-a_y tests above carry the tight check.
+     */
+    @Test
+    void verySlowRampFollowsTheSteadyRollAtEachAcceleration() {
+        Vehicle car = TestCars.clubCar();
+        AnalysisResult steady = VehicleAnalysis.analyse(car);
+        double target = 0.8 * STANDARD_GRAVITY;
+        double rampSeconds = 40;
+        TransientResult result = TransientAnalysis.step(steady, DynamicsCars.damped(),
+                new LateralInput.Step(target, rampSeconds), rampSeconds);
+        // digressive(MR): bump 1500 N and rebound 2600 N at 0.1 m/s, so 15000 + 26000 N s/m at low speed
+        double lowSpeedSlopes = 15000 + 26000;
+        double damping = lowSpeedSlopes * (0.9 * 0.9 * 1.46 * 1.46 + 0.8 * 0.8 * 1.44 * 1.44) / 4;
+        double stiffness = steady.front().stiffness().rollStiffness() + steady.rear().stiffness().rollStiffness()
+                - steady.masses().gravityRollMoment();
+        double lag = damping / stiffness;
+        for (RollState state : result.run().states()) {
+            if (state.time() >= 5 && Math.round(state.time() * 1000) % 5000 == 0) {
+                double roll = TransientAnalysis.steadyRoll(steady, state.lateral());
+                assertEquals(roll, state.roll(), 1.5 * lag / state.time() * roll, "roll at " + state.time() + " s");
+                assertTrue(state.roll() < roll, "the roll lags behind the ramp");
+            }
+        }
+    }
+
     private static TransientResult check(Vehicle car, double held) {
         return check(car, held, 0.2);
     }
