@@ -30,6 +30,7 @@ public final class Cli {
             new CompareCommand(),
             new PreloadCommand(),
             new SheetCommand(),
+            new GeometryCommand(),
             new TransientCommand());
 
     private Cli() {

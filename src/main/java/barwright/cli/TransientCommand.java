@@ -27,7 +27,7 @@ import java.util.Set;
 
 /**
  * {@code transient FILE (--step-g G [--rise-s S] | --sine-g G --frequency-hz F | --log LAP.csv) [--duration-s D]
- * [--json] [--csv OUT.csv] [--units si|us]}: the roll in motion (model.md 11).
+ * [--json] [--csv OUT.csv] [--units si|us]}: the roll in motion (model.md 12).
  */
 final class TransientCommand implements Command {
     static final double MAX_G = 3;

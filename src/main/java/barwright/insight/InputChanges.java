@@ -18,7 +18,8 @@ import java.util.function.UnaryOperator;
 
 /**
  * The small changes of issue 6 for one car: one arm hole, 1 mm of bar diameter or wall, 10 % of spring rate
- * each end, 10 mm of roll-centre height, 10 % of tyre vertical rate, 10 kg of ballast moved forward and 5 mm
+ * each end, 10 mm of roll-centre height (or, where an axle has a linkage, 10 mm of a pickup point's height and of
+ * ride height: {@link LinkageChanges}), 10 % of tyre vertical rate, 10 kg of ballast moved forward and 5 mm
  * of CG height. SI values inside.
  */
 public final class InputChanges {
@@ -63,9 +64,14 @@ public final class InputChanges {
             changes.add(axleChange(position, end + "SpringRate", end + " spring rate", "stiffer " + end + " springs",
                     Quantity.LINEAR_RATE, spring, spring * (1 + RATE_STEP), a -> a.withSpringRate(spring * (1 + RATE_STEP))));
             double rollCentre = axle.rollCentreHeight();
-            changes.add(axleChange(position, end + "RollCentreHeight", end + " roll-centre height",
-                    "higher " + end + " roll centre", Quantity.LENGTH, rollCentre, rollCentre + ROLL_CENTRE_STEP,
-                    a -> a.withRollCentreHeight(rollCentre + ROLL_CENTRE_STEP)));
+            if (axle.hasLinkage()) {
+                // the roll centre comes from the linkage: its points and ride height are what a setter changes
+                LinkageChanges.add(vehicle, position, changes);
+            } else {
+                changes.add(axleChange(position, end + "RollCentreHeight", end + " roll-centre height",
+                        "higher " + end + " roll centre", Quantity.LENGTH, rollCentre, rollCentre + ROLL_CENTRE_STEP,
+                        a -> a.withRollCentreHeight(rollCentre + ROLL_CENTRE_STEP)));
+            }
             double tyre = axle.tyreVerticalRate();
             changes.add(axleChange(position, end + "TyreVerticalRate", end + " tyre vertical rate",
                     "stiffer " + end + " tyres (vertical rate)", Quantity.LINEAR_RATE, tyre, tyre * (1 + RATE_STEP),

@@ -2,6 +2,7 @@ package barwright.io;
 
 import barwright.model.AntiRollBar;
 import barwright.model.Axle;
+import barwright.model.SuspensionGeometry;
 import barwright.model.Tyre;
 import com.fasterxml.jackson.databind.JsonNode;
 
@@ -10,7 +11,7 @@ final class AxleReader {
     private AxleReader() {
     }
 
-    static Axle read(JsonNode node, String path, NodeReader reader) {
+    static Axle read(JsonNode node, String path, NodeReader reader, int version) {
         int before = reader.problems().size();
         double track = reader.number(node, path, "trackMm", Range.between(300, 4000, "mm")) * 1e-3;
         double rollCentre = reader.number(node, path, "rollCentreHeightMm", Range.between(-500, 1500, "mm")) * 1e-3;
@@ -29,6 +30,8 @@ final class AxleReader {
         if (reader.problems().size() > before || tyre == null) {
             return null;
         }
-        return new Axle(track, rollCentre, unsprungMass, unsprungHeight, springRate, springRatio, tyreRate, tyre, bar);
+        Axle axle = new Axle(track, rollCentre, unsprungMass, unsprungHeight, springRate, springRatio, tyreRate, tyre, bar);
+        SuspensionGeometry suspension = LinkageReader.read(node, path, reader, version, axle);
+        return suspension == null ? null : axle.withSuspension(suspension);
     }
 }

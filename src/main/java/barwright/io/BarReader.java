@@ -129,7 +129,9 @@ final class BarReader {
             }
             case TUBE -> {
                 // the wall is judged against the diameter only where both were accepted
+                int beforeWall = reader.problems().size();
                 double wall = reader.number(sectionNode, sectionPath, WALL_MM, Range.above(0, 100, "mm"));
+                PracticalMinimum.WALL.check(reader, sectionPath, wall, beforeWall);
                 int before = beforeDiameter;
                 if (reader.problems().size() == before && !(wall < diameter / 2)) {
                     reader.problem(sectionPath + ".wallMm", "= " + Range.format(wall) + " mm: must be less than half "
@@ -153,6 +155,7 @@ final class BarReader {
         double span = length;
         if (!NodeReader.isAbsent(node, "bushingSpanMm")) {
             span = reader.number(node, path, "bushingSpanMm", Range.above(0, 3000, "mm"));
+            PracticalMinimum.BUSHING_SPAN.check(reader, path, span, before);
             if (reader.problems().size() == before && span > length) {
                 reader.problem(path + ".bushingSpanMm", "= " + Range.format(span) + " mm: must not exceed "
                         + "torsionLengthMm (" + Range.format(length) + " mm)");
@@ -169,7 +172,9 @@ final class BarReader {
     private static BarCentreline readCentreline(JsonNode node, String path, NodeReader reader) {
         int before = reader.problems().size();
         List<Point3> points = points(node, path, "centrelineMm", 2, 200, reader);
+        int beforeRadius = reader.problems().size();
         double bendRadius = reader.number(node, path, "bendRadiusMm", Range.between(0, 500, "mm"));
+        PracticalMinimum.BEND_RADIUS.check(reader, path, bendRadius, beforeRadius);
         List<Point3> bushings = points(node, path, "bushingsMm", 2, 8, reader);
         Double bushingRate = NodeReader.isAbsent(node, "bushingRadialRateNPerMm") ? null
                 : reader.number(node, path, "bushingRadialRateNPerMm", Range.between(1, 1e7, "N/mm")) * 1e3;

@@ -18,8 +18,8 @@ import static barwright.units.Constants.RADIANS_PER_DEGREE;
 public final class VehicleFileReader {
     /** The file format's name, the value of the key {@code format}. */
     public static final String FORMAT = "barwright.vehicle";
-    /** The newest file version this program reads and writes. */
-    public static final int VERSION = 1;
+    /** The newest file version this program reads and writes ({@link FileVersion}). */
+    public static final int VERSION = FileVersion.CURRENT;
     /** The largest vehicle file read (bytes), the limit of every file the program reads. */
     public static final long MAX_BYTES = JsonInput.MAX_BYTES;
     /** The bar stress check travel where the file gives none (mm), files.md. */
@@ -69,7 +69,7 @@ public final class VehicleFileReader {
         if (reader.hasProblems() || vehicle == null) {
             throw new VehicleFileException(reader.problems());
         }
-        return new VehicleDocument(tree.deepCopy(), vehicle);
+        return new VehicleDocument(FileVersion.upgrade(tree), vehicle);
     }
 
     private static void checkHeader(JsonNode tree, NodeReader reader) {
@@ -85,7 +85,7 @@ public final class VehicleFileReader {
                     + ". Update Barwright to open it.");
             return;
         }
-        reader.integer(tree, "", "version", 1, VERSION);
+        reader.integer(tree, "", "version", FileVersion.OLDEST, VERSION);
     }
 
     private static Vehicle readVehicle(JsonNode tree, NodeReader reader) {
@@ -95,12 +95,14 @@ public final class VehicleFileReader {
         JsonNode frontNode = reader.object(tree, "", "front", true);
         JsonNode rearNode = reader.object(tree, "", "rear", true);
         JsonNode analysis = reader.object(tree, "", "analysis", false);
+        int beforeTravel = reader.problems().size();
         double travelMm = analysis == null ? DEFAULT_DIFFERENTIAL_TRAVEL_MM
                 : reader.optionalNumber(analysis, "analysis", "differentialWheelTravelMm",
                 Range.above(0, 500, "mm"), DEFAULT_DIFFERENTIAL_TRAVEL_MM);
+        PracticalMinimum.CHECK_TRAVEL.check(reader, "analysis", travelMm, beforeTravel);
 
-        Axle front = frontNode == null ? null : AxleReader.read(frontNode, "front", reader);
-        Axle rear = rearNode == null ? null : AxleReader.read(rearNode, "rear", reader);
+        Axle front = frontNode == null ? null : AxleReader.read(frontNode, "front", reader, FileVersion.of(tree));
+        Axle rear = rearNode == null ? null : AxleReader.read(rearNode, "rear", reader, FileVersion.of(tree));
         if (body == null) {
             return null;
         }

@@ -17,8 +17,12 @@ public final class VehicleFileWriter {
     private VehicleFileWriter() {
     }
 
-    /** @return the tree as pretty-printed JSON text, two-space indent, ending in a newline */
+    /**
+     * @return the tree as pretty-printed JSON text, two-space indent, ending in a newline
+     * @throws IllegalStateException where a number in the tree is NaN or infinite ({@link FiniteNumbers})
+     */
     public static String toJson(JsonNode tree) {
+        FiniteNumbers.require(tree);
         DefaultPrettyPrinter printer = new DefaultPrettyPrinter()
                 .withObjectIndenter(new DefaultIndenter("  ", "\n"))
                 .withArrayIndenter(new DefaultIndenter("  ", "\n"));

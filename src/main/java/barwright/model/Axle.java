@@ -12,10 +12,12 @@ package barwright.model;
  * @param tyreVerticalRate   vertical rate of one tyre (N/m)
  * @param tyre               the tyre's grip model
  * @param bar                the anti-roll bar, or null for none
+ * @param suspension         the linkage, ride-height change and static camber; {@link SuspensionGeometry#NONE}
+ *                           where the roll-centre height is typed in
  */
 public record Axle(double track, double rollCentreHeight, double unsprungMass, double unsprungCgHeight,
                    double springRate, double springMotionRatio, double tyreVerticalRate, Tyre tyre,
-                   AntiRollBar bar) {
+                   AntiRollBar bar, SuspensionGeometry suspension) {
     public Axle {
         Checks.positive("track", track);
         Checks.finite("rollCentreHeight", rollCentreHeight);
@@ -25,6 +27,24 @@ public record Axle(double track, double rollCentreHeight, double unsprungMass, d
         Checks.positive("springMotionRatio", springMotionRatio);
         Checks.positive("tyreVerticalRate", tyreVerticalRate);
         java.util.Objects.requireNonNull(tyre, "tyre");
+        java.util.Objects.requireNonNull(suspension, "suspension");
+    }
+
+    /** An axle with no linkage: the roll-centre height as typed. */
+    public Axle(double track, double rollCentreHeight, double unsprungMass, double unsprungCgHeight,
+                double springRate, double springMotionRatio, double tyreVerticalRate, Tyre tyre, AntiRollBar bar) {
+        this(track, rollCentreHeight, unsprungMass, unsprungCgHeight, springRate, springMotionRatio,
+                tyreVerticalRate, tyre, bar, SuspensionGeometry.NONE);
+    }
+
+    /** @return true where the axle has a linkage whose roll centre is computed */
+    public boolean hasLinkage() {
+        return suspension.hasLinkage();
+    }
+
+    public Axle withSuspension(SuspensionGeometry newSuspension) {
+        return new Axle(track, rollCentreHeight, unsprungMass, unsprungCgHeight, springRate, springMotionRatio,
+                tyreVerticalRate, tyre, bar, newSuspension);
     }
 
     /** @return true where the axle has an anti-roll bar */
@@ -34,21 +54,21 @@ public record Axle(double track, double rollCentreHeight, double unsprungMass, d
 
     public Axle withBar(AntiRollBar newBar) {
         return new Axle(track, rollCentreHeight, unsprungMass, unsprungCgHeight, springRate, springMotionRatio,
-                tyreVerticalRate, tyre, newBar);
+                tyreVerticalRate, tyre, newBar, suspension);
     }
 
     public Axle withSpringRate(double newRate) {
         return new Axle(track, rollCentreHeight, unsprungMass, unsprungCgHeight, newRate, springMotionRatio,
-                tyreVerticalRate, tyre, bar);
+                tyreVerticalRate, tyre, bar, suspension);
     }
 
     public Axle withRollCentreHeight(double newHeight) {
         return new Axle(track, newHeight, unsprungMass, unsprungCgHeight, springRate, springMotionRatio,
-                tyreVerticalRate, tyre, bar);
+                tyreVerticalRate, tyre, bar, suspension);
     }
 
     public Axle withTyreVerticalRate(double newRate) {
         return new Axle(track, rollCentreHeight, unsprungMass, unsprungCgHeight, springRate, springMotionRatio,
-                newRate, tyre, bar);
+                newRate, tyre, bar, suspension);
     }
 }

@@ -42,6 +42,7 @@ public final class Warnings {
                         axle.key(), bar.safetyFactor(), LOW_SAFETY_FACTOR)));
             }
         }
+        ModelRangeWarnings.addTo(warnings, result);
         return warnings;
     }
 

@@ -9,10 +9,12 @@ public final class Cautions {
             + "of your event or local authority, and test with care.";
 
     /** What the model leaves out (model.md 10). */
-    public static final String NOT_MODELLED = "Not modelled: transient behaviour and damping; camber change with "
-            + "roll; kinematic roll-centre migration; compliance steer; aerodynamic loads; combined slip; stress "
+    public static final String NOT_MODELLED = "Not modelled: transient behaviour and damping; camber's effect on "
+            + "grip; roll-centre migration in the limits and handling curve (it is reported at the limit where an axle "
+            + "has a linkage); compliance steer; aerodynamic loads; combined slip; stress "
             + "concentrations at bends and ends of the bar; fatigue (the safety factor is static, against yield: a "
-            + "bar cycled for a season needs a fatigue margin on top). Roll-centre heights are inputs.";
+            + "bar cycled for a season needs a fatigue margin on top). Roll-centre heights are inputs where an axle "
+            + "has no linkage.";
 
     private Cautions() {
     }

@@ -12,6 +12,7 @@ import barwright.physics.bar.BarResult;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import barwright.report.linkage.LinkageFigures;
 
 import static barwright.units.Conversions.perDegree;
 import static barwright.units.Conversions.perG;
@@ -44,8 +45,11 @@ public final class ReportJson {
         vehicle.put("sprungCgHeightMm", toMillimetres(result.masses().sprungCgHeight()));
         vehicle.put("rollAxisHeightAtCgMm", toMillimetres(result.masses().rollAxisHeightAtCg()));
         vehicle.put("rollArmMm", toMillimetres(result.masses().rollArm()));
+        LinkageFigures linkages = LinkageFigures.of(result);
         for (AxlePosition axle : AxlePosition.values()) {
-            report.set(axle.key(), axle(result.axle(axle)));
+            ObjectNode node = axle(result.axle(axle));
+            linkages.putInto(node, axle);
+            report.set(axle.key(), node);
         }
         report.put("rollGradientDegPerG", toDegreesPerG(result.rollGradient()));
         report.put("suspensionRollGradientDegPerG", toDegreesPerG(result.suspensionRollGradient()));

@@ -1,5 +1,6 @@
 package barwright.report;
 
+import barwright.report.linkage.LinkageFigures;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
@@ -19,6 +20,7 @@ import static barwright.units.Conversions.toPercent;
 
 /** The readable summary the command line prints for {@code analyze FILE}. */
 public final class TextSummary {
+    private static final java.util.regex.Pattern NON_FINITE = java.util.regex.Pattern.compile("NaN|Infinity");
     private final UnitSystem units;
     private final StringBuilder out = new StringBuilder();
 
@@ -43,6 +45,9 @@ public final class TextSummary {
         line("");
         line(String.format(Locale.ROOT, "%-34s %18s %18s", "Per axle", "front", "rear"));
         axleRows(result);
+        LinkageFigures linkages = LinkageFigures.of(result);
+        linkages.rows(units).forEach(row -> pair(row[0], row[1], row[2]));
+        linkages.notes().forEach(this::line);
         line("");
         line("Balance");
         row("roll gradient", f(result.rollGradient(), Quantity.ROLL_GRADIENT, 2)
@@ -135,11 +140,26 @@ public final class TextSummary {
     }
 
     private void row(String label, String value) {
+        requireDefined(label, value);
         line(String.format(Locale.ROOT, "  %-32s %s", label, value));
     }
 
     private void pair(String label, String front, String rear) {
+        requireDefined(label + " (front)", front);
+        requireDefined(label + " (rear)", rear);
         line(String.format(Locale.ROOT, "  %-32s %18s %18s", label, front, rear));
+    }
+
+    /**
+     * Every figure passes here: Java formats a non-finite number as "NaN" or "Infinity", which must never
+     * reach a reader, so the summary is refused naming the row (the JSON report has the same guard,
+     * {@code io.FiniteNumbers}).
+     */
+    private static void requireDefined(String label, String value) {
+        if (NON_FINITE.matcher(value).find()) {
+            throw new IllegalStateException("nothing was printed: '" + label + "' came out as " + value
+                    + ", not a number; this is a fault in Barwright, not in your file");
+        }
     }
 
     private void line(String text) {

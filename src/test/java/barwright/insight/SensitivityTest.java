@@ -149,6 +149,8 @@ class SensitivityTest {
                 assertThat(changed.mass()).isEqualTo(vehicle.mass());
             } else if (change.key().equals("cgHeight")) {
                 assertThat(step).isCloseTo(5e-3, within(STEP_TOLERANCE));
+            } else if (change.key().endsWith("PickupPointHeight") || change.key().endsWith("RideHeight")) {
+                assertThat(step).isCloseTo(10e-3, within(STEP_TOLERANCE));
             }
         }
     }
@@ -166,8 +168,27 @@ class SensitivityTest {
             case "TyreVerticalRate" -> a.tyreVerticalRate();
             case "ballastForward" -> vehicle.mass() * vehicle.frontMassFraction();
             case "cgHeight" -> vehicle.cgHeight();
+            case "RideHeight" -> a.suspension().rideHeightChange();
+            case "PickupPointHeight" -> pickupHeight(a.suspension().linkage());
             default -> throw new IllegalArgumentException(key);
         };
+    }
+
+    /** The pickup point each linkage type raises in the sensitivity list: the one a setter shims. */
+    private static double pickupHeight(barwright.model.Linkage linkage) {
+        if (linkage instanceof barwright.model.DoubleWishbone arms) {
+            return arms.lowerInner().z();
+        }
+        if (linkage instanceof barwright.model.Strut strut) {
+            return strut.lowerInner().z();
+        }
+        if (linkage instanceof barwright.model.LiveAxlePanhard rod) {
+            return rod.bodyEnd().z();
+        }
+        if (linkage instanceof barwright.model.SemiTrailingArm arm) {
+            return arm.pivotInner().z();
+        }
+        throw new IllegalArgumentException("no sample has " + linkage);
     }
 
     /** Common practice: a stiffer front bar raises the front share of load transfer, a stiffer rear one lowers it. */

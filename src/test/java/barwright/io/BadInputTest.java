@@ -97,8 +97,8 @@ class BadInputTest {
                 arguments("no format", "format", null, "format is missing"),
                 arguments("no version", "version", null, "version is missing"),
                 // version and format
-                arguments("newer version", "version", "2", "version = 2: this file was written by a newer Barwright"),
-                arguments("version 0", "version", "0", "version = 0: must be a whole number from 1 to 1"),
+                arguments("newer version", "version", "3", "version = 3: this file was written by a newer Barwright"),
+                arguments("version 0", "version", "0", "version = 0: must be a whole number from 1 to 2"),
                 arguments("version as text", "version", "\"1\"", "version = \"1\": must be a whole number"),
                 arguments("another format", "format", "\"some.other.format\"",
                         "format = \"some.other.format\": must be \"barwright.vehicle\""));
@@ -123,8 +123,8 @@ class BadInputTest {
                 arguments("only white space", "  \n\t ", "the file is empty"),
                 arguments("not JSON at all", "hello, I am a car", "not valid JSON at line 1"),
                 arguments("cut short", good.substring(0, good.length() / 2), "not valid JSON at line"),
-                arguments("trailing comma", good.replace("\"version\": 1,", "\"version\": 1,,"), "not valid JSON at line 3"),
-                arguments("duplicate key", good.replace("\"version\": 1,", "\"version\": 1, \"version\": 1,"),
+                arguments("trailing comma", good.replace("\"version\": 2,", "\"version\": 2,,"), "not valid JSON at line 3"),
+                arguments("duplicate key", good.replace("\"version\": 2,", "\"version\": 2, \"version\": 2,"),
                         "not valid JSON at line 3"),
                 arguments("single quotes", good.replace("\"name\":", "'name':"), "not valid JSON at line 4"),
                 arguments("a list, not an object", "[1, 2, 3]", "must hold one JSON object"),

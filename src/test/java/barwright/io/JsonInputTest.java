@@ -85,13 +85,13 @@ class JsonInputTest {
     static Stream<Arguments> handWrittenMistakes() {
         String good = Fixtures.testVehicleText();
         return Stream.of(
-                arguments("a comment", good.replace("\"version\": 1,", "\"version\": 1, // first")),
+                arguments("a comment", good.replace("\"version\": 2,", "\"version\": 2, // first")),
                 arguments("single quotes", good.replace("\"name\":", "'name':")),
                 arguments("a leading zero", good.replace("\"massKg\": 1050", "\"massKg\": 01050")),
                 arguments("a plus sign", good.replace("\"massKg\": 1050", "\"massKg\": +1050")),
                 arguments("a word", good.replace("\"massKg\": 1050", "\"massKg\": heavy")),
                 arguments("a tab inside a text", good.replace("\"name\": \"", "\"name\": \"\t")),
-                arguments("a doubled comma", good.replace("\"version\": 1,", "\"version\": 1,,")),
+                arguments("a doubled comma", good.replace("\"version\": 2,", "\"version\": 2,,")),
                 arguments("cut short", good.substring(0, good.length() / 2)),
                 arguments("a word after the object", good + "trailing"));
     }
@@ -108,8 +108,8 @@ class JsonInputTest {
 
     @Test
     void aHugeVersionIsNotCalledAFileVersion() {
-        String message = refusal(Fixtures.testVehicleText().replace("\"version\": 1,", "\"version\": 1e400,"));
-        assertThat(message).contains("version = Infinity: must be a whole number from 1 to 1")
+        String message = refusal(Fixtures.testVehicleText().replace("\"version\": 2,", "\"version\": 1e400,"));
+        assertThat(message).contains("version = Infinity: must be a whole number from 1 to 2")
                 .doesNotContain("file version");
     }
 

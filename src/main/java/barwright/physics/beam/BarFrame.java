@@ -19,13 +19,15 @@ import java.util.List;
  * <p>Each bushing holds the bar radially (perpendicular to the centreline's tangent there), rigidly or by a
  * spring of the bushing's radial rate in every radial direction, and leaves it free to turn (rotations
  * free: the simple supports of the closed form, model.md 2). The first bushing also holds the bar along its
- * axis, rigidly (the bushings' collars; an axial rate is not an input). The links push along z at the link
- * points: +1 N at the left one and -1 N at the right one, the equal and opposite pair of model.md 2.
+ * axis, rigidly (the bushings' collars; an axial rate is not an input).
  *
- * <p>Such supports leave one motion free: the bar turning as a rigid body about the bushing axis. It is
- * stopped by a rigid rotation constraint about that axis at the first bushing. For a bar whose link points
- * sit at equal lever arms about the axis the pair of link forces has no moment about it, so the constraint
- * carries nothing and changes nothing; {@link #checkRotationCarriesNoLoad} verifies that from the solution.
+ * <p>Such supports leave one motion free: the bar turning as a rigid body about the bushing axis, which
+ * moves each link point along z by its lever arm m (the moment of a unit z force there about the axis)
+ * times the angle. It is stopped by a rigid rotation constraint about that axis at the first bushing. The
+ * links push along z with forces that have no moment about the axis, so the constraint carries nothing:
+ * +m_R/m and -m_L/m newtons at the left and right link points, m = (m_L + m_R)/2 (model.md 2, "Unequal
+ * lever arms"). With equal lever arms that is the +1 N / -1 N pair of the closed form.
+ * {@link #checkRotationCarriesNoLoad} verifies from the solution that the constraint carries nothing.
  */
 public final class BarFrame {
     /** How far (m) a bushing centre may sit off the line through the first and last bushings. */
@@ -36,15 +38,26 @@ public final class BarFrame {
      * affects the rate by far less than the model's own idealisations.
      */
     static final double FREE_ROTATION_MOMENT_FRACTION = 1e-3;
+    /**
+     * The two lever arms may differ by at most this fraction of their mean. Within it the bar's resistance to
+     * both wheels rising together, which the roll-only link rate leaves out, changes the roll stiffness by a
+     * part in a hundred or less (model.md 2, "Unequal lever arms"); beyond it a bar is refused.
+     */
+    public static final double MAX_LEVER_ARM_DIFFERENCE = 0.10;
 
     private final BarMesh mesh;
     private final FrameModel model;
     private final Vector3 bushingAxis;
+    private final double leftLeverArm;
+    private final double rightLeverArm;
 
     private BarFrame(BarMesh mesh, FrameModel model, Vector3 bushingAxis) {
         this.mesh = mesh;
         this.model = model;
         this.bushingAxis = bushingAxis;
+        this.leftLeverArm = leverArm(mesh.leftLink());
+        this.rightLeverArm = leverArm(mesh.rightLink());
+        checkLeverArms();
     }
 
     /**
@@ -112,10 +125,27 @@ public final class BarFrame {
         return bushingAxis;
     }
 
-    /** @return +1 N along z at the left link point, -1 N at the right one */
+    /**
+     * @return link forces along z with no moment about the bushing axis: +m_R/m at the left link point and
+     *     -m_L/m at the right one (N), +1 N and -1 N where the lever arms are equal
+     */
     public List<NodalForce> unitLinkLoads() {
-        return List.of(NodalForce.force(mesh.leftLink(), Vector3.UNIT_Z),
-                NodalForce.force(mesh.rightLink(), Vector3.UNIT_Z.times(-1)));
+        double mean = signedMeanLeverArm();
+        return List.of(NodalForce.force(mesh.leftLink(), Vector3.UNIT_Z.times(rightLeverArm / mean)),
+                NodalForce.force(mesh.rightLink(), Vector3.UNIT_Z.times(-leftLeverArm / mean)));
+    }
+
+    /**
+     * The relative link travel under {@link #unitLinkLoads()}: (m_R w_L - m_L w_R) / m, which a rigid turn of
+     * the bar in its bushings leaves unchanged; w_L - w_R where the lever arms are equal (model.md 2).
+     *
+     * @param unit the solution under {@link #unitLinkLoads()}
+     * @return the compliance 1 / k_link (m/N)
+     */
+    double linkCompliance(FrameSolution unit) {
+        double left = unit.translation(mesh.leftLink()).z();
+        double right = unit.translation(mesh.rightLink()).z();
+        return (rightLeverArm * left - leftLeverArm * right) / signedMeanLeverArm();
     }
 
     /**
@@ -126,36 +156,63 @@ public final class BarFrame {
         return unit.reaction(mesh.bushings()[0]).moment().dot(bushingAxis);
     }
 
-    /** @return the mean lever arm of the two link forces about the bushing axis (m) */
+    /** @return the mean lever arm of the two link forces about the bushing axis, |m_L + m_R| / 2 (m) */
     double meanLeverArm() {
-        return (leverArm(mesh.leftLink()) + leverArm(mesh.rightLink())) / 2;
+        return Math.abs(signedMeanLeverArm());
     }
 
+    /** @return (m_L + m_R) / 2 with its sign, which depends on the direction of the axis (m) */
+    private double signedMeanLeverArm() {
+        return (leftLeverArm + rightLeverArm) / 2;
+    }
+
+    /** @return m: the moment about the bushing axis of a unit z force at the node, axis . (r x z) (m) */
     private double leverArm(int linkNode) {
         Vector3 fromAxis = mesh.nodes().get(linkNode).minus(mesh.nodes().get(mesh.bushings()[0]));
-        return Math.abs(bushingAxis.dot(fromAxis.cross(Vector3.UNIT_Z)));
+        return bushingAxis.dot(fromAxis.cross(Vector3.UNIT_Z));
+    }
+
+    /**
+     * Refuses link points the link forces cannot twist the bar through: on the bushing axis, on opposite
+     * sides of it (arms pointing opposite ways: the bar turns freely in roll and resists only both wheels
+     * rising together), or at lever arms that differ by more than {@link #MAX_LEVER_ARM_DIFFERENCE}.
+     */
+    private void checkLeverArms() {
+        double left = Math.abs(leftLeverArm);
+        double right = Math.abs(rightLeverArm);
+        if (!(Math.min(left, right) > BUSHING_AXIS_TOLERANCE)) {
+            throw new IllegalArgumentException("a link point lies on the bushing axis (lever arms: left "
+                    + LengthText.of(left) + ", right " + LengthText.of(right)
+                    + "): vertical link forces cannot twist this bar");
+        }
+        if (leftLeverArm * rightLeverArm < 0) {
+            throw new IllegalArgumentException("the arms point opposite ways from the bushing axis (left link "
+                    + LengthText.of(left) + " on one side, right link " + LengthText.of(right) + " on the other): "
+                    + "such a bar turns freely in its bushings as the car rolls and resists only both wheels "
+                    + "rising together, so it is no anti-roll bar; point both arms the same way");
+        }
+        if (Math.abs(left - right) > MAX_LEVER_ARM_DIFFERENCE * meanLeverArm()) {
+            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT, "the link points sit at "
+                    + "unequal lever arms about the bushing axis (left %s, right %s, %.0f %% apart; at most %.0f %% "
+                    + "is modelled): such a bar also resists both wheels rising together, which this model "
+                    + "leaves out", LengthText.of(left), LengthText.of(right),
+                    100 * Math.abs(left - right) / meanLeverArm(), 100 * MAX_LEVER_ARM_DIFFERENCE));
+        }
     }
 
     /**
      * Confirms that the constraint against turning about the bushing axis carries (almost) nothing, as the
-     * free rotation of a real bar in its bushings demands.
+     * free rotation of a real bar in its bushings demands: the link forces were chosen with no moment about
+     * the axis, so a moment here means the solution is not to be trusted.
      *
-     * @throws IllegalArgumentException where the link forces have a moment about the bushing axis: the link
-     *                                  points are not at equal lever arms, so equal and opposite link forces
-     *                                  (model.md 2) would turn the bar
+     * @throws IllegalStateException where the constraint carries a moment past round-off
      */
     void checkRotationCarriesNoLoad(FrameSolution unit) {
-        double lever = meanLeverArm();
-        if (!(lever > BUSHING_AXIS_TOLERANCE)) {
-            throw new IllegalArgumentException("the link points lie on the bushing axis (lever arm "
-                    + LengthText.of(lever) + "): vertical link forces cannot twist this bar");
-        }
         double moment = rotationConstraintMoment(unit);
-        if (Math.abs(moment) > FREE_ROTATION_MOMENT_FRACTION * lever) {
-            throw new IllegalArgumentException("the link points sit at unequal lever arms about the bushing axis"
-                    + " (left " + LengthText.of(leverArm(mesh.leftLink())) + ", right "
-                    + LengthText.of(leverArm(mesh.rightLink())) + "): equal and opposite link forces would turn the bar in its bushings; this model"
-                    + " needs the two link points at equal lever arms");
+        if (!(Math.abs(moment) <= FREE_ROTATION_MOMENT_FRACTION * meanLeverArm())) {
+            throw new IllegalStateException("the constraint against turning in the bushings carries "
+                    + moment + " N m per N of link force (lever arms: left " + LengthText.of(leftLeverArm)
+                    + ", right " + LengthText.of(rightLeverArm) + "): the frame solution is not in equilibrium");
         }
     }
 }

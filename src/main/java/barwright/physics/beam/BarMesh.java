@@ -19,8 +19,13 @@ final class BarMesh {
     static final int ELEMENTS_PER_ARC = 8;
     /** How far from the centreline (m) a bushing centre may sit and still be taken as on it. */
     static final double ON_CENTRELINE_TOLERANCE = 1e-3;
-    /** Key positions closer than this along the centreline (m) share one node. */
-    private static final double SAME_STATION = 1e-9;
+    /**
+     * Key positions closer than this along the centreline (m) share one node. An element's bending stiffness
+     * grows as 1/L^3, so a sliver of an element between two nearly coincident key positions (a hole set back
+     * by a ten-thousandth of a millimetre) makes the frame's matrix lose positive definiteness in floating
+     * point; 0.1 mm is far below any dimension of a bar that matters and far above round-off.
+     */
+    private static final double SAME_STATION = 1e-4;
 
     private final CentrelinePath path;
     private final double[] stations;

@@ -22,7 +22,8 @@ import java.util.List;
  * (torsion of the tube, bending of the arms, the overhangs and the span) and gives the same rate.
  *
  * <p>The link rate is found from one solve with unit link forces: k_link = 1 N / (w_left - w_right), the
- * relative travel along z of the link points (model.md 2). The analysis is linear, so every force,
+ * relative travel along z of the link points (model.md 2; with unequal lever arms the forces and the travel
+ * are weighted by the arms, {@link BarFrame#unitLinkLoads()}). The analysis is linear, so every force,
  * stress and displacement at the check travel is the unit solution times F = k_link * Delta.
  */
 public final class BeamBar {
@@ -67,7 +68,9 @@ public final class BeamBar {
      * @param maxElementLength   the longest element (m); bends get at least 8 elements whatever it is
      * @throws IllegalArgumentException for a bar without a centreline, a centreline that cannot be meshed
      *                                  (bends that do not fit, bushings off the bar or off one axis, a hole
-     *                                  setback in a bend) or link points at unequal lever arms
+     *                                  setback in a bend) or link points that cannot twist it (on the
+     *                                  bushing axis, on opposite sides of it, or at lever arms more than
+     *                                  {@link BarFrame#MAX_LEVER_ARM_DIFFERENCE} apart)
      */
     public static BeamBarSolution solve(AntiRollBar bar, double relativeLinkTravel, double maxElementLength) {
         if (!Double.isFinite(relativeLinkTravel)) {
@@ -78,8 +81,7 @@ public final class BeamBar {
         FrameSolution unit = FrameSolver.solve(frame.model(), frame.unitLinkLoads());
         frame.checkRotationCarriesNoLoad(unit);
 
-        double compliance = unit.translation(mesh.leftLink()).z() - unit.translation(mesh.rightLink()).z();
-        double linkRate = 1 / compliance;
+        double linkRate = 1 / frame.linkCompliance(unit);
         double linkForce = linkRate * relativeLinkTravel;
         BarSection section = bar.section();
         List<StressStation> stations = BarStresses.stations(mesh, unit, frame.model().elements(), section, linkForce);

@@ -1,7 +1,7 @@
 package barwright.physics.dynamics;
 
 /**
- * One axle as the roll dynamics sees it (model.md 11): suspension (springs and bar at their motion ratios)
+ * One axle as the roll dynamics sees it (model.md 12): suspension (springs and bar at their motion ratios)
  * with its dampers, in series with the tyres.
  *
  * @param track                  t (m)

@@ -7,7 +7,7 @@ import barwright.physics.TyreModel;
 import java.util.List;
 
 /**
- * A logged lap replayed through the roll model (model.md 11): along the lap each axle's grip used (the
+ * A logged lap replayed through the roll model (model.md 12): along the lap each axle's grip used (the
  * lateral force it must give, m a_y b/l or m a_y a/l, over its capacity at that instant's wheel loads), and
  * over the lap the time each wheel spends lifted or near it.
  *

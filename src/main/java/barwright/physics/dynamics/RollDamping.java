@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.TreeSet;
 
 /**
- * An axle's roll damping moment against the roll rate of the body relative to the axle (model.md 11). The
+ * An axle's roll damping moment against the roll rate of the body relative to the axle (model.md 12). The
  * two dampers work at the motion ratio MR, t/2 from the centre, one in bump and one in rebound:
  * {@code M(w) = (t/2) MR [F(MR w t/2) - F(-MR w t/2)]} (N m), with F the damper curve, piecewise linear and
  * held at its end slopes beyond its points. M is odd and strictly rising, so it has an inverse.

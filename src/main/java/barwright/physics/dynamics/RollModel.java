@@ -10,7 +10,7 @@ import barwright.physics.MassProperties;
 import static barwright.units.Constants.STANDARD_GRAVITY;
 
 /**
- * The body's roll in motion (model.md 11): one roll angle for a rigid chassis, or a front and a rear end
+ * The body's roll in motion (model.md 12): one roll angle for a rigid chassis, or a front and a rear end
  * joined by the chassis stiffness K_c, each end with its share of the roll inertia I_xx + m_s h'^2 about the
  * roll axis (shared as the sprung mass is). Each axle's suspension moment (springs, bar and dampers) acts in
  * series with its tyres; gravity adds m_s g h' phi as in the steady model. The state is the roll and roll

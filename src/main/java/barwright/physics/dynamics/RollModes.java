@@ -4,7 +4,7 @@ import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
 
 /**
- * The linearised roll mode straight ahead (model.md 11): the eigenvalues of the roll model's Jacobian at rest
+ * The linearised roll mode straight ahead (model.md 12): the eigenvalues of the roll model's Jacobian at rest
  * with a_y = 0, where every damper curve is linear. The body's mode is the complex pair of least modulus:
  * omega_n = |lambda| and zeta = -Re(lambda) / |lambda|; with no complex pair (an overdamped body) the two real
  * eigenvalues of least size give omega_n = sqrt(lambda_1 lambda_2) and zeta = -(lambda_1 + lambda_2) /

@@ -9,7 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Runs the roll model through an input (model.md 11) with Commons Math's Dormand-Prince 8(5,3), locating each
+ * Runs the roll model through an input (model.md 12) with Commons Math's Dormand-Prince 8(5,3), locating each
  * moment an inside wheel's load reaches zero (or comes back) as an event, and stopping where both wheels of one
  * side are off the ground (the car rolls over).
  */

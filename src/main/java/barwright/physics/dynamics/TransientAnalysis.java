@@ -7,7 +7,7 @@ import barwright.physics.AnalysisResult;
 import barwright.physics.SteadyCornering;
 import barwright.physics.VehicleAnalysis;
 
-/** The roll in motion of an analysed car driven by a step, a sine or a log (model.md 11). */
+/** The roll in motion of an analysed car driven by a step, a sine or a log (model.md 12). */
 public final class TransientAnalysis {
     /** Spacing of the recorded states of a step or a sine (s): 1 ms, so a peak is found within 0.5 ms. */
     public static final double SAMPLE_INTERVAL = 1e-3;

@@ -3,7 +3,7 @@ package barwright.physics.dynamics;
 import java.util.List;
 
 /**
- * A run of the roll model and its figures (model.md 11), SI. A figure that does not apply is NaN here and
+ * A run of the roll model and its figures (model.md 12), SI. A figure that does not apply is NaN here and
  * null in the outputs: overshoot and time to 90 % need a held target (a step), a lift time needs a lift.
  *
  * @param modes             the linearised roll mode straight ahead

@@ -121,7 +121,7 @@ public final class FileCommands {
             return;
         }
         try {
-            ChartExport.write(chart.chart(), withExtension(target, type));
+            ChartExport.write(chart, withExtension(target, type));
         } catch (FileWriteException failed) {
             dialogs.showError("Chart not exported", "The chart could not be written: " + failed.getMessage() + ".");
         }

@@ -61,6 +61,8 @@ public final class MainWindow extends JFrame {
     private final List<WindowContribution> contributions;
     private final List<Runnable> firstPaint = new ArrayList<>();
     private final Runnable onClosed;
+    private ResultsLayout resultsLayout;
+    private JSplitPane mainSplit;
     private boolean painted;
 
     /**
@@ -105,6 +107,14 @@ public final class MainWindow extends JFrame {
         });
         setMinimumSize(new Dimension(960, 640));
         setSize(new Dimension(1280, 880));
+        addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent event) {
+                if (mainSplit.getDividerLocation() > mainSplit.getMinimumDividerLocation()) {
+                    fitEditor(); // not when the person has folded the editor away
+                }
+            }
+        });
         analysis.refresh();
     }
 
@@ -131,22 +141,29 @@ public final class MainWindow extends JFrame {
                 return new Dimension(Math.max(needed, FIGURES_WIDTH * textScale() / 100), 500);
             }
         };
-        rightScroll.setBorder(BorderFactory.createMatteBorder(0, 1, 0, 0,
+        rightScroll.setBorder(BorderFactory.createMatteBorder(1, 1, 0, 0,
                 UIManager.getColor("Component.borderColor")));
-        rightScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
+        // never clip a figure into a different number: scroll sideways when the column is too narrow
+        rightScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_AS_NEEDED);
         rightScroll.getVerticalScrollBar().setUnitIncrement(16);
-        JPanel resultsSplit = new JPanel(new BorderLayout());
-        resultsSplit.add(centre, BorderLayout.CENTER);
-        resultsSplit.add(rightScroll, BorderLayout.EAST);
+        rightScroll.getHorizontalScrollBar().setUnitIncrement(16);
+        rightScroll.setName("figures.scroll");
+        JPanel resultsSplit = new JPanel();
+        resultsLayout = new ResultsLayout(centre, rightScroll);
+        resultsSplit.setLayout(resultsLayout);
+        resultsSplit.add(centre);
+        resultsSplit.add(rightScroll);
         JPanel resultsArea = new JPanel(new BorderLayout());
         resultsArea.add(new StaleBanner(results), BorderLayout.NORTH);
         resultsArea.add(resultsSplit, BorderLayout.CENTER);
 
         JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, editor, resultsArea);
         main.setResizeWeight(0);
+        main.setOneTouchExpandable(true); // the editor folds away for a class or a small screen
         main.setDividerLocation(editor.getPreferredSize().width);
         main.setBorder(null);
         main.setName("main.split");
+        mainSplit = main;
         getContentPane().add(main, BorderLayout.CENTER);
     }
 
@@ -181,7 +198,24 @@ public final class MainWindow extends JFrame {
     void applyLook() {
         Themes.apply(theme(), textSize());
         tabs.restyle();
+        fitEditor();
         repaint();
+    }
+
+    /**
+     * Gives the editor room for its labels and fields at the current text size, but never more than 40 % of
+     * the window, so that the charts keep their room on a small screen.
+     */
+    void fitEditor() {
+        int wanted = VehicleEditor.WIDTH * textScale() / 100;
+        int allowed = Math.max(VehicleEditor.WIDTH, getWidth() * 40 / 100);
+        mainSplit.setDividerLocation(Math.min(wanted, allowed));
+        mainSplit.revalidate();
+    }
+
+    /** @return whether the key figures are beside the charts (false: below them, as on a small screen) */
+    public boolean figuresBeside() {
+        return resultsLayout.beside();
     }
 
     /** @return the text size as a percentage of the system's */

@@ -55,6 +55,11 @@ public final class Themes {
         }
     }
 
+    /** @return the largest text size offered (points) */
+    public static int largestTextSize() {
+        return TEXT_SIZES[TEXT_SIZES.length - 1];
+    }
+
     /** @return the size the text has with no setting (points) */
     public static int systemTextSize() {
         return baseFont == null ? 13 : baseFont.getSize();

@@ -37,4 +37,9 @@ public final class ChartExport {
             png(chart, target);
         }
     }
+
+    /** Writes one of the window's charts as PNG or SVG by the file name's ending, as {@link #write(JFreeChart, Path)}. */
+    public static void write(ResultChart chart, Path target) throws FileWriteException {
+        write(chart.chart(), target);
+    }
 }

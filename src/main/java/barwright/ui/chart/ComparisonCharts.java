@@ -24,6 +24,15 @@ public final class ComparisonCharts {
     private ComparisonCharts() {
     }
 
+    /**
+     * @param setups how many setups the chart's lines belong to
+     * @param name   the panel's component name
+     * @return the chart drawn in a panel, ready to place in a view
+     */
+    public static javax.swing.JComponent panel(Chart chart, int setups, ViewSettings view, String name) {
+        return ChartStyle.panel(draw(chart, setups, view), name);
+    }
+
     /** @param setups how many setups the chart's lines belong to */
     public static JFreeChart draw(Chart chart, int setups, ViewSettings view) {
         XYSeriesCollection data = new XYSeriesCollection();

@@ -6,11 +6,11 @@ import barwright.io.VehicleFileException;
 import barwright.io.VehicleFileReader;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.insight.EnvelopeText;
-import barwright.ui.chart.ChartStyle;
+import barwright.ui.chart.EnvelopeChart;
 import barwright.ui.field.ViewSettings;
 import barwright.ui.task.BackgroundWork;
-import org.jfree.chart.ChartPanel;
 
+import javax.swing.JComponent;
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
 import javax.swing.JComboBox;
@@ -47,7 +47,7 @@ public final class EnvelopeView extends JPanel {
         super(new BorderLayout());
         this.view = view;
         setName("insight.envelope");
-        ChartPanel panel = ChartStyle.panel(chart.chart(), "insight.envelope.chart");
+        JComponent panel = chart.panel("insight.envelope.chart");
         JScrollPane text = new JScrollPane(sentences);
         text.setBorder(BorderFactory.createEmptyBorder());
         JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, panel, text);

@@ -2,25 +2,15 @@ package barwright.ui.insight;
 
 import barwright.insight.SensitivityResult;
 import barwright.insight.SensitivityRow;
-import barwright.insight.Tendency;
 import barwright.report.insight.SensitivityText;
-import barwright.ui.chart.ChartStyle;
+import barwright.ui.chart.SensitivityChart;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Figures;
 import barwright.units.Quantity;
-import org.jfree.chart.ChartFactory;
-import org.jfree.chart.ChartPanel;
-import org.jfree.chart.JFreeChart;
-import org.jfree.chart.LegendItem;
-import org.jfree.chart.LegendItemCollection;
-import org.jfree.chart.plot.CategoryPlot;
-import org.jfree.chart.plot.PlotOrientation;
-import org.jfree.chart.renderer.category.BarRenderer;
-import org.jfree.chart.renderer.category.StandardBarPainter;
-import org.jfree.data.category.DefaultCategoryDataset;
 
 import javax.swing.BorderFactory;
 import javax.swing.JComboBox;
+import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
@@ -28,9 +18,7 @@ import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.table.DefaultTableModel;
 import java.awt.BorderLayout;
-import java.awt.Color;
 import java.awt.FlowLayout;
-import java.awt.Paint;
 import java.awt.event.MouseEvent;
 import java.util.ArrayList;
 import java.util.List;
@@ -60,9 +48,7 @@ public final class SensitivityView extends JPanel {
     static final String[] COLUMNS = {"Change", "Step", "Front share", "Roll gradient", "Limit margin",
         "First inside lift", "Balance"};
     private final ViewSettings view;
-    private final DefaultCategoryDataset data = new DefaultCategoryDataset();
-    private final JFreeChart chart;
-    private final List<Tendency> tendencies = new ArrayList<>();
+    private final SensitivityChart chart = new SensitivityChart();
     private final DefaultTableModel table = new DefaultTableModel(COLUMNS, 0) {
         @Override
         public boolean isCellEditable(int row, int column) {
@@ -77,10 +63,7 @@ public final class SensitivityView extends JPanel {
         super(new BorderLayout());
         this.view = view;
         setName("insight.sensitivity");
-        chart = ChartFactory.createBarChart("What one small change does", "", "", data, PlotOrientation.HORIZONTAL,
-                true, true, false);
-        chart.getCategoryPlot().setRenderer(new TendencyRenderer());
-        ChartPanel panel = ChartStyle.panel(chart, "insight.sensitivity.chart");
+        JComponent panel = chart.panel("insight.sensitivity.chart");
         JTable rows = new JTable(table) {
             @Override
             public String getToolTipText(MouseEvent event) {
@@ -124,41 +107,29 @@ public final class SensitivityView extends JPanel {
         shown = result;
         SensitivityText text = new SensitivityText(view.units());
         Measure chosen = Measure.values()[Math.max(0, measure.getSelectedIndex())];
-        chart.setNotify(false);
-        try {
-            data.clear();
-            tendencies.clear();
-            table.setRowCount(0);
-            for (SensitivityRow row : result.rows()) {
-                String label = row.change().effect();
-                if (row.analysed()) {
-                    data.addValue(value(row, chosen), "change", label);
-                    tendencies.add(row.tendency());
-                    table.addRow(new Object[]{label, text.step(row.change()),
-                        String.format(Locale.ROOT, "%+.2f pt", row.frontShareChange() * 100),
-                        signed(row.rollGradientChange(), Quantity.ROLL_GRADIENT, 3),
-                        signed(row.limitMarginChange(), Quantity.ACCELERATION, 4),
-                        row.insideLiftChange().isPresent()
-                                ? signed(row.insideLiftChange().getAsDouble(), Quantity.ACCELERATION, 3) : "no lift",
-                        row.tendency().words()});
-                } else {
-                    table.addRow(new Object[]{label, text.step(row.change()), "", "", "", "",
-                        "not analysed: " + row.refusal()});
-                }
+        List<SensitivityChart.Bar> bars = new ArrayList<>();
+        table.setRowCount(0);
+        for (SensitivityRow row : result.rows()) {
+            String label = row.change().effect();
+            if (row.analysed()) {
+                bars.add(new SensitivityChart.Bar(label, value(row, chosen), row.tendency()));
+                table.addRow(new Object[]{label, text.step(row.change()),
+                    String.format(Locale.ROOT, "%+.2f pt", row.frontShareChange() * 100),
+                    signed(row.rollGradientChange(), Quantity.ROLL_GRADIENT, 3),
+                    signed(row.limitMarginChange(), Quantity.ACCELERATION, 4),
+                    row.insideLiftChange().isPresent()
+                            ? signed(row.insideLiftChange().getAsDouble(), Quantity.ACCELERATION, 3) : "no lift",
+                    row.tendency().words()});
+            } else {
+                table.addRow(new Object[]{label, text.step(row.change()), "", "", "", "",
+                    "not analysed: " + row.refusal()});
             }
-            CategoryPlot plot = chart.getCategoryPlot();
-            String unit = chosen == Measure.ROLL_GRADIENT
-                    ? " (" + Quantity.ROLL_GRADIENT.unit(view.units()).symbol() + ")" : "";
-            plot.getRangeAxis().setLabel("Change of the " + chosen.words + unit);
-            chart.setTitle("One small change at a time, turning " + result.turn().word() + " (largest on top)");
-            plot.getDomainAxis().setMaximumCategoryLabelWidthRatio(0.5f);
-            basis.setText("Each change re-analysed in full; steps in the table.");
-            ChartStyle.apply(chart);
-            ((BarRenderer) plot.getRenderer()).setBarPainter(new StandardBarPainter());
-            ((BarRenderer) plot.getRenderer()).setShadowVisible(false);
-        } finally {
-            chart.setNotify(true);
         }
+        String unit = chosen == Measure.ROLL_GRADIENT
+                ? " (" + Quantity.ROLL_GRADIENT.unit(view.units()).symbol() + ")" : "";
+        chart.show(bars, "Change of the " + chosen.words + unit,
+                "One small change at a time, turning " + result.turn().word() + " (largest on top)");
+        basis.setText("Each change re-analysed in full; steps in the table.");
     }
 
     private double value(SensitivityRow row, Measure chosen) {
@@ -179,45 +150,15 @@ public final class SensitivityView extends JPanel {
         return table;
     }
 
-    JFreeChart chart() {
+    SensitivityChart chart() {
         return chart;
-    }
-
-    /** Bars coloured by where the change moves the balance; the legend names the colours. */
-    private final class TendencyRenderer extends BarRenderer {
-        @Override
-        public Paint getItemPaint(int row, int column) {
-            return column < tendencies.size() ? colour(tendencies.get(column)) : ChartStyle.text();
-        }
-
-        @Override
-        public LegendItemCollection getLegendItems() {
-            LegendItemCollection items = new LegendItemCollection();
-            items.add(new LegendItem("towards understeer", colour(Tendency.TOWARDS_UNDERSTEER)));
-            items.add(new LegendItem("towards oversteer", colour(Tendency.TOWARDS_OVERSTEER)));
-            items.add(new LegendItem("towards understeer below the limit only",
-                    colour(Tendency.TOWARDS_UNDERSTEER_BELOW_LIMIT)));
-            items.add(new LegendItem("towards oversteer below the limit only",
-                    colour(Tendency.TOWARDS_OVERSTEER_BELOW_LIMIT)));
-            return items;
-        }
-
-        private Color colour(Tendency tendency) {
-            return switch (tendency) {
-                case TOWARDS_UNDERSTEER -> ChartStyle.series(0);
-                case TOWARDS_OVERSTEER -> ChartStyle.series(2);
-                case TOWARDS_UNDERSTEER_BELOW_LIMIT -> ChartStyle.series(1);
-                case TOWARDS_OVERSTEER_BELOW_LIMIT -> ChartStyle.series(3);
-                case NO_CHANGE -> Color.GRAY;
-            };
-        }
     }
 
     @Override
     public void updateUI() {
         super.updateUI();
         if (chart != null) {
-            ChartStyle.apply(chart);
+            chart.style();
         }
     }
 }

@@ -36,6 +36,7 @@ public final class FiguresPanel extends JPanel {
     private final Consumer<KeyFigure> showWork;
     private final Map<FigureButton, Function<AnalysisResult, String>> figures = new LinkedHashMap<>();
     private int row;
+    private JLabel lastLabel;
 
     public FiguresPanel(ResultsModel results, FigureFormat format, Consumer<KeyFigure> showWork) {
         super(new GridBagLayout());
@@ -55,20 +56,31 @@ public final class FiguresPanel extends JPanel {
                 {"Springs", Kind.SPRING_ROLL_STIFFNESS, "springs"},
                 {"Bar", Kind.BAR_ROLL_STIFFNESS, "bar"},
                 {"Tyres", Kind.TYRE_ROLL_STIFFNESS, "tyres"},
-                {"Axle, all three", Kind.AXLE_ROLL_STIFFNESS, "axle"}}) {
+                {"Axle, tyres in series", Kind.AXLE_ROLL_STIFFNESS, "axle"}}) {
             Kind kind = (Kind) part[1];
             pair((String) part[0], "figure.rollStiffness." + part[2], axle -> KeyFigure.of(kind, axle),
                     (result, axle) -> stiffness(result.axle(axle), kind));
+            if (kind == Kind.AXLE_ROLL_STIFFNESS) {
+                explain("The springs and the bar work side by side; the tyres work in series with both, so the "
+                        + "whole axle is softer than its stiffest part and can be below the bar alone.");
+            }
         }
         heading("Balance", null, null);
-        single("Roll gradient", "figure.rollGradient", KeyFigure.of(Kind.ROLL_GRADIENT),
+        single("Roll gradient, tyres included", "figure.rollGradient", KeyFigure.of(Kind.ROLL_GRADIENT),
                 result -> format.text(result.rollGradient(), Quantity.ROLL_GRADIENT));
+        explain("Body roll per g with the tyres' own deflection counted: what the body does on the road.");
+        single("Roll gradient, springs and bars", "figure.suspensionRollGradient", KeyFigure.of(Kind.ROLL_GRADIENT),
+                result -> format.text(result.suspensionRollGradient(), Quantity.ROLL_GRADIENT));
+        explain("Body roll per g from the springs and bars alone, rigid tyres: the figure most other sources "
+                + "quote. Its working is the same formula with the tyres left out.");
         single("Front share of load transfer", "figure.frontShare", KeyFigure.of(Kind.FRONT_LOAD_TRANSFER_SHARE),
                 result -> format.text(result.frontLoadTransferShare(), Quantity.SHARE));
         single("Static front weight", "figure.staticFront", null,
                 result -> format.text(result.masses().frontMassFraction(), Quantity.SHARE));
-        single("Understeer gradient", "figure.understeer", KeyFigure.of(Kind.UNDERSTEER_GRADIENT),
+        single("Understeer gradient, static", "figure.understeer", KeyFigure.of(Kind.UNDERSTEER_GRADIENT),
                 result -> format.text(result.understeerGradient(), Quantity.ROLL_GRADIENT));
+        explain("The static, linear value from the weight split and the tyres' cornering stiffness: a bar does "
+                + "not move it. What a bar moves is the balance at the limit, below.");
         heading("In a steady turn", "Left turn", "Right turn");
         turns("Grip limit", "figure.limit", turn -> KeyFigure.of(Kind.LIMIT, turn),
                 (result, turn) -> format.text(result.turn(turn).limit(), Quantity.ACCELERATION));
@@ -182,8 +194,14 @@ public final class FiguresPanel extends JPanel {
         }
     }
 
+    /** Puts a plain-words explanation on the label of the row just added. */
+    private void explain(String text) {
+        lastLabel.setToolTipText(text);
+    }
+
     private void label(String text) {
         JLabel label = new JLabel(text);
+        lastLabel = label;
         GridBagConstraints at = at(0, row, 1);
         at.weightx = 1;
         add(label, at);

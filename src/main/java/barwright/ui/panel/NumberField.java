@@ -14,12 +14,18 @@ import com.fasterxml.jackson.databind.node.IntNode;
 import com.fasterxml.jackson.databind.node.LongNode;
 import com.fasterxml.jackson.databind.node.TextNode;
 
+import barwright.ui.field.Steps;
+
+import javax.swing.AbstractAction;
 import javax.swing.JLabel;
+import javax.swing.KeyStroke;
 import javax.swing.JTextField;
 import javax.swing.SwingConstants;
 import javax.swing.event.DocumentListener;
 import java.awt.event.FocusAdapter;
 import java.awt.event.FocusEvent;
+import java.awt.event.InputEvent;
+import java.awt.event.KeyEvent;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Consumer;
@@ -73,7 +79,41 @@ public final class NumberField extends JTextField {
         });
         document.addListener(documentListener);
         view.addListener(viewListener);
+        stepWith(KeyEvent.VK_UP, 0, 1);
+        stepWith(KeyEvent.VK_DOWN, 0, -1);
+        stepWith(KeyEvent.VK_UP, InputEvent.SHIFT_DOWN_MASK, 10);
+        stepWith(KeyEvent.VK_DOWN, InputEvent.SHIFT_DOWN_MASK, -10);
+        // the wheel steps only the field being edited, so that scrolling the page never changes a value
+        addMouseWheelListener(event -> {
+            if (isFocusOwner() && event.getWheelRotation() != 0) {
+                step(-event.getWheelRotation() * (event.isShiftDown() ? 10 : 1));
+                event.consume();
+            } else {
+                getParent().dispatchEvent(SwingUtilities.convertMouseEvent(this, event, getParent()));
+            }
+        });
         reload();
+    }
+
+    private void stepWith(int key, int modifiers, int steps) {
+        String name = "step" + steps;
+        getInputMap(WHEN_FOCUSED).put(KeyStroke.getKeyStroke(key, modifiers), name);
+        getActionMap().put(name, new AbstractAction() {
+            @Override
+            public void actionPerformed(java.awt.event.ActionEvent event) {
+                step(steps);
+            }
+        });
+    }
+
+    /** Moves the shown value by whole steps of its quantity (Steps); an empty or refused text is left alone. */
+    void step(int steps) {
+        OptionalDouble number = NumberText.parse(getText(), view.locale());
+        if (number.isEmpty()) {
+            return;
+        }
+        double moved = Steps.move(number.getAsDouble(), Steps.of(spec.quantity(), view.units()), steps);
+        setText(NumberText.format(moved, Precision.field(spec.quantity(), view.units()), view.locale()));
     }
 
     /** @return a listener that runs the action on any change of a text document */

@@ -11,6 +11,9 @@ import java.awt.Dimension;
 
 /** Everything in the vehicle file, on five pages: the car, each axle, each bar. */
 public final class VehicleEditor extends JTabbedPane {
+    /** The editor's width at the system text size (pixels); the window widens it with the text. */
+    public static final int WIDTH = 370;
+
     public VehicleEditor(OpenDocument document, ViewSettings view) {
         setName("editor.tabs");
         setTabLayoutPolicy(SCROLL_TAB_LAYOUT);
@@ -21,7 +24,7 @@ public final class VehicleEditor extends JTabbedPane {
         page("Rear axle", "Track, roll centre, unsprung parts, springs and tyres at the rear",
                 new AxlePage(document, view, AxlePosition.REAR));
         page("Rear bar", "The rear anti-roll bar", new BarPage(document, view, AxlePosition.REAR));
-        setPreferredSize(new Dimension(370, 600));
+        setPreferredSize(new Dimension(WIDTH, 600));
         setMinimumSize(new Dimension(320, 300));
     }
 

@@ -10,7 +10,6 @@ import barwright.io.VehicleEdits;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
 import barwright.sizing.compare.FigureRow;
-import barwright.ui.chart.ChartStyle;
 import barwright.ui.chart.ComparisonCharts;
 import barwright.ui.panel.FigureFormat;
 import barwright.ui.panel.WrappingText;
@@ -210,9 +209,8 @@ final class CompareView extends JPanel {
         charts.removeAll();
         if (shown != null) {
             for (Chart chart : shown.charts()) {
-                charts.addTab(chart.title().replaceFirst(",.*", ""), ChartStyle.panel(
-                        ComparisonCharts.draw(chart, shown.configurations().size(), context.view()),
-                        "compare.chart." + charts.getTabCount()));
+                charts.addTab(chart.title().replaceFirst(",.*", ""), ComparisonCharts.panel(chart,
+                        shown.configurations().size(), context.view(), "compare.chart." + charts.getTabCount()));
             }
             charts.setSelectedIndex(Math.min(selected, charts.getTabCount() - 1));
         }

@@ -12,6 +12,7 @@ import barwright.report.insight.EnvelopeText;
 import barwright.ui.action.Settings;
 import barwright.ui.app.MainWindow;
 import barwright.ui.app.Themes;
+import barwright.ui.chart.EnvelopeChart;
 import barwright.ui.document.Samples;
 import barwright.units.UnitSystem;
 import org.assertj.swing.core.BasicRobot;
@@ -144,7 +145,7 @@ class InsightViewsTest {
                     .isEqualTo(expected.rows().get(i).tendency().words());
         }
         frame.comboBox("insight.sensitivity.measure").selectItem(1);
-        assertThat(GuiActionRunner.execute(() -> panel.sensitivity().chart().getCategoryPlot().getRangeAxis().getLabel()))
+        assertThat(GuiActionRunner.execute(() -> panel.sensitivity().chart().chart().getCategoryPlot().getRangeAxis().getLabel()))
                 .contains("front share");
     }
 
@@ -156,7 +157,7 @@ class InsightViewsTest {
                 .contains("This car's file gives no chassis stiffness");
         frame.toggleButton("units.us").click();
         robot.waitForIdle();
-        assertThat(GuiActionRunner.execute(() -> panel.chassis().chart().getXYPlot().getDomainAxis().getLabel()))
+        assertThat(GuiActionRunner.execute(() -> panel.chassis().chart().chart().getXYPlot().getDomainAxis().getLabel()))
                 .contains("lbf·ft/deg");
         assertThat(GuiActionRunner.execute(() -> panel.chassis().statementText())).contains("lbf·ft/deg");
         assertThat(GuiActionRunner.execute(() -> (String) panel.sensitivity().table().getValueAt(0, 1)))
@@ -170,7 +171,7 @@ class InsightViewsTest {
         assertThat(GuiActionRunner.execute(() -> panel.current().chassis().current())).isNotNull();
         java.util.List<String> labels = GuiActionRunner.execute(() -> {
             java.util.List<String> found = new java.util.ArrayList<>();
-            for (Object marker : panel.chassis().chart().getXYPlot().getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND)) {
+            for (Object marker : panel.chassis().chart().chart().getXYPlot().getDomainMarkers(org.jfree.chart.ui.Layer.FOREGROUND)) {
                 found.add(((org.jfree.chart.plot.Marker) marker).getLabel());
             }
             return found;

@@ -16,7 +16,8 @@ import java.util.concurrent.atomic.AtomicReference;
 /**
  * Writes screenshots of the main views to docs/images/ (used in the README). Run under a display, e.g.
  * {@code xvfb-run -a -s "-screen 0 1280x1024x24" mvn -B -q test-compile exec:java
- * -Dexec.classpathScope=test -Dexec.mainClass=barwright.ui.tools.Screenshots}.
+ * -Dexec.classpathScope=test -Dexec.mainClass=barwright.ui.tools.Screenshots}. Arguments, all optional: the
+ * folder, the theme (light or dark), the text size in points, the window size (e.g. 1024x768).
  */
 public final class Screenshots {
     private Screenshots() {
@@ -36,12 +37,13 @@ public final class Screenshots {
         SwingUtilities.invokeAndWait(() -> {
             MainWindow window = DesktopApp.open(settings, () -> { });
             window.setLocation(0, 0);
-            window.setSize(1280, 880);
+            window.setSize(size(args, 0), size(args, 1));
             holder.set(window);
         });
         MainWindow window = holder.get();
         settle(window);
-        String suffix = (args.length > 1 ? "-" + args[1] : "") + (args.length > 2 ? "-text" + args[2] : "");
+        String suffix = (args.length > 1 ? "-" + args[1] : "") + (args.length > 2 ? "-text" + args[2] : "")
+                + (args.length > 3 ? "-" + args[3] : "");
         String[] names = {"car-from-behind", "wheel-loads", "body-roll", "load-transfer-parts", "handling", "bar-sweep"};
         for (int tab = 0; tab < names.length; tab++) {
             int index = tab;
@@ -81,6 +83,12 @@ public final class Screenshots {
         write(window.getRootPane(), folder.resolve("us-units" + suffix + ".png"));
         SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
+    }
+
+    /** @return the window's width (part 0) or height (part 1) from a fourth argument such as "1024x768" */
+    private static int size(String[] args, int part) {
+        String[] given = (args.length > 3 ? args[3] : "1280x880").split("x");
+        return Integer.parseInt(given[part]);
     }
 
     private static java.awt.Component find(java.awt.Container root, String name) {

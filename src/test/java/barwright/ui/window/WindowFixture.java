@@ -25,14 +25,28 @@ public final class WindowFixture implements AutoCloseable {
     public final FrameFixture frame;
     public final ScriptedDialogs dialogs = new ScriptedDialogs();
 
+    private final int textSize;
+
     public WindowFixture() {
+        this(1150, 880, 0);
+    }
+
+    /**
+     * @param textSize points, or 0 for the system's size; the text size goes back to the system's on close
+     */
+    public WindowFixture(int width, int height, int textSize) {
+        this.textSize = textSize;
         Display.require();
         robot = BasicRobot.robotWithNewAwtHierarchy();
         window = GuiActionRunner.execute(() -> {
-            Themes.apply(Themes.Theme.LIGHT, 0);
-            MainWindow created = new MainWindow(Samples.open(Samples.CLUB_HATCHBACK), Settings.inMemory(), dialogs,
+            Themes.apply(Themes.Theme.LIGHT, textSize);
+            Settings settings = Settings.inMemory();
+            if (textSize > 0) {
+                settings.put("textSize", Integer.toString(textSize));
+            }
+            MainWindow created = new MainWindow(Samples.open(Samples.CLUB_HATCHBACK), settings, dialogs,
                     () -> { });
-            created.setSize(1150, 880);
+            created.setSize(width, height);
             created.setLocation(100, 100);
             return created;
         });
@@ -59,5 +73,8 @@ public final class WindowFixture implements AutoCloseable {
     @Override
     public void close() {
         frame.cleanUp();
+        if (textSize > 0) {
+            GuiActionRunner.execute(() -> Themes.apply(Themes.Theme.LIGHT, 0));
+        }
     }
 }

@@ -1,4 +1,4 @@
-package barwright.ui.insight;
+package barwright.ui.chart;
 
 import barwright.insight.EnvelopePoint;
 import barwright.insight.LiftBoundary;
@@ -6,7 +6,6 @@ import barwright.insight.LiftEnvelopeResult;
 import barwright.insight.Wheel;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
-import barwright.ui.chart.ChartStyle;
 import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYTextAnnotation;
@@ -31,20 +30,20 @@ import static barwright.units.Constants.STANDARD_GRAVITY;
  * the centre, a right turn to the right), longitudinal acceleration up (power) and down (braking), both in g.
  * Each inside wheel lifts outside its line.
  */
-final class EnvelopeChart {
+public final class EnvelopeChart {
     /** Series order: the legend and the colours follow it. */
-    static final int FRONT = 0;
-    static final int REAR = 1;
-    static final int COMPARED_FRONT = 2;
-    static final int COMPARED_REAR = 3;
-    static final int ROLLOVER = 4;
+    public static final int FRONT = 0;
+    public static final int REAR = 1;
+    public static final int COMPARED_FRONT = 2;
+    public static final int COMPARED_REAR = 3;
+    public static final int ROLLOVER = 4;
     /** Past this lateral acceleration the chart does not reach (g): the report's "stays down" ceiling. */
     private static final double MOST_LATERAL_G = 3.0;
 
     private final XYSeriesCollection data = new XYSeriesCollection();
     private final JFreeChart chart;
 
-    EnvelopeChart() {
+    public EnvelopeChart() {
         chart = ChartFactory.createXYLineChart("Where an inside wheel lifts: braking, power and cornering", "", "",
                 data, PlotOrientation.VERTICAL, true, true, false);
         XYPlot plot = chart.getXYPlot();
@@ -56,7 +55,7 @@ final class EnvelopeChart {
     }
 
     /** Colours, strokes and fonts from the theme (again after a theme change). */
-    void style() {
+    public void style() {
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         BasicStroke solid = new BasicStroke(2.5f);
         BasicStroke dashed = new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f,
@@ -76,11 +75,16 @@ final class EnvelopeChart {
         ChartStyle.apply(chart);
     }
 
-    JFreeChart chart() {
+    /** @return the chart in a panel named {@code name}, ready to place in a view */
+    public javax.swing.JComponent panel(String name) {
+        return ChartStyle.panel(chart, name);
+    }
+
+    public JFreeChart chart() {
         return chart;
     }
 
-    XYSeriesCollection data() {
+    public XYSeriesCollection data() {
         return data;
     }
 
@@ -88,7 +92,7 @@ final class EnvelopeChart {
      * @param compared      the envelope to draw dashed beside, or null
      * @param comparedLabel how the legend names it, e.g. "previous setting"
      */
-    void show(LiftEnvelopeResult current, LiftEnvelopeResult compared, String comparedLabel) {
+    public void show(LiftEnvelopeResult current, LiftEnvelopeResult compared, String comparedLabel) {
         chart.setNotify(false);
         try {
             data.removeAllSeries();
