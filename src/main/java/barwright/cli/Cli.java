@@ -33,7 +33,8 @@ public final class Cli {
             new MeasureCommand(),
             new SheetCommand(),
             new GeometryCommand(),
-            new TyreFitCommand());
+            new TyreFitCommand(),
+            new TransientCommand());
 
     private Cli() {
     }

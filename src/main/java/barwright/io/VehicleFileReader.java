@@ -67,6 +67,7 @@ public final class VehicleFileReader {
             throw new VehicleFileException(reader.problems()); // a wrong format or version: say only that
         }
         Vehicle vehicle = readVehicle(tree, reader);
+        DynamicsInputReader.read(tree, reader); // dampers and roll inertia: a bad one refuses the file too
         if (reader.hasProblems() || vehicle == null) {
             throw new VehicleFileException(reader.problems());
         }

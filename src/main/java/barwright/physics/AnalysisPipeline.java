@@ -44,7 +44,7 @@ public final class AnalysisPipeline {
      * @throws ImpossibleVehicleException where the masses cannot be analysed whatever the bars
      */
     public AnalysisPipeline(Vehicle given) {
-        // linkage axles: the computed static roll centre and the ride-height changes (model.md 11)
+        // linkage axles: the computed static roll centre and the ride-height changes (model.md 12)
         Vehicle vehicle = LinkageResolution.atRideHeight(given);
         this.vehicle = vehicle;
         this.masses = MassProperties.of(vehicle);

@@ -10,7 +10,7 @@ import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.apache.commons.math3.exception.NoBracketingException;
 
 /**
- * One linkage axle at the car's grip limit (model.md 11): the body roll there and the roll-centre heights solved
+ * One linkage axle at the car's grip limit (model.md 12): the body roll there and the roll-centre heights solved
  * together (the roll axis moves as the body rolls, and the roll gradient with it), and what the wheels do there.
  * Angles in rad, lengths in m.
  *

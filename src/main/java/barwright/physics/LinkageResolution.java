@@ -8,7 +8,7 @@ import barwright.physics.linkage.LinkageLimitException;
 import barwright.physics.linkage.RollState;
 
 /**
- * Where the analysis meets the linkages (model.md 11): the car the analysis sees at its ride height, each
+ * Where the analysis meets the linkages (model.md 12): the car the analysis sees at its ride height, each
  * linkage axle's roll centre computed instead of typed, and the centre of mass moved with the ride-height
  * changes. An axle without a linkage is left exactly as it is.
  */

@@ -83,4 +83,9 @@ public final class Conversions {
     public static double toPercent(double fraction) {
         return fraction * PERCENT_PER_UNIT;
     }
+
+    /** @return a speed in m/s from km/h (1 km/h = 1000 m / 3600 s, by definition) */
+    public static double fromKilometresPerHour(double kilometresPerHour) {
+        return kilometresPerHour / 3.6;
+    }
 }

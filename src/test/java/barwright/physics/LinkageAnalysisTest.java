@@ -16,7 +16,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 /**
- * The analysis with linkages (model.md 11) against the analysis with the same roll centres typed in: with the
+ * The analysis with linkages (model.md 12) against the analysis with the same roll centres typed in: with the
  * linkage's static roll centre typed in, a_y -> 0 figures agree to 1e-9; a roll centre that does not migrate
  * (a Watt's pivot on the axle) gives the same car at the limit too; a car with no linkage is untouched.
  */

@@ -15,7 +15,7 @@ import java.util.List;
 /**
  * The linkage figures of the analysis report, per axle (docs/file-format.md, analysis report): the roll-centre
  * height the analysis uses, and, for an axle with a linkage, the roll centre, cambers and camber change at the
- * grip limit's roll (model.md 11). Null where there is no linkage, no roll centre, or the linkage cannot follow
+ * grip limit's roll (model.md 12). Null where there is no linkage, no roll centre, or the linkage cannot follow
  * the roll to the limit.
  */
 public final class LinkageFigures {
