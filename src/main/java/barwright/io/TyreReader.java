@@ -27,9 +27,11 @@ final class TyreReader {
     /** More points than this are refused: a tyre test at more loads than this is not a vehicle file's job. */
     static final int MAX_POINTS = 50;
 
-    private static final Range LOAD = Range.above(0, 100000, "N");
+    // a point below 1 N, or a stiffness below 1 N/deg, is no tyre measurement (common practice): a
+    // number just above zero would leave the law's stand-in values at 0 (fuzzing found one)
+    private static final Range LOAD = Range.between(1, 100000, "N");
     private static final Range FRICTION = Range.between(0.1, 5, "");
-    private static final Range STIFFNESS_PER_DEG = Range.above(0, 200000, "N/deg");
+    private static final Range STIFFNESS_PER_DEG = Range.between(1, 200000, "N/deg");
 
     private TyreReader() {
     }
