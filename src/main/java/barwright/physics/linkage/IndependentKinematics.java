@@ -2,6 +2,7 @@ package barwright.physics.linkage;
 
 import barwright.model.FrontViewPoint;
 import barwright.model.SuspensionGeometry;
+import barwright.solver.RootFinder;
 
 /**
  * An axle with two independent, mirror-image sides. Kinematic roll: with wheel travels s_0 - s (left) and
@@ -13,6 +14,8 @@ import barwright.model.SuspensionGeometry;
 final class IndependentKinematics implements AxleKinematics {
     /** Accuracy of the solved wheel travel in roll (m). */
     static final double TRAVEL_ACCURACY = 1e-12;
+    private static final RootFinder TRAVEL_ROOT =
+            RootFinder.of("the wheel travel of a body roll", TRAVEL_ACCURACY, 200);
     /** Contact points closer to a line than this lie on it (m). */
     private static final double ON_LINE = 1e-9;
 
@@ -79,7 +82,12 @@ final class IndependentKinematics implements AxleKinematics {
                 double wanted = reach + atReach;
                 pose(bumpFirst ? baseTravel + wanted : baseTravel - wanted);
             }
-            s = BracketedRoot.solve(x -> closure(x, tan), 0, reach, TRAVEL_ACCURACY, tan * rideHeightContactY);
+            // search 20 % either side of the small-roll guess first, where the closure changes sign there
+            double guess = tan * rideHeightContactY;
+            double low = Math.max(0, guess * 0.8);
+            double high = Math.min(reach, guess * 1.2);
+            boolean narrow = low < high && closure(low, tan) * closure(high, tan) <= 0;
+            s = TRAVEL_ROOT.solve(x -> closure(x, tan), narrow ? low : 0, narrow ? high : reach);
         }
         return state(roll, s);
     }

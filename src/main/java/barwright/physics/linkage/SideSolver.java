@@ -1,5 +1,7 @@
 package barwright.physics.linkage;
 
+import barwright.solver.RootFinder;
+
 import java.util.ArrayList;
 import java.util.List;
 
@@ -14,6 +16,9 @@ final class SideSolver {
     static final double RANGE = 0.25;
     /** Accuracy of a solved coordinate (rad): about 3e-14 m at the contact point of a 300 mm arm. */
     static final double COORDINATE_ACCURACY = 1e-13;
+    /** A Brent solve to 1e-13 within one quarter-degree step of the table takes some 10 to 20 evaluations. */
+    private static final RootFinder COORDINATE_ROOT =
+            RootFinder.of("the linkage's arm angle at a wheel travel", COORDINATE_ACCURACY, 200);
     private static final int MAX_STEPS = 720;
 
     private final SideLinkage side;
@@ -136,7 +141,8 @@ final class SideSolver {
         if (travels[upper] == travel) {
             return coordinates[upper];
         }
-        return BracketedRoot.solve(c -> side.contactAt(c)[1] - staticZ - travel, coordinates[upper - 1],
-                coordinates[upper], COORDINATE_ACCURACY);
+        double a = coordinates[upper - 1];
+        double b = coordinates[upper];
+        return COORDINATE_ROOT.solve(c -> side.contactAt(c)[1] - staticZ - travel, Math.min(a, b), Math.max(a, b));
     }
 }
