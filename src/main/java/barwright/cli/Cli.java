@@ -3,6 +3,7 @@ package barwright.cli;
 import barwright.io.FileWriteException;
 import barwright.io.VehicleFileException;
 import barwright.physics.ImpossibleVehicleException;
+import barwright.report.ProgramVersion;
 import barwright.solver.RootNotFoundException;
 
 import java.io.PrintStream;
@@ -45,7 +46,10 @@ public final class Cli {
 
     public static int run(String[] args, PrintStream out, PrintStream err) {
         if (args.length == 0 || List.of("help", "--help", "-h").contains(args[0])) {
-            out.print(usage());
+            return args.length > 1 ? help(args[1], out, err) : printUsage(out);
+        }
+        if (args[0].equals("--version")) {
+            out.println(ProgramVersion.line());
             return OK;
         }
         Optional<Command> command = COMMANDS.stream().filter(c -> c.name().equals(args[0])).findFirst();
@@ -87,6 +91,25 @@ public final class Cli {
         }
     }
 
+    private static int printUsage(PrintStream out) {
+        out.print(usage());
+        return OK;
+    }
+
+    /** {@code help COMMAND}: the command's form, what it does and each option, from its help text. */
+    static int help(String name, PrintStream out, PrintStream err) {
+        Optional<Command> command = COMMANDS.stream().filter(c -> c.name().equals(name)).findFirst();
+        if (command.isEmpty()) {
+            err.println("barwright help: there is no command '" + name + "'; the commands are "
+                    + String.join(", ", COMMANDS.stream().map(Command::name).toList()));
+            return REFUSED;
+        }
+        out.println("usage: java -jar target/barwright.jar " + command.get().synopsis());
+        out.println();
+        out.print(CommandHelp.text(command.get()));
+        return OK;
+    }
+
     public static String usage() {
         StringBuilder text = new StringBuilder("Barwright: anti-roll bars and lateral load transfer.\n\n")
                 .append("usage: java -jar target/barwright.jar                 open the desktop program\n");
@@ -94,6 +117,9 @@ public final class Cli {
             text.append(String.format("       java -jar target/barwright.jar %s%n           %s%n",
                     command.synopsis(), command.summary()));
         }
+        text.append("\n       java -jar target/barwright.jar help COMMAND       every option of one command\n")
+                .append("       java -jar target/barwright.jar --version          the program's version\n")
+                .append("       java -jar target/barwright.jar FILE.json          open that car in the desktop program\n");
         text.append("\nExit codes: 0 done, 2 input refused (the message names the key path), 1 internal failure.\n");
         return text.toString();
     }

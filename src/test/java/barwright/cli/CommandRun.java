@@ -7,7 +7,7 @@ import java.io.ByteArrayOutputStream;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 
-/** One run of the command line, with what it printed (for the insight command tests). */
+/** One run of the command line, with what it printed (for the command tests). */
 record CommandRun(int exitCode, String out, String err) {
     static CommandRun of(String... args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
