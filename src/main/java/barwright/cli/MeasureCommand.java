@@ -4,6 +4,7 @@ import barwright.io.RateCalibrationKeys;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
+import barwright.io.WorkshopEdits;
 import barwright.io.csv.CsvFileException;
 import barwright.io.csv.CsvReader;
 import barwright.io.csv.CsvRow;
@@ -167,7 +168,7 @@ final class MeasureCommand implements Command {
         print(out, parsed, MeasureJson.centreOfMass(height), text);
         if (parsed.has("apply")) {
             ObjectNode tree = document.editableTree();
-            ((ObjectNode) tree.path("vehicle")).put("cgHeightMm", Math.round(height.height() * 1e4) / 10.0);
+            WorkshopEdits.putCentreOfMassHeight(tree, height.height());
             write(parsed, tree, out);
         }
         return Cli.OK;
@@ -197,15 +198,7 @@ final class MeasureCommand implements Command {
         print(out, parsed, MeasureJson.corners(weights), text);
         if (parsed.has("apply")) {
             ObjectNode tree = document.editableTree();
-            ObjectNode vehicle = (ObjectNode) tree.path("vehicle");
-            ObjectNode corners = vehicle.putObject("cornerMassesKg");
-            corners.put("leftFront", kg[0]);
-            corners.put("rightFront", kg[1]);
-            corners.put("leftRear", kg[2]);
-            corners.put("rightRear", kg[3]);
-            // the mass and front share follow from the corners (file-format.md)
-            vehicle.remove("massKg");
-            vehicle.remove("frontMassFraction");
+            WorkshopEdits.putCornerMasses(tree, kg[0], kg[1], kg[2], kg[3]);
             write(parsed, tree, out);
         }
         return Cli.OK;

@@ -50,6 +50,17 @@ public final class VehicleKeys {
     public static final String SURFACE = "surface";
     public static final String STRESS_CONCENTRATION = "stressConcentration";
 
+    // the body, as the workshop measures it (file-format.md, "The vehicle")
+    public static final String VEHICLE = "vehicle";
+    public static final String MASS_KG = "massKg";
+    public static final String FRONT_MASS_FRACTION = "frontMassFraction";
+    public static final String CG_HEIGHT_MM = "cgHeightMm";
+    public static final String CORNER_MASSES_KG = "cornerMassesKg";
+    public static final String LEFT_FRONT = "leftFront";
+    public static final String RIGHT_FRONT = "rightFront";
+    public static final String LEFT_REAR = "leftRear";
+    public static final String RIGHT_REAR = "rightRear";
+
     private VehicleKeys() {
     }
 }

@@ -123,4 +123,20 @@ class TiltMethodTest {
                 .isInstanceOf(MeasurementException.class).hasMessageContaining("below the wheel centres")
                 .hasMessageContaining("should read more");
     }
+
+    /**
+     * The slope of the raised car is raise / (horizontal wheelbase), not raise / wheelbase: a 110 in wheelbase
+     * lifted 18 in gives 18 / 108.5 = 0.1659, not 0.1636 (a forum post's worked numbers, as quoted on the
+     * huggingface.co page of the nvidia/Nemotron-CC-Math-v1 data set, "Center of Gravity Height Again", read;
+     * docs/validation.md, workshop). Printed to 4 places, so within 5e-5.
+     */
+    @Test
+    void theTiltIsTheRaiseOverTheHorizontalWheelbase() throws Exception {
+        double inch = 0.0254;
+        // any car with the readings' geometry: the angle depends only on the raise and the wheelbase
+        CentreOfMassHeight height = TiltMethod.height(new TiltTest(1000, 550, AxlePosition.REAR, 18 * inch, 580,
+                110 * inch, 0.3, 0.5, 1e-3));
+        assertThat(Math.tan(height.tiltAngle())).isCloseTo(0.1659, within(5e-5));
+        assertThat(Math.tan(height.tiltAngle())).isNotCloseTo(18.0 / 110, within(1e-3));
+    }
 }

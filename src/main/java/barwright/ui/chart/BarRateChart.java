@@ -10,7 +10,6 @@ import org.jfree.chart.ChartPanel;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.plot.XYPlot;
-import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
@@ -54,14 +53,7 @@ public final class BarRateChart {
         data.addSeries(left);
         data.addSeries(line);
         XYPlot plot = chart.getXYPlot();
-        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer();
-        renderer.setSeriesLinesVisible(0, false);
-        renderer.setSeriesLinesVisible(1, false);
-        renderer.setSeriesShapesVisible(2, false);
-        for (int i = 0; i < 3; i++) {
-            renderer.setSeriesPaint(i, ChartStyle.series(i));
-        }
-        plot.setRenderer(renderer);
+        ChartStyle.pointsAndFittedLine(plot);
         plot.getDomainAxis().setLabel("Deflection (" + length.symbol() + ")");
         plot.getRangeAxis().setLabel("Load (" + force.symbol() + ")");
     }

@@ -7,6 +7,7 @@ import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.CategoryPlot;
 import org.jfree.chart.plot.Plot;
 import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
 
@@ -115,5 +116,20 @@ public final class ChartStyle {
     private static Color colour(String key, Color fallback) {
         Color colour = UIManager.getColor(key);
         return colour != null ? colour : fallback;
+    }
+
+    /**
+     * Readings drawn as points (series 0: used, 1: left out) and a fitted line (series 2), in the series'
+     * colours: the workshop's fits.
+     */
+    static void pointsAndFittedLine(XYPlot plot) {
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer();
+        renderer.setSeriesLinesVisible(0, false);
+        renderer.setSeriesLinesVisible(1, false);
+        renderer.setSeriesShapesVisible(2, false);
+        for (int i = 0; i < 3; i++) {
+            renderer.setSeriesPaint(i, series(i));
+        }
+        plot.setRenderer(renderer);
     }
 }

@@ -21,29 +21,26 @@ import barwright.units.Figures;
 import barwright.units.Quantity;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
-import javax.swing.AbstractAction;
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
 import javax.swing.JComboBox;
-import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
-import javax.swing.KeyStroke;
 import javax.swing.UIManager;
 import javax.swing.table.DefaultTableModel;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
-import java.awt.Toolkit;
-import java.awt.datatransfer.DataFlavor;
-import java.awt.event.ActionEvent;
-import java.awt.event.KeyEvent;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+
+import static barwright.ui.workshop.ReadingCells.blank;
+import static barwright.ui.workshop.ReadingCells.text;
+import static barwright.ui.workshop.ReadingCells.number;
 
 /**
  * Readings typed into a table or pasted from a spreadsheet (two columns: load, deflection, in the view's
@@ -84,18 +81,8 @@ public final class BarRatePage extends JPanel {
         };
         table = new JTable(readings);
         table.setName("workshop.readings");
-        table.getInputMap(JComponent.WHEN_FOCUSED).put(KeyStroke.getKeyStroke(KeyEvent.VK_V,
-                Toolkit.getDefaultToolkit().getMenuShortcutKeyMaskEx()), "paste-readings");
-        table.getActionMap().put("paste-readings", new AbstractAction() {
-            @Override
-            public void actionPerformed(ActionEvent event) {
-                try {
-                    paste((String) Toolkit.getDefaultToolkit().getSystemClipboard().getData(DataFlavor.stringFlavor));
-                } catch (Exception nothingToPaste) {
-                    summary.setText("Nothing to paste: copy two columns, load and deflection, from a spreadsheet.");
-                }
-            }
-        });
+        PastedRows.bindPaste(table, this::paste, () -> summary.setText(
+                "Nothing to paste: copy two columns, load and deflection, from a spreadsheet."));
         // the residual and role columns are the page's own output: only the readings' columns refit
         readings.addTableModelListener(event -> {
             if (event.getColumn() < 2) {
@@ -134,19 +121,7 @@ public final class BarRatePage extends JPanel {
 
     /** Fills the table from text copied from a spreadsheet: one reading a line, load then deflection. */
     public void paste(String text) {
-        List<String[]> rows = new ArrayList<>();
-        for (String line : text.split("\\R")) {
-            if (!line.isBlank()) {
-                rows.add(line.trim().split(line.contains("\t") ? "\t" : "[,;]"));
-            }
-        }
-        readings.setRowCount(Math.max(ROWS, rows.size()));
-        for (int r = 0; r < readings.getRowCount(); r++) {
-            for (int c = 0; c < 4; c++) {
-                readings.setValueAt(r < rows.size() && c < 2 && c < rows.get(r).length ? rows.get(r)[c].trim() : null,
-                        r, c);
-            }
-        }
+        PastedRows.fill(readings, text, 2, ROWS);
     }
 
     /** The work, off the event thread. */
@@ -256,19 +231,4 @@ public final class BarRatePage extends JPanel {
         return Figures.format(si, quantity, view.units(), decimals, view.locale());
     }
 
-    private static boolean blank(Object cell) {
-        return cell == null || cell.toString().isBlank();
-    }
-
-    private static String text(Object cell) {
-        return cell == null ? "" : cell.toString();
-    }
-
-    private static double number(Object cell) {
-        double value = Double.parseDouble(text(cell).trim().replace(',', '.'));
-        if (!Double.isFinite(value)) {
-            throw new NumberFormatException();
-        }
-        return value;
-    }
 }

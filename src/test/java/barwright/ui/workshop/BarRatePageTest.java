@@ -2,6 +2,7 @@ package barwright.ui.workshop;
 
 import barwright.physics.BarAnalysis;
 import barwright.ui.Display;
+import barwright.ui.NamedComponents;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.document.Samples;
 import barwright.ui.field.ViewSettings;
@@ -13,8 +14,6 @@ import org.junit.jupiter.api.Test;
 import javax.swing.JButton;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
-import java.awt.Component;
-import java.awt.Container;
 import java.util.Locale;
 
 import static org.assertj.core.api.Assertions.assertThat;
@@ -40,8 +39,8 @@ class BarRatePageTest {
             return created;
         });
         GuiActionRunner.execute(() -> page.paste(PASTED));
-        JLabel summary = (JLabel) find(page, "workshop.summary");
-        JButton use = (JButton) find(page, "workshop.use");
+        JLabel summary = (JLabel) NamedComponents.find(page, "workshop.summary");
+        JButton use = (JButton) NamedComponents.find(page, "workshop.use");
         long deadline = System.currentTimeMillis() + 20_000;
         while (!GuiActionRunner.execute(use::isEnabled) && System.currentTimeMillis() < deadline) {
             Thread.sleep(50);
@@ -60,18 +59,4 @@ class BarRatePageTest {
         assertThat(document.tree().path("front").path("bar").has("rateCalibration")).isFalse();
     }
 
-    private static Component find(Container container, String name) {
-        for (Component child : container.getComponents()) {
-            if (name.equals(child.getName())) {
-                return child;
-            }
-            if (child instanceof Container inner) {
-                Component found = find(inner, name);
-                if (found != null) {
-                    return found;
-                }
-            }
-        }
-        return null;
-    }
 }

@@ -1,0 +1,89 @@
+package barwright.ui.workshop;
+
+import barwright.model.AxlePosition;
+import barwright.ui.NamedComponents;
+import barwright.ui.action.Settings;
+import barwright.ui.app.DesktopApp;
+import barwright.ui.app.MainWindow;
+
+import javax.imageio.ImageIO;
+import javax.swing.JTabbedPane;
+import javax.swing.SwingUtilities;
+import java.awt.Point;
+import java.awt.Rectangle;
+import java.awt.Robot;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.atomic.AtomicReference;
+
+/**
+ * Writes screenshots of the four workshop pages to docs/images/workshop-*.png, with invented readings on the
+ * club hatchback sample. Run under a display: {@code xvfb-run -a -s "-screen 0 1280x1024x24" mvn -B -q
+ * test-compile exec:java -Dexec.classpathScope=test -Dexec.mainClass=barwright.ui.workshop.WorkshopScreenshots
+ * -Dexec.args="docs/images light 28 1024x768"} (folder, theme, text size in points or 0, window size).
+ */
+public final class WorkshopScreenshots {
+    private WorkshopScreenshots() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path folder = Path.of(args.length > 0 ? args[0] : "docs/images");
+        String theme = args.length > 1 ? args[1] : "light";
+        String text = args.length > 2 ? args[2] : "0";
+        String[] size = (args.length > 3 ? args[3] : "1280x880").split("x");
+        Files.createDirectories(folder);
+        Settings settings = Settings.inMemory();
+        settings.put("theme", theme);
+        settings.put("textSize", text);
+        AtomicReference<MainWindow> holder = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            MainWindow window = DesktopApp.open(settings, () -> { });
+            window.setLocation(0, 0);
+            window.setSize(Integer.parseInt(size[0]), Integer.parseInt(size[1]));
+            for (int i = 0; i < window.tabs().getTabCount(); i++) {
+                if ("Workshop".equals(window.tabs().getTitleAt(i))) {
+                    window.tabs().setSelectedIndex(i);
+                }
+            }
+            holder.set(window);
+        });
+        MainWindow window = holder.get();
+        Thread.sleep(1500);
+        String suffix = "-" + theme + ("0".equals(text) ? "" : "-text" + text) + "-" + size[0] + "x" + size[1];
+        JTabbedPane pages = (JTabbedPane) NamedComponents.find(window, "workshop.pages");
+        SwingUtilities.invokeAndWait(() -> {
+            ((BarRatePage) NamedComponents.find(window, "workshop.page")).paste("0\t0\n0\t0.5\n60\t3\n120\t5\n180\t7\n240\t9.1\n300\t11\n");
+            StringBuilder travel = new StringBuilder();
+            for (int wheel = -40; wheel <= 40; wheel += 10) {
+                travel.append(wheel).append('\t').append(String.format("%.1f", 0.62 * wheel + 0.0008 * wheel * wheel))
+                        .append('\n');
+            }
+            ((MotionRatioPage) NamedComponents.find(window, "motionRatio.page")).paste(travel.toString());
+            ((CentreOfMassPage) NamedComponents.find(window, "cg.page")).setReadings(AxlePosition.REAR, 0.25, 652.8, 0.2825);
+            ((CornerWeightsPage) NamedComponents.find(window, "corners.page")).setReadings(270, 372, 193, 185);
+        });
+        String[] names = {"workshop-bar-rate", "workshop-motion-ratio", "workshop-centre-of-mass", "workshop-corners"};
+        for (int page = 0; page < names.length; page++) {
+            int index = page;
+            SwingUtilities.invokeAndWait(() -> pages.setSelectedIndex(index));
+            Thread.sleep(800);
+            write(window, folder.resolve(names[page] + suffix + ".png"));
+        }
+        SwingUtilities.invokeAndWait(window::dispose);
+        System.exit(0);
+    }
+
+
+    /** Captures the window from the screen, as a person sees it. */
+    private static void write(MainWindow window, Path file) throws Exception {
+        AtomicReference<Rectangle> bounds = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            Point corner = window.getRootPane().getLocationOnScreen();
+            bounds.set(new Rectangle(corner, window.getRootPane().getSize()));
+        });
+        BufferedImage picture = new Robot().createScreenCapture(bounds.get());
+        ImageIO.write(picture, "png", file.toFile());
+        System.out.println("wrote " + file);
+    }
+}
