@@ -12,6 +12,13 @@ public final class ResultsModel {
     private AnalysisOutcome shown;
     private String staleReason;
 
+    /** @return a model that shows one analysis for good: a pinned setup, drawn beside the live one */
+    public static ResultsModel pinned(AnalysisOutcome outcome) {
+        ResultsModel model = new ResultsModel();
+        model.shown = outcome;
+        return model;
+    }
+
     /** @return the analysis on screen (never null once the first has arrived) */
     public AnalysisOutcome shown() {
         return shown;
@@ -39,6 +46,11 @@ public final class ResultsModel {
 
     public void addListener(Runnable listener) {
         listeners.add(listener);
+    }
+
+    /** Stops telling a view that has closed. */
+    public void removeListener(Runnable listener) {
+        listeners.remove(listener);
     }
 
     private void fire() {

@@ -1,0 +1,64 @@
+package barwright.ui.present;
+
+import barwright.io.KeyPath;
+import barwright.ui.action.Settings;
+import barwright.ui.app.DesktopApp;
+import barwright.ui.app.MainWindow;
+import com.fasterxml.jackson.databind.node.DoubleNode;
+
+import javax.imageio.ImageIO;
+import javax.swing.SwingUtilities;
+import java.awt.Point;
+import java.awt.Rectangle;
+import java.awt.Robot;
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.atomic.AtomicReference;
+
+/**
+ * Writes docs/images/presentation*.png: the club hatchback sample (invented) pinned, then its front bar made
+ * 2 mm thicker, before and after side by side. Run under a display: {@code xvfb-run -a -s "-screen 0
+ * 1280x1024x24" mvn -B -q test-compile exec:java -Dexec.classpathScope=test
+ * -Dexec.mainClass=barwright.ui.present.PresentationScreenshots -Dexec.args="docs/images light 1024x768"}.
+ */
+public final class PresentationScreenshots {
+    private PresentationScreenshots() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path folder = Path.of(args.length > 0 ? args[0] : "docs/images");
+        String theme = args.length > 1 ? args[1] : "light";
+        String[] size = (args.length > 2 ? args[2] : "1280x880").split("x");
+        Files.createDirectories(folder);
+        Settings settings = Settings.inMemory();
+        settings.put("theme", theme);
+        AtomicReference<MainWindow> window = new AtomicReference<>();
+        AtomicReference<PresentationFrame> frame = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> window.set(DesktopApp.open(settings, () -> { })));
+        Thread.sleep(1500);
+        SwingUtilities.invokeAndWait(() -> {
+            MainWindow main = window.get();
+            PresentationFrame shown = new PresentationFrame(main.document(), main.view(), main.results());
+            shown.setBounds(0, 0, Integer.parseInt(size[0]), Integer.parseInt(size[1]));
+            shown.setVisible(true);
+            shown.togglePin();
+            double diameter = main.document().tree().path("front").path("bar").path("section")
+                    .path("outerDiameterMm").asDouble();
+            main.document().edit(KeyPath.of("front.bar.section.outerDiameterMm"), DoubleNode.valueOf(diameter + 2),
+                    null, null);
+            frame.set(shown);
+        });
+        Thread.sleep(2000);
+        AtomicReference<Rectangle> bounds = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            Point corner = frame.get().getRootPane().getLocationOnScreen();
+            bounds.set(new Rectangle(corner, frame.get().getRootPane().getSize()));
+        });
+        BufferedImage picture = new Robot().createScreenCapture(bounds.get());
+        Path file = folder.resolve("presentation-" + theme + "-" + size[0] + "x" + size[1] + ".png");
+        ImageIO.write(picture, "png", file.toFile());
+        System.out.println("wrote " + file);
+        System.exit(0);
+    }
+}
