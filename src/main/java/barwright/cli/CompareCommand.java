@@ -2,8 +2,8 @@ package barwright.cli;
 
 import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleEdits;
 import barwright.io.VehicleFileWriter;
+import barwright.loading.VehicleLoader;
 import barwright.report.Cautions;
 import barwright.report.sizing.ComparisonJson;
 import barwright.report.sizing.ComparisonText;
@@ -76,7 +76,7 @@ final class CompareCommand implements Command {
             }
             List<String> edits = Arrays.stream(variant.substring(colon + 1).split(";")).map(String::trim)
                     .filter(edit -> !edit.isEmpty()).toList();
-            VehicleDocument changed = VehicleEdits.withEdits(first, edits);
+            VehicleDocument changed = VehicleLoader.withEdits(first, edits);
             configurations.add(new Configuration(variant.substring(0, colon).trim(), changed.vehicle()));
         }
         if (configurations.size() < Comparison.MIN_CONFIGURATIONS || configurations.size() > Comparison.MAX_CONFIGURATIONS) {

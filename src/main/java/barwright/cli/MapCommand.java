@@ -7,8 +7,8 @@ import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleEdits;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
+import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.report.Cautions;
@@ -123,6 +123,6 @@ final class MapCommand implements Command {
             throw new VehicleFileException(List.of(new Problem(axle.key() + "." + BAR, "is missing: candidate "
                     + (index + 1) + " needs the bar's geometry from the vehicle file")));
         }
-        return VehicleFileReader.fromTree(tree).vehicle().axle(axle).bar();
+        return VehicleLoader.fromTree(tree).vehicle().axle(axle).bar();
     }
 }

@@ -2,13 +2,13 @@ package barwright.cli;
 
 import barwright.io.RateCalibrationKeys;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
 import barwright.io.csv.CsvFileException;
 import barwright.io.csv.CsvReader;
 import barwright.io.csv.CsvRow;
 import barwright.io.csv.CsvSchema;
 import barwright.io.csv.CsvTable;
+import barwright.loading.VehicleLoader;
 import barwright.measure.BarRateFit;
 import barwright.measure.BarRateMeasurement;
 import barwright.measure.BarReading;
@@ -270,7 +270,7 @@ final class MeasureCommand implements Command {
         if (output == null) {
             throw new UsageException("--apply needs --output OUT.json: the car is written to a copy");
         }
-        VehicleFileReader.fromTree(tree);
+        VehicleLoader.fromTree(tree);
         VehicleFileWriter.save(tree, Path.of(output));
         if (!parsed.has("json")) {
             out.println("Written to " + output + ".");

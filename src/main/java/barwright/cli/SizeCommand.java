@@ -3,6 +3,7 @@ package barwright.cli;
 import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileWriter;
+import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
@@ -26,7 +27,6 @@ import barwright.sizing.SizingRequest;
 import barwright.sizing.SizingResult;
 import barwright.sizing.Targets;
 import barwright.sizing.TubeEquivalents;
-import barwright.io.VehicleEdits;
 import barwright.sizing.catalogue.Catalogue;
 import barwright.sizing.catalogue.CatalogueFileException;
 import barwright.sizing.catalogue.Catalogues;
@@ -161,7 +161,7 @@ final class SizeCommand implements Command {
                     + " candidates");
         }
         Candidate candidate = result.candidates().get(rank - 1);
-        VehicleFileWriter.save(VehicleEdits.withBars(document, candidate.settings()), Path.of(output));
+        VehicleFileWriter.save(VehicleLoader.withBars(document, candidate.settings()), Path.of(output));
     }
 
     private int tubesLikeSolid(Arguments parsed, VehicleDocument document, List<AxlePosition> axles,

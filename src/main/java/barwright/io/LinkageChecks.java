@@ -9,25 +9,18 @@ import barwright.model.Point3;
 import barwright.model.SemiTrailingArm;
 import barwright.model.Strut;
 import barwright.model.TrailingArm;
-import barwright.physics.linkage.AxleKinematics;
-import barwright.physics.linkage.LinkageLimitException;
-import barwright.physics.linkage.TravelLimit;
-import barwright.physics.linkage.TravelState;
 
 import java.util.Locale;
 
 /**
  * The checks of a linkage that need more than one value: points on the wrong side, arms that cross, links too
- * short to be links, and a linkage that cannot be put together at its ride height or locks near it. Each problem
- * names the key path of the point or setting to change.
+ * short to be links; then, where those pass, the reader's {@link BuildChecks} (a linkage that cannot be put
+ * together at its ride height or locks near it). Each problem names the key path of the point or setting to
+ * change.
  */
 final class LinkageChecks {
-    /** Travel a suspension must have each way from its ride height (m): less is a linkage that cannot be driven. */
-    static final double MINIMUM_TRAVEL = 0.030;
     /** Shortest link accepted (m): closer points are a typing slip, not a link. */
     static final double SHORTEST_LINK = 0.020;
-    /** Shortest front-view swing arm accepted (m): an instant centre almost straight above the contact point. */
-    static final double SHORTEST_SWING_ARM = 0.050;
     /** A trailing arm's pivot axis is square to the car within this fore-and-aft difference (m). */
     static final double SQUARE = 0.001;
 
@@ -35,7 +28,7 @@ final class LinkageChecks {
     }
 
     static void check(Axle axle, String axlePath, NodeReader reader) {
-        String path = NodeReader.child(axlePath, LinkageReader.LINKAGE);
+        String path = NodeReader.child(axlePath, VehicleKeys.LINKAGE);
         int before = reader.problems().size();
         Linkage linkage = axle.suspension().linkage();
         if (linkage instanceof DoubleWishbone arms) {
@@ -59,7 +52,7 @@ final class LinkageChecks {
             }
         }
         if (reader.problems().size() == before) {
-            kinematics(axle, axlePath, path, reader);
+            reader.problems(reader.buildChecks().ofLinkage(axle, axlePath));
         }
     }
 
@@ -113,36 +106,6 @@ final class LinkageChecks {
         if (Math.abs(inner.x()) < 0.05 && Math.abs(outer.x()) < 0.05) {
             reader.problem(path + ".pivotInnerMm", "and pivotOuterMm lie within 50 mm of the wheel centre's plane "
                     + "(x = 0): the arm's pivots are ahead of (or behind) the wheel");
-        }
-    }
-
-    private static void kinematics(Axle axle, String axlePath, String path, NodeReader reader) {
-        AxleKinematics kinematics;
-        try {
-            kinematics = AxleKinematics.of(axle);
-        } catch (LinkageLimitException beyond) {
-            double change = axle.suspension().rideHeightChange();
-            if (change != 0) {
-                reader.problem(NodeReader.child(axlePath, LinkageReader.RIDE_HEIGHT_CHANGE), "= " + mm(change)
-                        + ": the linkage cannot be put together at this ride height (" + beyond.getMessage() + ")");
-            } else {
-                reader.problem(path, "cannot be put together: " + beyond.getMessage());
-            }
-            return;
-        }
-        travel(kinematics.bumpLimit(), "bump", path, reader);
-        travel(kinematics.droopLimit(), "droop", path, reader);
-        TravelState still = kinematics.travel(0);
-        if (!still.instantCentre().atInfinity() && Math.abs(still.swingArmLength()) < SHORTEST_SWING_ARM) {
-            reader.problem(path, "puts the front-view instant centre " + mm(Math.abs(still.swingArmLength()))
-                    + " from straight above or below the tyre contact point: no real linkage does; check the points");
-        }
-    }
-
-    private static void travel(TravelLimit limit, String way, String path, NodeReader reader) {
-        if (limit.locks() && Math.abs(limit.travel()) < MINIMUM_TRAVEL) {
-            reader.problem(path, "locks after " + mm(Math.abs(limit.travel())) + " of " + way + " (" + limit.reason()
-                    + "): a suspension needs at least 30 mm each way from its ride height");
         }
     }
 

@@ -28,13 +28,17 @@ public final class VehicleEdits {
     private VehicleEdits() {
     }
 
-    /** @return the document with each bar in place, validated as a whole */
-    public static VehicleDocument withBars(VehicleDocument document, List<BarSetting> bars) throws VehicleFileException {
+    /**
+     * @param checks the checks that need the calculation ({@code barwright.loading.VehicleLoader#withBars} has them)
+     * @return the document with each bar in place, validated as a whole
+     */
+    public static VehicleDocument withBars(VehicleDocument document, List<BarSetting> bars, BuildChecks checks)
+            throws VehicleFileException {
         ObjectNode tree = document.editableTree();
         for (BarSetting bar : bars) {
             putBar(tree, bar, null);
         }
-        return VehicleFileReader.fromTree(tree);
+        return VehicleFileReader.fromTree(tree, checks);
     }
 
     /**
@@ -74,11 +78,14 @@ public final class VehicleEdits {
      * @param edits changes as {@code key.path=value}, e.g. {@code front.bar.selectedArm=2} or
      *              {@code rear.bar.armLengthsMm[0]=160}; the value is JSON (a number, null, an object...) or
      *              else taken as text
+     * @param checks the checks that need the calculation ({@code barwright.loading.VehicleLoader#withEdits} has
+     *               them)
      * @return the document with every change made, validated as a whole
      * @throws VehicleFileException where a change is malformed, names no key the program knows (the nearest
      *                              key is suggested), or the result is refused
      */
-    public static VehicleDocument withEdits(VehicleDocument document, List<String> edits) throws VehicleFileException {
+    public static VehicleDocument withEdits(VehicleDocument document, List<String> edits, BuildChecks checks)
+            throws VehicleFileException {
         ObjectNode tree = document.editableTree();
         for (String edit : edits) {
             int equals = edit.indexOf('=');
@@ -93,7 +100,7 @@ public final class VehicleEdits {
                 throw refused(pathText, noEntry);
             }
             if (path.get(document.tree()) == null) {
-                refuseUnknownKey(document, path, value);
+                refuseUnknownKey(document, path, value, checks);
             }
             try {
                 path.set(tree, value);
@@ -101,19 +108,19 @@ public final class VehicleEdits {
                 throw refused(pathText, "does not name a key of the vehicle file");
             }
         }
-        return VehicleFileReader.fromTree(tree);
+        return VehicleFileReader.fromTree(tree, checks);
     }
 
     /**
      * A key the file does not have is accepted only where it means something to the program (an optional key):
      * a key that changes nothing is a typo, refused with the nearest key the file has.
      */
-    private static void refuseUnknownKey(VehicleDocument document, KeyPath path, JsonNode value)
+    private static void refuseUnknownKey(VehicleDocument document, KeyPath path, JsonNode value, BuildChecks checks)
             throws VehicleFileException {
         ObjectNode alone = document.editableTree();
         try {
             path.set(alone, value);
-            if (!VehicleFileReader.fromTree(alone).vehicle().equals(document.vehicle())) {
+            if (!VehicleFileReader.fromTree(alone, checks).vehicle().equals(document.vehicle())) {
                 return; // an optional key the program reads
             }
         } catch (IllegalArgumentException | VehicleFileException refusedAnyway) {

@@ -31,17 +31,21 @@ public final class VehicleFileReader {
     private VehicleFileReader() {
     }
 
-    /** Reads and validates a file; nothing is returned unless the whole file is good. */
-    public static VehicleDocument read(Path file) throws VehicleFileException {
+    /**
+     * Reads and validates a file; nothing is returned unless the whole file is good.
+     *
+     * @param checks the checks that need the calculation ({@code barwright.loading.VehicleLoader} has them)
+     */
+    public static VehicleDocument read(Path file, BuildChecks checks) throws VehicleFileException {
         try {
-            return parse(JsonInput.readBytes(file, KIND));
+            return parse(JsonInput.readBytes(file, KIND), checks);
         } catch (JsonInputException refused) {
             throw new VehicleFileException(refused.problems());
         }
     }
 
     /** Parses and validates the bytes of a vehicle file (UTF-8, with or without a byte-order mark). */
-    public static VehicleDocument parse(byte[] content) throws VehicleFileException {
+    public static VehicleDocument parse(byte[] content, BuildChecks checks) throws VehicleFileException {
         JsonNode tree;
         try {
             if (JsonInput.decode(content).isBlank()) {
@@ -51,16 +55,16 @@ public final class VehicleFileReader {
         } catch (JsonInputException refused) {
             throw new VehicleFileException(refused.problems());
         }
-        return fromTree(tree);
+        return fromTree(tree, checks);
     }
 
     /** Validates a tree (for example the open document after an edit) and builds the car from it. */
-    public static VehicleDocument fromTree(JsonNode tree) throws VehicleFileException {
+    public static VehicleDocument fromTree(JsonNode tree, BuildChecks checks) throws VehicleFileException {
         if (tree == null || !tree.isObject()) {
             throw new VehicleFileException("the file must hold one JSON object {...}, not "
                     + (tree == null ? "nothing" : tree.getNodeType().toString().toLowerCase(Locale.ROOT)));
         }
-        NodeReader reader = new NodeReader();
+        NodeReader reader = new NodeReader(checks);
         checkHeader(tree, reader);
         TyreReader.refuseNewKeysInVersion1(tree, reader);
         if (reader.hasProblems()) {
