@@ -1,6 +1,6 @@
 package barwright.cli;
 
-import barwright.io.RateCalibrationKeys;
+import barwright.io.VehicleEdits;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileWriter;
 import barwright.io.csv.CsvFileException;
@@ -23,6 +23,7 @@ import barwright.measure.TiltTest;
 import barwright.measure.TravelReading;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
+import barwright.model.CornerMasses;
 import barwright.model.RateCalibration;
 import barwright.model.Vehicle;
 import barwright.physics.BarAnalysis;
@@ -124,8 +125,7 @@ final class MeasureCommand implements Command {
             String note = parsed.option("note", String.format(Locale.ROOT, "%d readings, R² %.4f, free play %.2f mm",
                     readings.size(), fit.rSquared(), fit.lash() * 1e3));
             ObjectNode tree = document.editableTree();
-            RateCalibrationKeys.put((ObjectNode) tree.path(axle.key()).path("bar"),
-                    new RateCalibration(factor, LocalDate.now(), note));
+            VehicleEdits.putRateCalibration(tree, axle, new RateCalibration(factor, LocalDate.now(), note));
             write(parsed, tree, out);
         }
         return Cli.OK;
@@ -167,7 +167,7 @@ final class MeasureCommand implements Command {
         print(out, parsed, MeasureJson.centreOfMass(height), text);
         if (parsed.has("apply")) {
             ObjectNode tree = document.editableTree();
-            ((ObjectNode) tree.path("vehicle")).put("cgHeightMm", Math.round(height.height() * 1e4) / 10.0);
+            VehicleEdits.putCentreOfMassHeight(tree, height.height());
             write(parsed, tree, out);
         }
         return Cli.OK;
@@ -180,13 +180,7 @@ final class MeasureCommand implements Command {
         double[] kg = fourReadings(parsed.option("kg", null));
         String target = parsed.option("target-cross", null);
         AxlePosition axle = oneAxle(parsed, document.vehicle());
-        String diagonal = parsed.option("longer-loads", "lf-rr");
-        GainingDiagonal gaining = switch (diagonal) {
-            case "lf-rr" -> GainingDiagonal.LEFT_FRONT_RIGHT_REAR;
-            case "rf-lr" -> GainingDiagonal.RIGHT_FRONT_LEFT_REAR;
-            default -> throw new UsageException("--longer-loads " + diagonal + ": lf-rr or rf-lr, the diagonal that "
-                    + "gains load when the link is made longer");
-        };
+        GainingDiagonal gaining = PreloadCommand.longerLoads(parsed, GainingDiagonal.LEFT_FRONT_RIGHT_REAR);
         CornerWeights weights = CornerWeighing.of(kg[0], kg[1], kg[2], kg[3], document.vehicle(),
                 target == null ? null : parsed.number("target-cross", 0.5), axle, gaining);
         String text = MeasureText.corners(weights, parsed.units());
@@ -197,15 +191,7 @@ final class MeasureCommand implements Command {
         print(out, parsed, MeasureJson.corners(weights), text);
         if (parsed.has("apply")) {
             ObjectNode tree = document.editableTree();
-            ObjectNode vehicle = (ObjectNode) tree.path("vehicle");
-            ObjectNode corners = vehicle.putObject("cornerMassesKg");
-            corners.put("leftFront", kg[0]);
-            corners.put("rightFront", kg[1]);
-            corners.put("leftRear", kg[2]);
-            corners.put("rightRear", kg[3]);
-            // the mass and front share follow from the corners (file-format.md)
-            vehicle.remove("massKg");
-            vehicle.remove("frontMassFraction");
+            VehicleEdits.putCornerMasses(tree, new CornerMasses(kg[0], kg[1], kg[2], kg[3]));
             write(parsed, tree, out);
         }
         return Cli.OK;

@@ -43,14 +43,7 @@ final class PreloadCommand implements Command {
         if (axles.size() != 1) {
             throw new UsageException("--axle: give the one axle whose link changes, front or rear");
         }
-        String diagonal = parsed.option("longer-loads", null);
-        GainingDiagonal gaining = switch (diagonal == null ? "" : diagonal) {
-            case "lf-rr" -> GainingDiagonal.LEFT_FRONT_RIGHT_REAR;
-            case "rf-lr" -> GainingDiagonal.RIGHT_FRONT_LEFT_REAR;
-            default -> throw new UsageException("--longer-loads " + (diagonal == null ? "is missing" : diagonal)
-                    + ": say which diagonal gains load when the link is made longer, lf-rr (left front and right "
-                    + "rear) or rf-lr (right front and left rear)");
-        };
+        GainingDiagonal gaining = longerLoads(parsed, null);
         double changeMm = parsed.number("link-change-mm", 1.0);
         AxlePosition axle = axles.get(0);
         SizeCommand.requireBar(document, axle);
@@ -62,5 +55,24 @@ final class PreloadCommand implements Command {
             out.println(Cautions.SHORT);
         }
         return Cli.OK;
+    }
+
+    /**
+     * The option {@code --longer-loads lf-rr|rf-lr} of the commands that change a bar link's length.
+     *
+     * @param fallback the diagonal taken where the option is not given, or null where it is required
+     */
+    static GainingDiagonal longerLoads(Arguments parsed, GainingDiagonal fallback) throws UsageException {
+        String diagonal = parsed.option("longer-loads", null);
+        if (diagonal == null && fallback != null) {
+            return fallback;
+        }
+        return switch (diagonal == null ? "" : diagonal) {
+            case "lf-rr" -> GainingDiagonal.LEFT_FRONT_RIGHT_REAR;
+            case "rf-lr" -> GainingDiagonal.RIGHT_FRONT_LEFT_REAR;
+            default -> throw new UsageException("--longer-loads " + (diagonal == null ? "is missing" : diagonal)
+                    + ": say which diagonal gains load when the link is made longer, lf-rr (left front and right "
+                    + "rear) or rf-lr (right front and left rear)");
+        };
     }
 }

@@ -8,6 +8,17 @@ import java.util.List;
  * write a bar all use these.
  */
 public final class VehicleKeys {
+    // the body (file-format.md, "The vehicle")
+    public static final String VEHICLE = "vehicle";
+    public static final String MASS_KG = "massKg";
+    public static final String FRONT_MASS_FRACTION = "frontMassFraction";
+    public static final String CG_HEIGHT_MM = "cgHeightMm";
+    public static final String CORNER_MASSES_KG = "cornerMassesKg";
+    public static final String LEFT_FRONT = "leftFront";
+    public static final String RIGHT_FRONT = "rightFront";
+    public static final String LEFT_REAR = "leftRear";
+    public static final String RIGHT_REAR = "rightRear";
+
     public static final String BAR = "bar";
     public static final String MATERIAL = "material";
     public static final String SECTION = "section";
