@@ -2,14 +2,13 @@ package barwright.cli;
 
 import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileWriter;
 import barwright.loading.VehicleLoader;
-import barwright.report.Cautions;
 import barwright.report.sizing.ComparisonJson;
 import barwright.report.sizing.ComparisonText;
 import barwright.report.sizing.SweepOutput;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
+import barwright.units.UnitSystem;
 
 import java.io.PrintStream;
 import java.io.StringWriter;
@@ -89,12 +88,9 @@ final class CompareCommand implements Command {
             SweepOutput.chartsCsv(comparison.charts(), text);
             AtomicFileWriter.writeText(Path.of(csv), text.toString());
         }
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(ComparisonJson.of(comparison)));
-        } else {
-            out.print(ComparisonText.of(comparison, parsed.units()));
-            out.println(Cautions.SHORT);
-        }
+        UnitSystem units = parsed.units();
+        Printed.jsonOrTextWithCaution(out, parsed, () -> ComparisonJson.of(comparison),
+                () -> ComparisonText.of(comparison, units));
         return Cli.OK;
     }
 }

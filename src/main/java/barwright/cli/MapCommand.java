@@ -7,11 +7,9 @@ import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleEdits;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileWriter;
 import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
-import barwright.report.Cautions;
 import barwright.report.sizing.MapOutput;
 import barwright.report.sizing.MapText;
 import barwright.report.sizing.SizingJson;
@@ -78,12 +76,7 @@ final class MapCommand implements Command {
             MapOutput.csv(map, text);
             AtomicFileWriter.writeText(Path.of(csv), text.toString());
         }
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(MapOutput.json(map)));
-        } else {
-            out.print(MapText.of(map, units));
-            out.println(Cautions.SHORT);
-        }
+        Printed.jsonOrTextWithCaution(out, parsed, () -> MapOutput.json(map), () -> MapText.of(map, units));
         return Cli.OK;
     }
 

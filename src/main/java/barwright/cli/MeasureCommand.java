@@ -27,7 +27,6 @@ import barwright.model.CornerMasses;
 import barwright.model.RateCalibration;
 import barwright.model.Vehicle;
 import barwright.physics.BarAnalysis;
-import barwright.report.Cautions;
 import barwright.report.measure.MeasureJson;
 import barwright.report.measure.MeasureText;
 import barwright.sizing.preload.GainingDiagonal;
@@ -242,12 +241,7 @@ final class MeasureCommand implements Command {
     }
 
     private static void print(PrintStream out, Arguments parsed, ObjectNode json, String text) {
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(json));
-        } else {
-            out.print(text);
-            out.println(Cautions.SHORT);
-        }
+        Printed.jsonOrTextWithCaution(out, parsed, () -> json, () -> text);
     }
 
     /** Checks the changed tree as a whole car, then writes it atomically to --output. */

@@ -1,9 +1,7 @@
 package barwright.cli;
 
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileWriter;
 import barwright.model.AxlePosition;
-import barwright.report.Cautions;
 import barwright.report.sizing.PreloadJson;
 import barwright.report.sizing.PreloadText;
 import barwright.sizing.preload.GainingDiagonal;
@@ -48,12 +46,7 @@ final class PreloadCommand implements Command {
         AxlePosition axle = axles.get(0);
         SizeCommand.requireBar(document, axle);
         PreloadResult result = LinkPreload.of(document.vehicle(), axle, gaining, changeMm * 1e-3);
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(PreloadJson.of(result)));
-        } else {
-            out.print(PreloadText.of(result, units));
-            out.println(Cautions.SHORT);
-        }
+        Printed.jsonOrTextWithCaution(out, parsed, () -> PreloadJson.of(result), () -> PreloadText.of(result, units));
         return Cli.OK;
     }
 

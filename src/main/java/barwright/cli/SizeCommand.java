@@ -10,7 +10,6 @@ import barwright.model.Material;
 import barwright.model.MaterialLibrary;
 import barwright.model.SolidSection;
 import barwright.physics.Warnings;
-import barwright.report.Cautions;
 import barwright.report.sizing.SizingJson;
 import barwright.report.sizing.SizingText;
 import barwright.report.sizing.SweepOutput;
@@ -136,12 +135,10 @@ final class SizeCommand implements Command {
             }
         }
         applyCandidate(parsed, document, result);
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(SizingJson.of(request, result, exactSolid, exactWall)));
-        } else {
-            out.print(SizingText.of(request, result, exactSolid, exactWall, units));
-            out.println(Cautions.SHORT);
-        }
+        ExactSolution solid = exactSolid;
+        ExactSolution wall = exactWall;
+        Printed.jsonOrTextWithCaution(out, parsed, () -> SizingJson.of(request, result, solid, wall),
+                () -> SizingText.of(request, result, solid, wall, units));
         return Cli.OK;
     }
 
@@ -186,12 +183,8 @@ final class SizeCommand implements Command {
         TubeEquivalents.Comparison comparison = TubeEquivalents.compare(solidBar,
                 document.vehicle().differentialWheelTravel(), sizes, materials.get(axle),
                 TubeEquivalents.DEFAULT_TOLERANCE);
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(TubeOutput.json(comparison)));
-        } else {
-            out.print(TubeOutput.text(comparison, units));
-            out.println(Cautions.SHORT);
-        }
+        Printed.jsonOrTextWithCaution(out, parsed, () -> TubeOutput.json(comparison),
+                () -> TubeOutput.text(comparison, units));
         return Cli.OK;
     }
 

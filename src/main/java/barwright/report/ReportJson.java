@@ -36,9 +36,7 @@ public final class ReportJson {
     }
 
     public static ObjectNode of(AnalysisResult result) {
-        ObjectNode report = NODES.objectNode();
-        report.put("format", FORMAT);
-        report.put("version", VERSION);
+        ObjectNode report = OutputDocument.start(FORMAT, VERSION);
         ObjectNode vehicle = report.putObject("vehicle");
         vehicle.put("massKg", result.masses().mass());
         vehicle.put("frontMassFraction", result.masses().frontMassFraction());

@@ -35,7 +35,7 @@ public final class TextSummary {
     }
 
     private String write(AnalysisResult result) {
-        line("Barwright analysis: " + result.vehicle().name() + "   (units: " + units.label() + ")");
+        line(TextHeading.of("analysis", result.vehicle().name(), units));
         line("");
         line("Car");
         row("mass", f(result.masses().mass(), Quantity.MASS, 1));

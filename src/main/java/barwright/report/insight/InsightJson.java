@@ -11,6 +11,7 @@ import barwright.insight.LongitudinalRange;
 import barwright.insight.SensitivityResult;
 import barwright.insight.SensitivityRow;
 import barwright.model.TurnDirection;
+import barwright.report.OutputDocument;
 import barwright.report.ReportJson;
 import barwright.units.DisplayUnit;
 import barwright.units.UnitSystem;
@@ -158,9 +159,7 @@ public final class InsightJson {
     }
 
     private static ObjectNode header(String format, String vehicleName) {
-        ObjectNode node = NODES.objectNode();
-        node.put("format", format);
-        node.put("version", VERSION);
+        ObjectNode node = OutputDocument.start(format, VERSION);
         node.put("vehicle", vehicleName);
         return node;
     }
