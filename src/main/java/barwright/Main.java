@@ -1,6 +1,7 @@
 package barwright;
 
 import barwright.cli.Cli;
+import barwright.ui.app.DesktopApp;
 
 /**
  * Starts Barwright: with no arguments the desktop program, with a command the command line. The command line
@@ -25,6 +26,6 @@ public final class Main {
 
     /** Kept apart so that the window's classes (and AWT) load only when no command is given. */
     private static int openWindow() {
-        return barwright.ui.app.DesktopApp.launch();
+        return DesktopApp.launch();
     }
 }

@@ -16,7 +16,6 @@ import barwright.report.sizing.SizingJson;
 import barwright.sizing.map.AdjustmentMap;
 import barwright.sizing.map.AdjustmentMap.LabelledBar;
 import barwright.solver.Progress;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 

@@ -21,7 +21,6 @@ import barwright.measure.MotionRatioMeasurement;
 import barwright.measure.TiltMethod;
 import barwright.measure.TiltTest;
 import barwright.measure.TravelReading;
-import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.model.CornerMasses;
 import barwright.model.RateCalibration;
@@ -30,7 +29,6 @@ import barwright.physics.BarAnalysis;
 import barwright.report.measure.MeasureJson;
 import barwright.report.measure.MeasureText;
 import barwright.sizing.preload.GainingDiagonal;
-import barwright.units.UnitSystem;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.io.PrintStream;

@@ -10,6 +10,7 @@ import barwright.physics.LoadTransferParts;
 import barwright.physics.TurnResult;
 import barwright.physics.Warning;
 import barwright.physics.bar.BarResult;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;

@@ -2,7 +2,7 @@ package barwright.report.dynamics;
 
 import barwright.physics.dynamics.RollState;
 import barwright.physics.dynamics.TransientResult;
-import barwright.report.OutputDocument;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 

@@ -2,7 +2,7 @@ package barwright.report.fatigue;
 
 import barwright.physics.fatigue.FatigueResult;
 import barwright.physics.fatigue.StressCycle;
-import barwright.report.OutputDocument;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;

@@ -4,7 +4,7 @@ import barwright.insight.ChassisPoint;
 import barwright.insight.ChassisStudy;
 import barwright.insight.ChassisStudyResult;
 import barwright.report.Cautions;
-import barwright.report.TextHeading;
+import barwright.report.heading.TextHeading;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;

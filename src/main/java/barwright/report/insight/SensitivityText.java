@@ -6,7 +6,7 @@ import barwright.insight.SensitivityResult;
 import barwright.insight.SensitivityRow;
 import barwright.report.Cautions;
 import barwright.report.ReportJson;
-import barwright.report.TextHeading;
+import barwright.report.heading.TextHeading;
 import barwright.units.DisplayUnit;
 import barwright.units.Figures;
 import barwright.units.Quantity;

@@ -4,7 +4,7 @@ import barwright.model.AxlePosition;
 import barwright.physics.linkage.InstantCentre;
 import barwright.physics.linkage.RollState;
 import barwright.physics.linkage.TravelState;
-import barwright.report.OutputDocument;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;

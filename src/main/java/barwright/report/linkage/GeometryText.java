@@ -11,7 +11,7 @@ import barwright.physics.linkage.InstantCentre;
 import barwright.physics.linkage.RollState;
 import barwright.physics.linkage.TravelState;
 import barwright.report.Cautions;
-import barwright.report.TextHeading;
+import barwright.report.heading.TextHeading;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;

@@ -4,7 +4,7 @@ import barwright.measure.BarRateFit;
 import barwright.measure.CentreOfMassHeight;
 import barwright.measure.CornerWeights;
 import barwright.measure.MotionRatioFit;
-import barwright.report.OutputDocument;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 

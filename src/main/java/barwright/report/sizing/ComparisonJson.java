@@ -1,6 +1,6 @@
 package barwright.report.sizing;
 
-import barwright.report.OutputDocument;
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.FigureRow;
 import barwright.units.UnitSystem;

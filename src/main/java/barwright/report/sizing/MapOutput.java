@@ -1,7 +1,7 @@
 package barwright.report.sizing;
 
-import barwright.report.OutputDocument;
 import barwright.report.ReportJson;
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.BarFigures;
 import barwright.sizing.SetupFigures;
 import barwright.sizing.map.AdjustmentMap;

@@ -1,6 +1,6 @@
 package barwright.report.sizing;
 
-import barwright.report.OutputDocument;
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.preload.CornerLoads;
 import barwright.sizing.preload.LinkPreload;
 import barwright.sizing.preload.PreloadResult;

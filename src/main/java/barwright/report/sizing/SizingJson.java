@@ -1,10 +1,10 @@
 package barwright.report.sizing;
 
+import barwright.io.BarNodes;
 import barwright.report.ReportJson;
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.BarChoice;
 import barwright.sizing.BarFigures;
-import barwright.io.BarNodes;
-import barwright.report.OutputDocument;
 import barwright.sizing.Candidate;
 import barwright.sizing.ExactSolution;
 import barwright.sizing.Rejection;

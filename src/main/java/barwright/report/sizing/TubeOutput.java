@@ -1,8 +1,8 @@
 package barwright.report.sizing;
 
-import barwright.physics.bar.BarResult;
 import barwright.io.BarNodes;
-import barwright.report.OutputDocument;
+import barwright.physics.bar.BarResult;
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.TubeEquivalents;
 import barwright.sizing.TubeMatch;
 import barwright.units.Quantity;

@@ -1,7 +1,7 @@
 package barwright.report.tyre;
 
 import barwright.io.TyreWriter;
-import barwright.report.OutputDocument;
+import barwright.report.heading.OutputDocument;
 import barwright.tyrefit.CurveFit;
 import barwright.tyrefit.MagicFormula;
 import barwright.tyrefit.TyreFit;

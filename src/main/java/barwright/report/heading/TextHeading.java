@@ -1,4 +1,4 @@
-package barwright.report;
+package barwright.report.heading;
 
 import barwright.units.UnitSystem;
 

@@ -1,4 +1,4 @@
-package barwright.report;
+package barwright.report.heading;
 
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
