@@ -1,6 +1,7 @@
 package barwright;
 
 import barwright.cli.Cli;
+import barwright.ui.app.DesktopApp;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -41,6 +42,6 @@ public final class Main {
 
     /** Kept apart so that the window's classes (and AWT) load only when no command is given. */
     private static int openWindow(Path file) {
-        return barwright.ui.app.DesktopApp.launch(file);
+        return DesktopApp.launch(file);
     }
 }

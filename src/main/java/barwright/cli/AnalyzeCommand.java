@@ -1,7 +1,6 @@
 package barwright.cli;
 
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileWriter;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.ReportJson;
@@ -35,11 +34,7 @@ final class AnalyzeCommand implements Command {
         var units = parsed.units();
         VehicleDocument document = VehicleInput.read(file);
         AnalysisResult result = VehicleAnalysis.analyse(document.vehicle());
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(ReportJson.of(result)));
-        } else {
-            out.print(TextSummary.of(result, units));
-        }
+        Printed.jsonOrText(out, parsed, () -> ReportJson.of(result), () -> TextSummary.of(result, units));
         return 0;
     }
 }

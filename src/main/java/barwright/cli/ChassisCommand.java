@@ -2,7 +2,6 @@ package barwright.cli;
 
 import barwright.insight.ChassisStudy;
 import barwright.insight.ChassisStudyResult;
-import barwright.io.VehicleFileWriter;
 import barwright.report.insight.ChassisText;
 import barwright.report.insight.InsightJson;
 
@@ -33,11 +32,7 @@ final class ChassisCommand implements Command {
         String file = parsed.onlyPositional("vehicle file");
         var units = parsed.units();
         ChassisStudyResult study = ChassisStudy.compute(VehicleInput.read(file).vehicle());
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(InsightJson.chassis(study)));
-        } else {
-            out.print(new ChassisText(units).of(study));
-        }
+        Printed.jsonOrText(out, parsed, () -> InsightJson.chassis(study), () -> new ChassisText(units).of(study));
         return 0;
     }
 }

@@ -2,14 +2,13 @@ package barwright.cli;
 
 import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleEdits;
-import barwright.io.VehicleFileWriter;
-import barwright.report.Cautions;
+import barwright.loading.VehicleLoader;
 import barwright.report.sizing.ComparisonJson;
 import barwright.report.sizing.ComparisonText;
 import barwright.report.sizing.SweepOutput;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
+import barwright.units.UnitSystem;
 
 import java.io.PrintStream;
 import java.io.StringWriter;
@@ -76,7 +75,7 @@ final class CompareCommand implements Command {
             }
             List<String> edits = Arrays.stream(variant.substring(colon + 1).split(";")).map(String::trim)
                     .filter(edit -> !edit.isEmpty()).toList();
-            VehicleDocument changed = VehicleEdits.withEdits(first, edits);
+            VehicleDocument changed = VehicleLoader.withEdits(first, edits);
             configurations.add(new Configuration(variant.substring(0, colon).trim(), changed.vehicle()));
         }
         if (configurations.size() < Comparison.MIN_CONFIGURATIONS || configurations.size() > Comparison.MAX_CONFIGURATIONS) {
@@ -89,12 +88,9 @@ final class CompareCommand implements Command {
             SweepOutput.chartsCsv(comparison.charts(), text);
             AtomicFileWriter.writeText(Path.of(csv), text.toString());
         }
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(ComparisonJson.of(comparison)));
-        } else {
-            out.print(ComparisonText.of(comparison, parsed.units()));
-            out.println(Cautions.SHORT);
-        }
+        UnitSystem units = parsed.units();
+        Printed.jsonOrTextWithCaution(out, parsed, () -> ComparisonJson.of(comparison),
+                () -> ComparisonText.of(comparison, units));
         return Cli.OK;
     }
 }

@@ -2,7 +2,6 @@ package barwright.cli;
 
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
-import barwright.io.VehicleFileWriter;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.insight.EnvelopeText;
 import barwright.report.insight.InsightJson;
@@ -36,11 +35,8 @@ final class EnvelopeCommand implements Command {
         LiftEnvelopeResult envelope = envelopeOf(file);
         String other = parsed.option("compare", null);
         LiftEnvelopeResult compared = other == null ? null : envelopeOf(other);
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(InsightJson.envelope(envelope, compared)));
-        } else {
-            out.print(new EnvelopeText(units).of(envelope, compared));
-        }
+        Printed.jsonOrText(out, parsed, () -> InsightJson.envelope(envelope, compared),
+                () -> new EnvelopeText(units).of(envelope, compared));
         return 0;
     }
 

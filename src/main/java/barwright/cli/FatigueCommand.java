@@ -3,7 +3,6 @@ package barwright.cli;
 import barwright.io.BarFatigueReader;
 import barwright.io.FatigueCsv;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileWriter;
 import barwright.io.csv.CsvFileException;
 import barwright.model.AxlePosition;
 import barwright.physics.AnalysisPipeline;
@@ -104,11 +103,8 @@ final class FatigueCommand implements Command {
             refused.problems().forEach(problem -> err.println("  " + problem));
             return Cli.REFUSED;
         }
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(FatigueJson.of(results)));
-        } else {
-            out.print(FatigueText.of(results, units, (int) lapsPerSeason, lapSeconds, source));
-        }
+        Printed.jsonOrText(out, parsed, () -> FatigueJson.of(results),
+                () -> FatigueText.of(results, units, (int) lapsPerSeason, lapSeconds, source));
         return Cli.OK;
     }
 }

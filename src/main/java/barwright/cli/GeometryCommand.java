@@ -1,6 +1,5 @@
 package barwright.cli;
 
-import barwright.io.VehicleFileWriter;
 import barwright.model.AxlePosition;
 import barwright.model.Vehicle;
 import barwright.report.linkage.GeometryJson;
@@ -44,11 +43,8 @@ final class GeometryCommand implements Command {
         Vehicle vehicle = VehicleInput.read(file).vehicle();
         GeometryTables front = GeometryTables.of(vehicle, AxlePosition.FRONT, rolls, travels);
         GeometryTables rear = GeometryTables.of(vehicle, AxlePosition.REAR, rolls, travels);
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(GeometryJson.of(front, rear)));
-        } else {
-            out.print(new GeometryText(units).of(vehicle.name(), front, rear));
-        }
+        Printed.jsonOrText(out, parsed, () -> GeometryJson.of(front, rear),
+                () -> new GeometryText(units).of(vehicle.name(), front, rear));
         return 0;
     }
 

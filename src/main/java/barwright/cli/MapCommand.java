@@ -7,18 +7,15 @@ import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleEdits;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
-import barwright.io.VehicleFileWriter;
+import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
-import barwright.report.Cautions;
 import barwright.report.sizing.MapOutput;
 import barwright.report.sizing.MapText;
 import barwright.report.sizing.SizingJson;
 import barwright.sizing.map.AdjustmentMap;
 import barwright.sizing.map.AdjustmentMap.LabelledBar;
 import barwright.solver.Progress;
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
@@ -78,12 +75,7 @@ final class MapCommand implements Command {
             MapOutput.csv(map, text);
             AtomicFileWriter.writeText(Path.of(csv), text.toString());
         }
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(MapOutput.json(map)));
-        } else {
-            out.print(MapText.of(map, units));
-            out.println(Cautions.SHORT);
-        }
+        Printed.jsonOrTextWithCaution(out, parsed, () -> MapOutput.json(map), () -> MapText.of(map, units));
         return Cli.OK;
     }
 
@@ -123,6 +115,6 @@ final class MapCommand implements Command {
             throw new VehicleFileException(List.of(new Problem(axle.key() + "." + BAR, "is missing: candidate "
                     + (index + 1) + " needs the bar's geometry from the vehicle file")));
         }
-        return VehicleFileReader.fromTree(tree).vehicle().axle(axle).bar();
+        return VehicleLoader.fromTree(tree).vehicle().axle(axle).bar();
     }
 }

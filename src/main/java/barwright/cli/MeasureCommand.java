@@ -1,15 +1,14 @@
 package barwright.cli;
 
-import barwright.io.RateCalibrationKeys;
+import barwright.io.VehicleEdits;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
-import barwright.io.WorkshopEdits;
 import barwright.io.csv.CsvFileException;
 import barwright.io.csv.CsvReader;
 import barwright.io.csv.CsvRow;
 import barwright.io.csv.CsvSchema;
 import barwright.io.csv.CsvTable;
+import barwright.loading.VehicleLoader;
 import barwright.measure.BarRateFit;
 import barwright.measure.BarRateMeasurement;
 import barwright.measure.BarReading;
@@ -22,16 +21,14 @@ import barwright.measure.MotionRatioMeasurement;
 import barwright.measure.TiltMethod;
 import barwright.measure.TiltTest;
 import barwright.measure.TravelReading;
-import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
+import barwright.model.CornerMasses;
 import barwright.model.RateCalibration;
 import barwright.model.Vehicle;
 import barwright.physics.BarAnalysis;
-import barwright.report.Cautions;
 import barwright.report.measure.MeasureJson;
 import barwright.report.measure.MeasureText;
 import barwright.sizing.preload.GainingDiagonal;
-import barwright.units.UnitSystem;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.io.PrintStream;
@@ -125,8 +122,7 @@ final class MeasureCommand implements Command {
             String note = parsed.option("note", String.format(Locale.ROOT, "%d readings, R² %.4f, free play %.2f mm",
                     readings.size(), fit.rSquared(), fit.lash() * 1e3));
             ObjectNode tree = document.editableTree();
-            RateCalibrationKeys.put((ObjectNode) tree.path(axle.key()).path("bar"),
-                    new RateCalibration(factor, LocalDate.now(), note));
+            VehicleEdits.putRateCalibration(tree, axle, new RateCalibration(factor, LocalDate.now(), note));
             write(parsed, tree, out);
         }
         return Cli.OK;
@@ -168,7 +164,7 @@ final class MeasureCommand implements Command {
         print(out, parsed, MeasureJson.centreOfMass(height), text);
         if (parsed.has("apply")) {
             ObjectNode tree = document.editableTree();
-            WorkshopEdits.putCentreOfMassHeight(tree, height.height());
+            VehicleEdits.putCentreOfMassHeight(tree, height.height());
             write(parsed, tree, out);
         }
         return Cli.OK;
@@ -181,13 +177,7 @@ final class MeasureCommand implements Command {
         double[] kg = fourReadings(parsed.option("kg", null));
         String target = parsed.option("target-cross", null);
         AxlePosition axle = oneAxle(parsed, document.vehicle());
-        String diagonal = parsed.option("longer-loads", "lf-rr");
-        GainingDiagonal gaining = switch (diagonal) {
-            case "lf-rr" -> GainingDiagonal.LEFT_FRONT_RIGHT_REAR;
-            case "rf-lr" -> GainingDiagonal.RIGHT_FRONT_LEFT_REAR;
-            default -> throw new UsageException("--longer-loads " + diagonal + ": lf-rr or rf-lr, the diagonal that "
-                    + "gains load when the link is made longer");
-        };
+        GainingDiagonal gaining = PreloadCommand.longerLoads(parsed, GainingDiagonal.LEFT_FRONT_RIGHT_REAR);
         CornerWeights weights = CornerWeighing.of(kg[0], kg[1], kg[2], kg[3], document.vehicle(),
                 target == null ? null : parsed.number("target-cross", 0.5), axle, gaining);
         String text = MeasureText.corners(weights, parsed.units());
@@ -198,7 +188,7 @@ final class MeasureCommand implements Command {
         print(out, parsed, MeasureJson.corners(weights), text);
         if (parsed.has("apply")) {
             ObjectNode tree = document.editableTree();
-            WorkshopEdits.putCornerMasses(tree, kg[0], kg[1], kg[2], kg[3]);
+            VehicleEdits.putCornerMasses(tree, new CornerMasses(kg[0], kg[1], kg[2], kg[3]));
             write(parsed, tree, out);
         }
         return Cli.OK;
@@ -249,12 +239,7 @@ final class MeasureCommand implements Command {
     }
 
     private static void print(PrintStream out, Arguments parsed, ObjectNode json, String text) {
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(json));
-        } else {
-            out.print(text);
-            out.println(Cautions.SHORT);
-        }
+        Printed.jsonOrTextWithCaution(out, parsed, () -> json, () -> text);
     }
 
     /** Checks the changed tree as a whole car, then writes it atomically to --output. */
@@ -263,7 +248,7 @@ final class MeasureCommand implements Command {
         if (output == null) {
             throw new UsageException("--apply needs --output OUT.json: the car is written to a copy");
         }
-        VehicleFileReader.fromTree(tree);
+        VehicleLoader.fromTree(tree);
         VehicleFileWriter.save(tree, Path.of(output));
         if (!parsed.has("json")) {
             out.println("Written to " + output + ".");

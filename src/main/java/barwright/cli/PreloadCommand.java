@@ -1,9 +1,7 @@
 package barwright.cli;
 
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileWriter;
 import barwright.model.AxlePosition;
-import barwright.report.Cautions;
 import barwright.report.sizing.PreloadJson;
 import barwright.report.sizing.PreloadText;
 import barwright.sizing.preload.GainingDiagonal;
@@ -43,24 +41,31 @@ final class PreloadCommand implements Command {
         if (axles.size() != 1) {
             throw new UsageException("--axle: give the one axle whose link changes, front or rear");
         }
+        GainingDiagonal gaining = longerLoads(parsed, null);
+        double changeMm = parsed.number("link-change-mm", 1.0);
+        AxlePosition axle = axles.get(0);
+        SizeCommand.requireBar(document, axle);
+        PreloadResult result = LinkPreload.of(document.vehicle(), axle, gaining, changeMm * 1e-3);
+        Printed.jsonOrTextWithCaution(out, parsed, () -> PreloadJson.of(result), () -> PreloadText.of(result, units));
+        return Cli.OK;
+    }
+
+    /**
+     * The option {@code --longer-loads lf-rr|rf-lr} of the commands that change a bar link's length.
+     *
+     * @param fallback the diagonal taken where the option is not given, or null where it is required
+     */
+    static GainingDiagonal longerLoads(Arguments parsed, GainingDiagonal fallback) throws UsageException {
         String diagonal = parsed.option("longer-loads", null);
-        GainingDiagonal gaining = switch (diagonal == null ? "" : diagonal) {
+        if (diagonal == null && fallback != null) {
+            return fallback;
+        }
+        return switch (diagonal == null ? "" : diagonal) {
             case "lf-rr" -> GainingDiagonal.LEFT_FRONT_RIGHT_REAR;
             case "rf-lr" -> GainingDiagonal.RIGHT_FRONT_LEFT_REAR;
             default -> throw new UsageException("--longer-loads " + (diagonal == null ? "is missing" : diagonal)
                     + ": say which diagonal gains load when the link is made longer, lf-rr (left front and right "
                     + "rear) or rf-lr (right front and left rear)");
         };
-        double changeMm = parsed.number("link-change-mm", 1.0);
-        AxlePosition axle = axles.get(0);
-        SizeCommand.requireBar(document, axle);
-        PreloadResult result = LinkPreload.of(document.vehicle(), axle, gaining, changeMm * 1e-3);
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(PreloadJson.of(result)));
-        } else {
-            out.print(PreloadText.of(result, units));
-            out.println(Cautions.SHORT);
-        }
-        return Cli.OK;
     }
 }

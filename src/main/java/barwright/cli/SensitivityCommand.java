@@ -2,7 +2,6 @@ package barwright.cli;
 
 import barwright.insight.Sensitivity;
 import barwright.insight.SensitivityResult;
-import barwright.io.VehicleFileWriter;
 import barwright.report.insight.InsightJson;
 import barwright.report.insight.SensitivityText;
 
@@ -33,11 +32,8 @@ final class SensitivityCommand implements Command {
         String file = parsed.onlyPositional("vehicle file");
         var units = parsed.units();
         SensitivityResult result = Sensitivity.of(VehicleInput.read(file).vehicle());
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(InsightJson.sensitivity(result)));
-        } else {
-            out.print(new SensitivityText(units).of(result));
-        }
+        Printed.jsonOrText(out, parsed, () -> InsightJson.sensitivity(result),
+                () -> new SensitivityText(units).of(result));
         return 0;
     }
 }

@@ -3,13 +3,13 @@ package barwright.cli;
 import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileWriter;
+import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
 import barwright.model.SolidSection;
 import barwright.physics.Warnings;
-import barwright.report.Cautions;
 import barwright.report.sizing.SizingJson;
 import barwright.report.sizing.SizingText;
 import barwright.report.sizing.SweepOutput;
@@ -26,7 +26,6 @@ import barwright.sizing.SizingRequest;
 import barwright.sizing.SizingResult;
 import barwright.sizing.Targets;
 import barwright.sizing.TubeEquivalents;
-import barwright.io.VehicleEdits;
 import barwright.sizing.catalogue.Catalogue;
 import barwright.sizing.catalogue.CatalogueFileException;
 import barwright.sizing.catalogue.Catalogues;
@@ -136,12 +135,10 @@ final class SizeCommand implements Command {
             }
         }
         applyCandidate(parsed, document, result);
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(SizingJson.of(request, result, exactSolid, exactWall)));
-        } else {
-            out.print(SizingText.of(request, result, exactSolid, exactWall, units));
-            out.println(Cautions.SHORT);
-        }
+        ExactSolution solid = exactSolid;
+        ExactSolution wall = exactWall;
+        Printed.jsonOrTextWithCaution(out, parsed, () -> SizingJson.of(request, result, solid, wall),
+                () -> SizingText.of(request, result, solid, wall, units));
         return Cli.OK;
     }
 
@@ -161,7 +158,7 @@ final class SizeCommand implements Command {
                     + " candidates");
         }
         Candidate candidate = result.candidates().get(rank - 1);
-        VehicleFileWriter.save(VehicleEdits.withBars(document, candidate.settings()), Path.of(output));
+        VehicleFileWriter.save(VehicleLoader.withBars(document, candidate.settings()), Path.of(output));
     }
 
     private int tubesLikeSolid(Arguments parsed, VehicleDocument document, List<AxlePosition> axles,
@@ -186,12 +183,8 @@ final class SizeCommand implements Command {
         TubeEquivalents.Comparison comparison = TubeEquivalents.compare(solidBar,
                 document.vehicle().differentialWheelTravel(), sizes, materials.get(axle),
                 TubeEquivalents.DEFAULT_TOLERANCE);
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(TubeOutput.json(comparison)));
-        } else {
-            out.print(TubeOutput.text(comparison, units));
-            out.println(Cautions.SHORT);
-        }
+        Printed.jsonOrTextWithCaution(out, parsed, () -> TubeOutput.json(comparison),
+                () -> TubeOutput.text(comparison, units));
         return Cli.OK;
     }
 

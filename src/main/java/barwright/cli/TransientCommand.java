@@ -4,7 +4,6 @@ import barwright.io.AtomicFileWriter;
 import barwright.io.DynamicsInputReader;
 import barwright.io.LapLogReader;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileWriter;
 import barwright.io.csv.CsvFileException;
 import barwright.model.DynamicsInputs;
 import barwright.model.LapLog;
@@ -109,11 +108,9 @@ final class TransientCommand implements Command {
         if (parsed.option("csv", null) != null) {
             AtomicFileWriter.writeText(Path.of(parsed.option("csv", null)), TransientCsv.of(result, replay));
         }
-        if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(TransientJson.of(result)));
-        } else {
-            out.print(new TransientText(units).of(document.vehicle().name(), drive, result, replay));
-        }
+        LapReplay replayed = replay;
+        Printed.jsonOrText(out, parsed, () -> TransientJson.of(result),
+                () -> new TransientText(units).of(document.vehicle().name(), drive, result, replayed));
         return Cli.OK;
     }
 

@@ -2,7 +2,7 @@ package barwright.cli;
 
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -13,6 +13,6 @@ final class VehicleInput {
     }
 
     static VehicleDocument read(String file) throws VehicleFileException, IOException {
-        return VehicleFileReader.read(Path.of(file));
+        return VehicleLoader.read(Path.of(file));
     }
 }

@@ -6,7 +6,6 @@ import barwright.physics.AnalysisResult;
 import barwright.physics.MassProperties;
 import barwright.physics.SteadyCornering;
 import barwright.physics.VehicleAnalysis;
-import barwright.physics.WheelLoads;
 import barwright.solver.RootFinder;
 
 import java.util.ArrayList;
@@ -65,12 +64,6 @@ public final class LiftEnvelope {
      */
     public double lift(Wheel wheel, double longitudinalAcceleration) {
         return cornering(wheel, longitudinalAcceleration).insideLift(wheel.axle());
-    }
-
-    /** @return the wheel's vertical load at (a_x, a_y) (N), zero where it has lifted */
-    public double wheelLoad(Wheel wheel, double longitudinalAcceleration, double lateralAcceleration) {
-        WheelLoads loads = cornering(wheel, longitudinalAcceleration).wheelLoads(lateralAcceleration);
-        return wheel.axle() == AxlePosition.FRONT ? loads.frontInside() : loads.rearInside();
     }
 
     private SteadyCornering cornering(Wheel wheel, double longitudinalAcceleration) {

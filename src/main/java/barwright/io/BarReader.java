@@ -10,7 +10,6 @@ import barwright.model.RateCalibration;
 import barwright.model.SolidSection;
 import barwright.model.TubeSection;
 import barwright.model.UBarDimensions;
-import barwright.physics.beam.BeamBar;
 import com.fasterxml.jackson.databind.JsonNode;
 
 import java.util.ArrayList;
@@ -62,27 +61,9 @@ final class BarReader {
         }
         AntiRollBar bar = new AntiRollBar(material, section, dimensions, centreline, selected, linkRatio, calibration);
         if (centreline != null) {
-            checkBeamModel(bar, path + ".geometry", reader);
+            reader.problems(reader.buildChecks().ofShapedBar(bar, path));
         }
         return reader.problems().size() > before ? null : bar;
-    }
-
-    /**
-     * The checks above look at the polyline; the beam model needs more of the rounded centreline (bushings on
-     * the arcs as rounded, set-backs on the straight before the first bend, bends that fit their segments,
-     * equal lever arms). Build the model for every hole, so a file that reads also analyses.
-     */
-    private static void checkBeamModel(AntiRollBar bar, String geometryPath, NodeReader reader) {
-        for (int hole = 0; hole < bar.holeCount(); hole++) {
-            try {
-                BeamBar.frameOf(bar.withSelectedArm(hole), BeamBar.DEFAULT_ELEMENT_LENGTH);
-            } catch (IllegalArgumentException unbuildable) {
-                String which = bar.holeCount() > 1 ? " (with hole " + hole + ", holeSetbacksMm[" + hole + "])" : "";
-                reader.problem(geometryPath, "cannot be built into a beam model" + which + ": "
-                        + unbuildable.getMessage());
-                return;
-            }
-        }
     }
 
     private static Material readMaterial(JsonNode node, String path, NodeReader reader) {

@@ -9,25 +9,29 @@ import barwright.model.Point3;
 import barwright.model.SemiTrailingArm;
 import barwright.model.Strut;
 import barwright.model.TrailingArm;
-import barwright.physics.linkage.AxleKinematics;
-import barwright.physics.linkage.LinkageLimitException;
-import barwright.physics.linkage.TravelLimit;
-import barwright.physics.linkage.TravelState;
 
 import java.util.Locale;
 
+import static barwright.io.VehicleKeys.LINKAGE;
+import static barwright.io.VehicleKeys.LOWER_INNER_MM;
+import static barwright.io.VehicleKeys.LOWER_OUTER_MM;
+import static barwright.io.VehicleKeys.PANHARD_AXLE_MM;
+import static barwright.io.VehicleKeys.PIVOT_INNER_MM;
+import static barwright.io.VehicleKeys.PIVOT_OUTER_MM;
+import static barwright.io.VehicleKeys.STRUT_LOWER_MM;
+import static barwright.io.VehicleKeys.STRUT_TOP_MM;
+import static barwright.io.VehicleKeys.UPPER_INNER_MM;
+import static barwright.io.VehicleKeys.UPPER_OUTER_MM;
+
 /**
  * The checks of a linkage that need more than one value: points on the wrong side, arms that cross, links too
- * short to be links, and a linkage that cannot be put together at its ride height or locks near it. Each problem
- * names the key path of the point or setting to change.
+ * short to be links; then, where those pass, the reader's {@link BuildChecks} (a linkage that cannot be put
+ * together at its ride height or locks near it). Each problem names the key path of the point or setting to
+ * change.
  */
 final class LinkageChecks {
-    /** Travel a suspension must have each way from its ride height (m): less is a linkage that cannot be driven. */
-    static final double MINIMUM_TRAVEL = 0.030;
     /** Shortest link accepted (m): closer points are a typing slip, not a link. */
     static final double SHORTEST_LINK = 0.020;
-    /** Shortest front-view swing arm accepted (m): an instant centre almost straight above the contact point. */
-    static final double SHORTEST_SWING_ARM = 0.050;
     /** A trailing arm's pivot axis is square to the car within this fore-and-aft difference (m). */
     static final double SQUARE = 0.001;
 
@@ -35,7 +39,7 @@ final class LinkageChecks {
     }
 
     static void check(Axle axle, String axlePath, NodeReader reader) {
-        String path = NodeReader.child(axlePath, LinkageReader.LINKAGE);
+        String path = NodeReader.child(axlePath, LINKAGE);
         int before = reader.problems().size();
         Linkage linkage = axle.suspension().linkage();
         if (linkage instanceof DoubleWishbone arms) {
@@ -47,44 +51,44 @@ final class LinkageChecks {
         } else if (linkage instanceof TrailingArm arm) {
             pivotAxis(arm.pivotInner(), arm.pivotOuter(), path, reader);
             if (Math.abs(arm.pivotInner().x() - arm.pivotOuter().x()) > SQUARE) {
-                reader.problem(path + ".pivotOuterMm", "is not square to the car (its x differs from pivotInnerMm's by "
+                reader.problem(NodeReader.child(path, PIVOT_OUTER_MM), "is not square to the car (its x differs from pivotInnerMm's by "
                         + mm(arm.pivotOuter().x() - arm.pivotInner().x()) + "): a swept pivot axis is a "
                         + "\"semi-trailing-arm\"");
             }
         } else if (linkage instanceof SemiTrailingArm arm) {
             pivotAxis(arm.pivotInner(), arm.pivotOuter(), path, reader);
             if (Math.abs(arm.pivotInner().x() - arm.pivotOuter().x()) <= SQUARE) {
-                reader.problem(path + ".pivotOuterMm", "has the same x as pivotInnerMm: a pivot axis square to the car "
+                reader.problem(NodeReader.child(path, PIVOT_OUTER_MM), "has the same x as pivotInnerMm: a pivot axis square to the car "
                         + "is a \"trailing-arm\"");
             }
         }
         if (reader.problems().size() == before) {
-            kinematics(axle, axlePath, path, reader);
+            reader.problems(reader.buildChecks().ofLinkage(axle, axlePath));
         }
     }
 
     private static void doubleWishbone(DoubleWishbone arms, String path, NodeReader reader) {
-        onLeftSide(arms.upperInner(), path + ".upperInnerMm", reader);
-        onLeftSide(arms.lowerInner(), path + ".lowerInnerMm", reader);
-        outboard(arms.upperInner(), arms.upperOuter(), path + ".upperOuterMm", "upperInnerMm", reader);
-        outboard(arms.lowerInner(), arms.lowerOuter(), path + ".lowerOuterMm", "lowerInnerMm", reader);
-        above(arms.upperOuter(), arms.lowerOuter(), path + ".upperOuterMm", "the upper ball joint", "lowerOuterMm", reader);
-        above(arms.upperInner(), arms.lowerInner(), path + ".upperInnerMm", "the upper arm's pivot", "lowerInnerMm", reader);
+        onLeftSide(arms.upperInner(), NodeReader.child(path, UPPER_INNER_MM), reader);
+        onLeftSide(arms.lowerInner(), NodeReader.child(path, LOWER_INNER_MM), reader);
+        outboard(arms.upperInner(), arms.upperOuter(), NodeReader.child(path, UPPER_OUTER_MM), UPPER_INNER_MM, reader);
+        outboard(arms.lowerInner(), arms.lowerOuter(), NodeReader.child(path, LOWER_OUTER_MM), LOWER_INNER_MM, reader);
+        above(arms.upperOuter(), arms.lowerOuter(), NodeReader.child(path, UPPER_OUTER_MM), "the upper ball joint", LOWER_OUTER_MM, reader);
+        above(arms.upperInner(), arms.lowerInner(), NodeReader.child(path, UPPER_INNER_MM), "the upper arm's pivot", LOWER_INNER_MM, reader);
         if (crosses(arms.upperInner(), arms.upperOuter(), arms.lowerInner(), arms.lowerOuter())) {
             reader.problem(path, "has its upper and lower arms crossing each other: check upperInnerMm and lowerInnerMm");
         }
     }
 
     private static void strut(Strut strut, String path, NodeReader reader) {
-        onLeftSide(strut.lowerInner(), path + ".lowerInnerMm", reader);
-        onLeftSide(strut.strutTop(), path + ".strutTopMm", reader);
-        outboard(strut.lowerInner(), strut.lowerOuter(), path + ".lowerOuterMm", "lowerInnerMm", reader);
-        above(strut.strutTop(), strut.strutLower(), path + ".strutTopMm", "the top mount", "strutLowerMm", reader);
-        above(strut.strutTop(), strut.lowerOuter(), path + ".strutTopMm", "the top mount", "lowerOuterMm", reader);
+        onLeftSide(strut.lowerInner(), NodeReader.child(path, LOWER_INNER_MM), reader);
+        onLeftSide(strut.strutTop(), NodeReader.child(path, STRUT_TOP_MM), reader);
+        outboard(strut.lowerInner(), strut.lowerOuter(), NodeReader.child(path, LOWER_OUTER_MM), LOWER_INNER_MM, reader);
+        above(strut.strutTop(), strut.strutLower(), NodeReader.child(path, STRUT_TOP_MM), "the top mount", STRUT_LOWER_MM, reader);
+        above(strut.strutTop(), strut.lowerOuter(), NodeReader.child(path, STRUT_TOP_MM), "the top mount", LOWER_OUTER_MM, reader);
         double dy = strut.strutLower().y() - strut.strutTop().y();
         double dz = strut.strutLower().z() - strut.strutTop().z();
         if (Math.abs(dy) > Math.abs(dz)) {
-            reader.problem(path + ".strutLowerMm", "makes the strut lean more than 45 degrees from upright: the strut's "
+            reader.problem(NodeReader.child(path, STRUT_LOWER_MM), "makes the strut lean more than 45 degrees from upright: the strut's "
                     + "axis runs from strutTopMm through strutLowerMm");
         }
     }
@@ -93,56 +97,26 @@ final class LinkageChecks {
         double dy = rod.axleEnd().y() - rod.bodyEnd().y();
         double dz = rod.axleEnd().z() - rod.bodyEnd().z();
         if (Math.hypot(dy, dz) < 0.2) {
-            reader.problem(path + ".panhardAxleMm", "is " + mm(Math.hypot(dy, dz)) + " from panhardBodyMm: a Panhard "
+            reader.problem(NodeReader.child(path, PANHARD_AXLE_MM), "is " + mm(Math.hypot(dy, dz)) + " from panhardBodyMm: a Panhard "
                     + "rod is at least 200 mm long");
         } else if (Math.abs(dz) >= Math.abs(dy)) {
-            reader.problem(path + ".panhardAxleMm", "makes the rod steeper than 45 degrees: a Panhard rod runs across "
+            reader.problem(NodeReader.child(path, PANHARD_AXLE_MM), "makes the rod steeper than 45 degrees: a Panhard rod runs across "
                     + "the car to locate the axle sideways");
         }
     }
 
     private static void pivotAxis(Point3 inner, Point3 outer, String path, NodeReader reader) {
         if (inner.distanceTo(outer) < SHORTEST_LINK) {
-            reader.problem(path + ".pivotOuterMm", "is " + mm(inner.distanceTo(outer)) + " from pivotInnerMm: the two "
+            reader.problem(NodeReader.child(path, PIVOT_OUTER_MM), "is " + mm(inner.distanceTo(outer)) + " from pivotInnerMm: the two "
                     + "pivots must be at least 20 mm apart");
             return;
         }
         if (!(outer.y() > inner.y())) {
-            reader.problem(path + ".pivotOuterMm", "must lie outboard of pivotInnerMm (a larger y)");
+            reader.problem(NodeReader.child(path, PIVOT_OUTER_MM), "must lie outboard of pivotInnerMm (a larger y)");
         }
         if (Math.abs(inner.x()) < 0.05 && Math.abs(outer.x()) < 0.05) {
-            reader.problem(path + ".pivotInnerMm", "and pivotOuterMm lie within 50 mm of the wheel centre's plane "
+            reader.problem(NodeReader.child(path, PIVOT_INNER_MM), "and pivotOuterMm lie within 50 mm of the wheel centre's plane "
                     + "(x = 0): the arm's pivots are ahead of (or behind) the wheel");
-        }
-    }
-
-    private static void kinematics(Axle axle, String axlePath, String path, NodeReader reader) {
-        AxleKinematics kinematics;
-        try {
-            kinematics = AxleKinematics.of(axle);
-        } catch (LinkageLimitException beyond) {
-            double change = axle.suspension().rideHeightChange();
-            if (change != 0) {
-                reader.problem(NodeReader.child(axlePath, LinkageReader.RIDE_HEIGHT_CHANGE), "= " + mm(change)
-                        + ": the linkage cannot be put together at this ride height (" + beyond.getMessage() + ")");
-            } else {
-                reader.problem(path, "cannot be put together: " + beyond.getMessage());
-            }
-            return;
-        }
-        travel(kinematics.bumpLimit(), "bump", path, reader);
-        travel(kinematics.droopLimit(), "droop", path, reader);
-        TravelState still = kinematics.travel(0);
-        if (!still.instantCentre().atInfinity() && Math.abs(still.swingArmLength()) < SHORTEST_SWING_ARM) {
-            reader.problem(path, "puts the front-view instant centre " + mm(Math.abs(still.swingArmLength()))
-                    + " from straight above or below the tyre contact point: no real linkage does; check the points");
-        }
-    }
-
-    private static void travel(TravelLimit limit, String way, String path, NodeReader reader) {
-        if (limit.locks() && Math.abs(limit.travel()) < MINIMUM_TRAVEL) {
-            reader.problem(path, "locks after " + mm(Math.abs(limit.travel())) + " of " + way + " (" + limit.reason()
-                    + "): a suspension needs at least 30 mm each way from its ride height");
         }
     }
 

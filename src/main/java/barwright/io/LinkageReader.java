@@ -13,7 +13,31 @@ import barwright.model.SuspensionGeometry;
 import barwright.model.TrailingArm;
 import com.fasterxml.jackson.databind.JsonNode;
 
-import java.util.List;
+import static barwright.io.VehicleKeys.CENTRE_PIVOT_HEIGHT_MM;
+import static barwright.io.VehicleKeys.CENTRE_PIVOT_ON;
+import static barwright.io.VehicleKeys.DOUBLE_WISHBONE;
+import static barwright.io.VehicleKeys.LINKAGE;
+import static barwright.io.VehicleKeys.LINKAGE_TYPES;
+import static barwright.io.VehicleKeys.LIVE_AXLE_PANHARD;
+import static barwright.io.VehicleKeys.LIVE_AXLE_WATTS;
+import static barwright.io.VehicleKeys.LOWER_INNER_MM;
+import static barwright.io.VehicleKeys.LOWER_OUTER_MM;
+import static barwright.io.VehicleKeys.ON_AXLE;
+import static barwright.io.VehicleKeys.ON_BODY;
+import static barwright.io.VehicleKeys.PANHARD_AXLE_MM;
+import static barwright.io.VehicleKeys.PANHARD_BODY_MM;
+import static barwright.io.VehicleKeys.PIVOT_INNER_MM;
+import static barwright.io.VehicleKeys.PIVOT_OUTER_MM;
+import static barwright.io.VehicleKeys.RIDE_HEIGHT_CHANGE_MM;
+import static barwright.io.VehicleKeys.SEMI_TRAILING_ARM;
+import static barwright.io.VehicleKeys.STATIC_CAMBER_DEG;
+import static barwright.io.VehicleKeys.STRUT;
+import static barwright.io.VehicleKeys.STRUT_LOWER_MM;
+import static barwright.io.VehicleKeys.STRUT_TOP_MM;
+import static barwright.io.VehicleKeys.TRAILING_ARM;
+import static barwright.io.VehicleKeys.TYPE;
+import static barwright.io.VehicleKeys.UPPER_INNER_MM;
+import static barwright.io.VehicleKeys.UPPER_OUTER_MM;
 
 /**
  * Reads an axle's {@code linkage}, {@code rideHeightChangeMm} and {@code staticCamberDeg} (file version 2;
@@ -21,19 +45,6 @@ import java.util.List;
  * cannot be put together or lock near the ride height ({@link LinkageChecks}).
  */
 final class LinkageReader {
-    static final String LINKAGE = "linkage";
-    static final String RIDE_HEIGHT_CHANGE = "rideHeightChangeMm";
-    static final String STATIC_CAMBER = "staticCamberDeg";
-    static final String TYPE = "type";
-    static final String DOUBLE_WISHBONE = "double-wishbone";
-    static final String STRUT = "strut";
-    static final String LIVE_AXLE_PANHARD = "live-axle-panhard";
-    static final String LIVE_AXLE_WATTS = "live-axle-watts";
-    static final String TRAILING_ARM = "trailing-arm";
-    static final String SEMI_TRAILING_ARM = "semi-trailing-arm";
-    static final List<String> TYPES = List.of(DOUBLE_WISHBONE, STRUT, LIVE_AXLE_PANHARD, LIVE_AXLE_WATTS, TRAILING_ARM,
-            SEMI_TRAILING_ARM);
-
     private static final Range SIDEWAYS = Range.between(-3000, 3000, "mm");
     private static final Range HEIGHT = Range.between(0, 2000, "mm");
     private static final Range FORE_AFT = Range.between(-3000, 3000, "mm");
@@ -48,20 +59,20 @@ final class LinkageReader {
     static SuspensionGeometry read(JsonNode node, String path, NodeReader reader, int version, Axle axle) {
         int before = reader.problems().size();
         boolean allowed = FileVersion.allows(version, FileVersion.LINKAGES, node, path, LINKAGE, reader)
-                & FileVersion.allows(version, FileVersion.LINKAGES, node, path, RIDE_HEIGHT_CHANGE, reader)
-                & FileVersion.allows(version, FileVersion.LINKAGES, node, path, STATIC_CAMBER, reader);
+                & FileVersion.allows(version, FileVersion.LINKAGES, node, path, RIDE_HEIGHT_CHANGE_MM, reader)
+                & FileVersion.allows(version, FileVersion.LINKAGES, node, path, STATIC_CAMBER_DEG, reader);
         if (!allowed) {
             return null;
         }
-        double rideHeightChange = reader.optionalNumber(node, path, RIDE_HEIGHT_CHANGE,
+        double rideHeightChange = reader.optionalNumber(node, path, RIDE_HEIGHT_CHANGE_MM,
                 Range.between(-200, 200, "mm"), 0) * 1e-3;
-        double camber = Math.toRadians(reader.optionalNumber(node, path, STATIC_CAMBER,
+        double camber = Math.toRadians(reader.optionalNumber(node, path, STATIC_CAMBER_DEG,
                 Range.between(-10, 10, "deg"), 0));
         JsonNode linkageNode = reader.object(node, path, LINKAGE, false);
         String linkagePath = NodeReader.child(path, LINKAGE);
         Linkage linkage = linkageNode == null ? null : linkage(linkageNode, linkagePath, reader);
         if (linkageNode == null && rideHeightChange != 0) {
-            reader.problem(NodeReader.child(path, RIDE_HEIGHT_CHANGE), "= " + Range.format(rideHeightChange * 1e3)
+            reader.problem(NodeReader.child(path, RIDE_HEIGHT_CHANGE_MM), "= " + Range.format(rideHeightChange * 1e3)
                     + " mm: a ride-height change needs this axle's linkage, to know where its roll centre goes; "
                     + "give the linkage, or type the new roll-centre height instead");
         }
@@ -79,35 +90,35 @@ final class LinkageReader {
         String type = reader.text(node, path, TYPE, true);
         switch (type) {
             case DOUBLE_WISHBONE:
-                return new DoubleWishbone(point(node, path, "upperInnerMm", reader),
-                        point(node, path, "upperOuterMm", reader), point(node, path, "lowerInnerMm", reader),
-                        point(node, path, "lowerOuterMm", reader));
+                return new DoubleWishbone(point(node, path, UPPER_INNER_MM, reader),
+                        point(node, path, UPPER_OUTER_MM, reader), point(node, path, LOWER_INNER_MM, reader),
+                        point(node, path, LOWER_OUTER_MM, reader));
             case STRUT:
-                return new Strut(point(node, path, "strutTopMm", reader), point(node, path, "strutLowerMm", reader),
-                        point(node, path, "lowerInnerMm", reader), point(node, path, "lowerOuterMm", reader));
+                return new Strut(point(node, path, STRUT_TOP_MM, reader), point(node, path, STRUT_LOWER_MM, reader),
+                        point(node, path, LOWER_INNER_MM, reader), point(node, path, LOWER_OUTER_MM, reader));
             case LIVE_AXLE_PANHARD:
-                return new LiveAxlePanhard(point(node, path, "panhardBodyMm", reader),
-                        point(node, path, "panhardAxleMm", reader));
+                return new LiveAxlePanhard(point(node, path, PANHARD_BODY_MM, reader),
+                        point(node, path, PANHARD_AXLE_MM, reader));
             case LIVE_AXLE_WATTS:
-                double height = reader.number(node, path, "centrePivotHeightMm", Range.between(50, 1500, "mm")) * 1e-3;
-                String on = reader.text(node, path, "centrePivotOn", true);
+                double height = reader.number(node, path, CENTRE_PIVOT_HEIGHT_MM, Range.between(50, 1500, "mm")) * 1e-3;
+                String on = reader.text(node, path, CENTRE_PIVOT_ON, true);
                 LiveAxleWatts.Mount mount = LiveAxleWatts.Mount.AXLE;
-                if ("body".equals(on)) {
+                if (ON_BODY.equals(on)) {
                     mount = LiveAxleWatts.Mount.BODY;
-                } else if (!"axle".equals(on) && !on.isEmpty()) {
-                    reader.problem(NodeReader.child(path, "centrePivotOn"), "= \"" + on + "\": must be \"axle\" or \"body\"");
+                } else if (!ON_AXLE.equals(on) && !on.isEmpty()) {
+                    reader.problem(NodeReader.child(path, CENTRE_PIVOT_ON), "= \"" + on + "\": must be \"axle\" or \"body\"");
                 }
                 return new LiveAxleWatts(height, mount);
             case TRAILING_ARM:
-                return new TrailingArm(point3(node, path, "pivotInnerMm", reader),
-                        point3(node, path, "pivotOuterMm", reader));
+                return new TrailingArm(point3(node, path, PIVOT_INNER_MM, reader),
+                        point3(node, path, PIVOT_OUTER_MM, reader));
             case SEMI_TRAILING_ARM:
-                return new SemiTrailingArm(point3(node, path, "pivotInnerMm", reader),
-                        point3(node, path, "pivotOuterMm", reader));
+                return new SemiTrailingArm(point3(node, path, PIVOT_INNER_MM, reader),
+                        point3(node, path, PIVOT_OUTER_MM, reader));
             default:
                 if (!type.isEmpty()) {
                     reader.problem(NodeReader.child(path, TYPE), "= \"" + type + "\": must be one of "
-                            + String.join(", ", TYPES.stream().map(t -> "\"" + t + "\"").toList()));
+                            + String.join(", ", LINKAGE_TYPES.stream().map(t -> "\"" + t + "\"").toList()));
                 }
                 return null;
         }

@@ -12,6 +12,25 @@ import java.util.List;
  */
 final class NodeReader {
     private final List<Problem> problems = new ArrayList<>();
+    private final BuildChecks buildChecks;
+
+    /** A reader for files that hold no bar and no linkage. */
+    NodeReader() {
+        this(null);
+    }
+
+    /** @param buildChecks the checks that need the calculation, run on each shaped bar and linkage read well */
+    NodeReader(BuildChecks buildChecks) {
+        this.buildChecks = buildChecks;
+    }
+
+    /** @return the checks that need the calculation; only a vehicle file's reader has them */
+    BuildChecks buildChecks() {
+        if (buildChecks == null) {
+            throw new IllegalStateException("this reader was made without the build checks a vehicle file needs");
+        }
+        return buildChecks;
+    }
 
     List<Problem> problems() {
         return problems;
@@ -23,6 +42,10 @@ final class NodeReader {
 
     void problem(String path, String message) {
         problems.add(new Problem(path, message));
+    }
+
+    void problems(List<Problem> more) {
+        problems.addAll(more);
     }
 
     static String child(String parentPath, String key) {

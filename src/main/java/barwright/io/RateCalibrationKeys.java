@@ -7,16 +7,16 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.time.LocalDate;
 import java.time.format.DateTimeParseException;
 
+import static barwright.io.VehicleKeys.EFFECTIVE_RATE_FACTOR;
+import static barwright.io.VehicleKeys.MEASURED_ON;
+import static barwright.io.VehicleKeys.NOTE;
+import static barwright.io.VehicleKeys.RATE_CALIBRATION;
+
 /**
- * The optional {@code rateCalibration} object of a bar (file-format.md): reading it with key paths, and the
- * one tree edit that puts it into a bar.
+ * The optional {@code rateCalibration} object of a bar (file-format.md; its key names in {@link VehicleKeys}):
+ * reading it with key paths, and the one tree edit that puts it into a bar.
  */
 public final class RateCalibrationKeys {
-    /** The bar's key holding the object. */
-    public static final String KEY = "rateCalibration";
-    public static final String FACTOR = "effectiveRateFactor";
-    public static final String MEASURED_ON = "measuredOn";
-    public static final String NOTE = "note";
     /** A note longer than this is refused (characters). */
     public static final int MAX_NOTE = 500;
 
@@ -25,13 +25,13 @@ public final class RateCalibrationKeys {
 
     /** @return the calibration, null where the key is absent or null or wrong (wrong values are problems) */
     static RateCalibration read(JsonNode bar, String barPath, NodeReader reader) {
-        JsonNode node = reader.object(bar, barPath, KEY, false);
+        JsonNode node = reader.object(bar, barPath, RATE_CALIBRATION, false);
         if (node == null) {
             return null;
         }
-        String path = NodeReader.child(barPath, KEY);
+        String path = NodeReader.child(barPath, RATE_CALIBRATION);
         int before = reader.problems().size();
-        double factor = reader.number(node, path, FACTOR,
+        double factor = reader.number(node, path, EFFECTIVE_RATE_FACTOR,
                 Range.between(RateCalibration.LOWEST, RateCalibration.HIGHEST, ""));
         String date = reader.text(node, path, MEASURED_ON, true);
         LocalDate measuredOn = null;
@@ -62,11 +62,11 @@ public final class RateCalibrationKeys {
      */
     public static void put(ObjectNode bar, RateCalibration calibration) {
         if (calibration == null) {
-            bar.remove(KEY);
+            bar.remove(RATE_CALIBRATION);
             return;
         }
-        ObjectNode node = bar.putObject(KEY);
-        node.put(FACTOR, Math.round(calibration.effectiveRateFactor() * 1e4) / 1e4);
+        ObjectNode node = bar.putObject(RATE_CALIBRATION);
+        node.put(EFFECTIVE_RATE_FACTOR, Math.round(calibration.effectiveRateFactor() * 1e4) / 1e4);
         node.put(MEASURED_ON, calibration.measuredOn().toString());
         node.put(NOTE, calibration.note());
     }

@@ -1,7 +1,9 @@
 package barwright.io;
 
 import barwright.model.AxlePosition;
+import barwright.model.CornerMasses;
 import barwright.model.Material;
+import barwright.model.RateCalibration;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.IntNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -14,13 +16,23 @@ import java.util.List;
 import java.util.Map;
 
 import static barwright.io.VehicleKeys.BAR;
+import static barwright.io.VehicleKeys.CG_HEIGHT_MM;
+import static barwright.io.VehicleKeys.CORNER_MASSES_KG;
+import static barwright.io.VehicleKeys.FRONT_MASS_FRACTION;
+import static barwright.io.VehicleKeys.LEFT_FRONT;
+import static barwright.io.VehicleKeys.LEFT_REAR;
+import static barwright.io.VehicleKeys.MASS_KG;
+import static barwright.io.VehicleKeys.RIGHT_FRONT;
+import static barwright.io.VehicleKeys.RIGHT_REAR;
+import static barwright.io.VehicleKeys.VEHICLE;
 import static barwright.io.VehicleKeys.MATERIAL;
 import static barwright.io.VehicleKeys.SECTION;
 import static barwright.io.VehicleKeys.SELECTED_ARM;
 
 /**
  * The one place that changes a vehicle file's tree: a chosen bar put in place (the window, the sizing views,
- * {@code size --apply} and {@code map --candidates} all go through {@link #putBar}), and key-path edits
+ * {@code size --apply} and {@code map --candidates} all go through {@link #putBar}), the workshop's measurements
+ * put in place ({@code measure ... --apply}), and key-path edits
  * ({@code compare --variant}, the window's compare view). Changes are made on a copy and validated as a whole,
  * so a change keeps every unknown key and a bad value is refused with its key path like a bad file.
  */
@@ -28,13 +40,17 @@ public final class VehicleEdits {
     private VehicleEdits() {
     }
 
-    /** @return the document with each bar in place, validated as a whole */
-    public static VehicleDocument withBars(VehicleDocument document, List<BarSetting> bars) throws VehicleFileException {
+    /**
+     * @param checks the checks that need the calculation ({@code barwright.loading.VehicleLoader#withBars} has them)
+     * @return the document with each bar in place, validated as a whole
+     */
+    public static VehicleDocument withBars(VehicleDocument document, List<BarSetting> bars, BuildChecks checks)
+            throws VehicleFileException {
         ObjectNode tree = document.editableTree();
         for (BarSetting bar : bars) {
             putBar(tree, bar, null);
         }
-        return VehicleFileReader.fromTree(tree);
+        return VehicleFileReader.fromTree(tree, checks);
     }
 
     /**
@@ -57,12 +73,7 @@ public final class VehicleEdits {
      */
     public static void putBar(ObjectNode tree, AxlePosition axle, JsonNode material, JsonNode section,
                               JsonNode selectedArm) throws VehicleFileException {
-        JsonNode bar = tree.path(axle.key()).path(BAR);
-        if (!(bar instanceof ObjectNode barNode)) {
-            throw new VehicleFileException(List.of(new Problem(axle.key() + "." + BAR,
-                    bar.isMissingNode() || bar.isNull() ? "is missing: a bar can only be put where the file gives "
-                            + "one, with its geometry" : "is not a bar object {...}")));
-        }
+        ObjectNode barNode = barObject(tree, axle);
         if (material != null) {
             barNode.set(MATERIAL, material);
         }
@@ -70,15 +81,61 @@ public final class VehicleEdits {
         barNode.set(SELECTED_ARM, selectedArm);
     }
 
+    /** @return the axle's bar object, refused where the file gives none */
+    private static ObjectNode barObject(ObjectNode tree, AxlePosition axle) throws VehicleFileException {
+        JsonNode bar = tree.path(axle.key()).path(BAR);
+        if (!(bar instanceof ObjectNode barNode)) {
+            throw new VehicleFileException(List.of(new Problem(axle.key() + "." + BAR,
+                    bar.isMissingNode() || bar.isNull() ? "is missing: a bar can only be put where the file gives "
+                            + "one, with its geometry" : "is not a bar object {...}")));
+        }
+        return barNode;
+    }
+
+    /**
+     * Puts a measured rate calibration into the axle's bar, or takes it out (null).
+     *
+     * @throws VehicleFileException where the file gives no bar object on that axle
+     */
+    public static void putRateCalibration(ObjectNode tree, AxlePosition axle, RateCalibration calibration)
+            throws VehicleFileException {
+        RateCalibrationKeys.put(barObject(tree, axle), calibration);
+    }
+
+    /**
+     * Puts a measured centre-of-mass height into the body.
+     *
+     * @param height the height above the ground (m), written in mm to 0.1 mm
+     */
+    public static void putCentreOfMassHeight(ObjectNode tree, double height) {
+        ((ObjectNode) tree.path(VEHICLE)).put(CG_HEIGHT_MM, Math.round(height * 1e4) / 10.0);
+    }
+
+    /** Puts the four corner masses (kg) into the body; the mass and front share then follow from them. */
+    public static void putCornerMasses(ObjectNode tree, CornerMasses corners) {
+        ObjectNode vehicle = (ObjectNode) tree.path(VEHICLE);
+        ObjectNode scales = vehicle.putObject(CORNER_MASSES_KG);
+        scales.put(LEFT_FRONT, corners.leftFront());
+        scales.put(RIGHT_FRONT, corners.rightFront());
+        scales.put(LEFT_REAR, corners.leftRear());
+        scales.put(RIGHT_REAR, corners.rightRear());
+        // the mass and front share follow from the corners (file-format.md)
+        vehicle.remove(MASS_KG);
+        vehicle.remove(FRONT_MASS_FRACTION);
+    }
+
     /**
      * @param edits changes as {@code key.path=value}, e.g. {@code front.bar.selectedArm=2} or
      *              {@code rear.bar.armLengthsMm[0]=160}; the value is JSON (a number, null, an object...) or
      *              else taken as text
+     * @param checks the checks that need the calculation ({@code barwright.loading.VehicleLoader#withEdits} has
+     *               them)
      * @return the document with every change made, validated as a whole
      * @throws VehicleFileException where a change is malformed, names no key the program knows (the nearest
      *                              key is suggested), or the result is refused
      */
-    public static VehicleDocument withEdits(VehicleDocument document, List<String> edits) throws VehicleFileException {
+    public static VehicleDocument withEdits(VehicleDocument document, List<String> edits, BuildChecks checks)
+            throws VehicleFileException {
         ObjectNode tree = document.editableTree();
         for (String edit : edits) {
             int equals = edit.indexOf('=');
@@ -93,7 +150,7 @@ public final class VehicleEdits {
                 throw refused(pathText, noEntry);
             }
             if (path.get(document.tree()) == null) {
-                refuseUnknownKey(document, path, value);
+                refuseUnknownKey(document, path, value, checks);
             }
             try {
                 path.set(tree, value);
@@ -101,19 +158,19 @@ public final class VehicleEdits {
                 throw refused(pathText, "does not name a key of the vehicle file");
             }
         }
-        return VehicleFileReader.fromTree(tree);
+        return VehicleFileReader.fromTree(tree, checks);
     }
 
     /**
      * A key the file does not have is accepted only where it means something to the program (an optional key):
      * a key that changes nothing is a typo, refused with the nearest key the file has.
      */
-    private static void refuseUnknownKey(VehicleDocument document, KeyPath path, JsonNode value)
+    private static void refuseUnknownKey(VehicleDocument document, KeyPath path, JsonNode value, BuildChecks checks)
             throws VehicleFileException {
         ObjectNode alone = document.editableTree();
         try {
             path.set(alone, value);
-            if (!VehicleFileReader.fromTree(alone).vehicle().equals(document.vehicle())) {
+            if (!VehicleFileReader.fromTree(alone, checks).vehicle().equals(document.vehicle())) {
                 return; // an optional key the program reads
             }
         } catch (IllegalArgumentException | VehicleFileException refusedAnyway) {

@@ -9,6 +9,15 @@ import com.fasterxml.jackson.databind.JsonNode;
 import java.nio.file.Path;
 import java.util.Locale;
 
+import static barwright.io.VehicleKeys.CG_HEIGHT_MM;
+import static barwright.io.VehicleKeys.CORNER_MASSES_KG;
+import static barwright.io.VehicleKeys.FRONT_MASS_FRACTION;
+import static barwright.io.VehicleKeys.LEFT_FRONT;
+import static barwright.io.VehicleKeys.LEFT_REAR;
+import static barwright.io.VehicleKeys.MASS_KG;
+import static barwright.io.VehicleKeys.RIGHT_FRONT;
+import static barwright.io.VehicleKeys.RIGHT_REAR;
+import static barwright.io.VehicleKeys.VEHICLE;
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
 
 /**
@@ -31,17 +40,21 @@ public final class VehicleFileReader {
     private VehicleFileReader() {
     }
 
-    /** Reads and validates a file; nothing is returned unless the whole file is good. */
-    public static VehicleDocument read(Path file) throws VehicleFileException {
+    /**
+     * Reads and validates a file; nothing is returned unless the whole file is good.
+     *
+     * @param checks the checks that need the calculation ({@code barwright.loading.VehicleLoader} has them)
+     */
+    public static VehicleDocument read(Path file, BuildChecks checks) throws VehicleFileException {
         try {
-            return parse(JsonInput.readBytes(file, KIND));
+            return parse(JsonInput.readBytes(file, KIND), checks);
         } catch (JsonInputException refused) {
             throw new VehicleFileException(refused.problems());
         }
     }
 
     /** Parses and validates the bytes of a vehicle file (UTF-8, with or without a byte-order mark). */
-    public static VehicleDocument parse(byte[] content) throws VehicleFileException {
+    public static VehicleDocument parse(byte[] content, BuildChecks checks) throws VehicleFileException {
         JsonNode tree;
         try {
             if (JsonInput.decode(content).isBlank()) {
@@ -51,16 +64,16 @@ public final class VehicleFileReader {
         } catch (JsonInputException refused) {
             throw new VehicleFileException(refused.problems());
         }
-        return fromTree(tree);
+        return fromTree(tree, checks);
     }
 
     /** Validates a tree (for example the open document after an edit) and builds the car from it. */
-    public static VehicleDocument fromTree(JsonNode tree) throws VehicleFileException {
+    public static VehicleDocument fromTree(JsonNode tree, BuildChecks checks) throws VehicleFileException {
         if (tree == null || !tree.isObject()) {
             throw new VehicleFileException("the file must hold one JSON object {...}, not "
                     + (tree == null ? "nothing" : tree.getNodeType().toString().toLowerCase(Locale.ROOT)));
         }
-        NodeReader reader = new NodeReader();
+        NodeReader reader = new NodeReader(checks);
         checkHeader(tree, reader);
         TyreReader.refuseNewKeysInVersion1(tree, reader);
         if (reader.hasProblems()) {
@@ -93,7 +106,7 @@ public final class VehicleFileReader {
     private static Vehicle readVehicle(JsonNode tree, NodeReader reader) {
         String name = reader.text(tree, "", "name", true);
         reader.text(tree, "", "notes", false);
-        JsonNode body = reader.object(tree, "", "vehicle", true);
+        JsonNode body = reader.object(tree, "", VEHICLE, true);
         JsonNode frontNode = reader.object(tree, "", "front", true);
         JsonNode rearNode = reader.object(tree, "", "rear", true);
         JsonNode analysis = reader.object(tree, "", "analysis", false);
@@ -116,17 +129,17 @@ public final class VehicleFileReader {
         if (corners != null) {
             mass = corners.total();
             frontFraction = corners.frontFraction();
-            checkAgrees(body, "massKg", mass, Range.between(50, 20000, "kg"), cornersAccepted, reader);
-            checkAgrees(body, "frontMassFraction", frontFraction, Range.between(0.05, 0.95, ""), cornersAccepted,
+            checkAgrees(body, MASS_KG, mass, Range.between(50, 20000, "kg"), cornersAccepted, reader);
+            checkAgrees(body, FRONT_MASS_FRACTION, frontFraction, Range.between(0.05, 0.95, ""), cornersAccepted,
                     reader);
         } else {
-            mass = reader.number(body, "vehicle", "massKg", Range.between(50, 20000, "kg"));
-            frontFraction = reader.number(body, "vehicle", "frontMassFraction", Range.between(0.05, 0.95, ""));
+            mass = reader.number(body, VEHICLE, MASS_KG, Range.between(50, 20000, "kg"));
+            frontFraction = reader.number(body, VEHICLE, FRONT_MASS_FRACTION, Range.between(0.05, 0.95, ""));
         }
-        double cgHeight = reader.number(body, "vehicle", "cgHeightMm", Range.between(50, 3000, "mm")) * 1e-3;
-        double wheelbase = reader.number(body, "vehicle", "wheelbaseMm", Range.between(500, 10000, "mm")) * 1e-3;
+        double cgHeight = reader.number(body, VEHICLE, CG_HEIGHT_MM, Range.between(50, 3000, "mm")) * 1e-3;
+        double wheelbase = reader.number(body, VEHICLE, "wheelbaseMm", Range.between(500, 10000, "mm")) * 1e-3;
         Double chassis = NodeReader.isAbsent(body, "chassisTorsionalStiffnessNmPerDeg") ? null
-                : reader.number(body, "vehicle", "chassisTorsionalStiffnessNmPerDeg",
+                : reader.number(body, VEHICLE, "chassisTorsionalStiffnessNmPerDeg",
                 Range.between(10, 1e8, "N·m/deg")) / RADIANS_PER_DEGREE;
         if (reader.hasProblems() || front == null || rear == null) {
             return null;
@@ -136,16 +149,16 @@ public final class VehicleFileReader {
     }
 
     private static CornerMasses readCornerMasses(JsonNode body, NodeReader reader) {
-        JsonNode node = reader.object(body, "vehicle", "cornerMassesKg", false);
+        JsonNode node = reader.object(body, VEHICLE, CORNER_MASSES_KG, false);
         if (node == null) {
             return null;
         }
-        String path = "vehicle.cornerMassesKg";
+        String path = NodeReader.child(VEHICLE, CORNER_MASSES_KG);
         Range range = Range.between(5, 10000, "kg");
-        double leftFront = reader.number(node, path, "leftFront", range);
-        double rightFront = reader.number(node, path, "rightFront", range);
-        double leftRear = reader.number(node, path, "leftRear", range);
-        double rightRear = reader.number(node, path, "rightRear", range);
+        double leftFront = reader.number(node, path, LEFT_FRONT, range);
+        double rightFront = reader.number(node, path, RIGHT_FRONT, range);
+        double leftRear = reader.number(node, path, LEFT_REAR, range);
+        double rightRear = reader.number(node, path, RIGHT_REAR, range);
         return new CornerMasses(leftFront, rightFront, leftRear, rightRear);
     }
 
@@ -156,11 +169,11 @@ public final class VehicleFileReader {
             return;
         }
         int before = reader.problems().size();
-        double given = reader.number(body, "vehicle", key, range);
+        double given = reader.number(body, VEHICLE, key, range);
         // compared only where both the value and the corner masses were accepted, whatever else is wrong
         if (cornersAccepted && reader.problems().size() == before
                 && Math.abs(given - fromCorners) > 0.005 * fromCorners) {
-            reader.problem("vehicle." + key, "= " + Range.format(given) + ": must agree within 0.5 % with the "
+            reader.problem(NodeReader.child(VEHICLE, key), "= " + Range.format(given) + ": must agree within 0.5 % with the "
                     + "corner masses, which give " + Range.format(Math.round(fromCorners * 1e4) / 1e4)
                     + " (or leave it out)");
         }

@@ -3,14 +3,35 @@ package barwright.io;
 import java.util.List;
 
 /**
- * The vehicle file's key names for a bar and a tyre (docs/file-format.md), defined here once: the readers, the tree
- * edits, the window's fields and the outputs that write a bar all use these.
+ * The vehicle file's key names for a bar, its rate calibration, a tyre and a linkage (docs/file-format.md),
+ * defined here once: the readers, the tree edits, the loader's messages, the window's fields and the outputs that
+ * write a bar all use these.
  */
 public final class VehicleKeys {
+    // the body (file-format.md, "The vehicle")
+    public static final String VEHICLE = "vehicle";
+    public static final String MASS_KG = "massKg";
+    public static final String FRONT_MASS_FRACTION = "frontMassFraction";
+    public static final String CG_HEIGHT_MM = "cgHeightMm";
+    public static final String CORNER_MASSES_KG = "cornerMassesKg";
+    public static final String LEFT_FRONT = "leftFront";
+    public static final String RIGHT_FRONT = "rightFront";
+    public static final String LEFT_REAR = "leftRear";
+    public static final String RIGHT_REAR = "rightRear";
+
     public static final String BAR = "bar";
     public static final String MATERIAL = "material";
     public static final String SECTION = "section";
     public static final String SELECTED_ARM = "selectedArm";
+    /** A shaped bar's object, and its arm holes' set-backs inside it. */
+    public static final String GEOMETRY = "geometry";
+    public static final String HOLE_SETBACKS_MM = "holeSetbacksMm";
+
+    // a bar's measured rate calibration (file-format.md, "Rate calibration")
+    public static final String RATE_CALIBRATION = "rateCalibration";
+    public static final String EFFECTIVE_RATE_FACTOR = "effectiveRateFactor";
+    public static final String MEASURED_ON = "measuredOn";
+    public static final String NOTE = "note";
 
     public static final String NAME = "name";
     public static final String YOUNGS_MODULUS_GPA = "youngsModulusGPa";
@@ -50,16 +71,34 @@ public final class VehicleKeys {
     public static final String SURFACE = "surface";
     public static final String STRESS_CONCENTRATION = "stressConcentration";
 
-    // the body, as the workshop measures it (file-format.md, "The vehicle")
-    public static final String VEHICLE = "vehicle";
-    public static final String MASS_KG = "massKg";
-    public static final String FRONT_MASS_FRACTION = "frontMassFraction";
-    public static final String CG_HEIGHT_MM = "cgHeightMm";
-    public static final String CORNER_MASSES_KG = "cornerMassesKg";
-    public static final String LEFT_FRONT = "leftFront";
-    public static final String RIGHT_FRONT = "rightFront";
-    public static final String LEFT_REAR = "leftRear";
-    public static final String RIGHT_REAR = "rightRear";
+    // an axle's suspension linkage (file-format.md, "Suspension linkages")
+    public static final String LINKAGE = "linkage";
+    public static final String RIDE_HEIGHT_CHANGE_MM = "rideHeightChangeMm";
+    public static final String STATIC_CAMBER_DEG = "staticCamberDeg";
+    public static final String TYPE = "type";
+    public static final String DOUBLE_WISHBONE = "double-wishbone";
+    public static final String STRUT = "strut";
+    public static final String LIVE_AXLE_PANHARD = "live-axle-panhard";
+    public static final String LIVE_AXLE_WATTS = "live-axle-watts";
+    public static final String TRAILING_ARM = "trailing-arm";
+    public static final String SEMI_TRAILING_ARM = "semi-trailing-arm";
+    /** Every linkage type, in the order messages list them. */
+    public static final List<String> LINKAGE_TYPES = List.of(DOUBLE_WISHBONE, STRUT, LIVE_AXLE_PANHARD,
+            LIVE_AXLE_WATTS, TRAILING_ARM, SEMI_TRAILING_ARM);
+    public static final String UPPER_INNER_MM = "upperInnerMm";
+    public static final String UPPER_OUTER_MM = "upperOuterMm";
+    public static final String LOWER_INNER_MM = "lowerInnerMm";
+    public static final String LOWER_OUTER_MM = "lowerOuterMm";
+    public static final String STRUT_TOP_MM = "strutTopMm";
+    public static final String STRUT_LOWER_MM = "strutLowerMm";
+    public static final String PANHARD_BODY_MM = "panhardBodyMm";
+    public static final String PANHARD_AXLE_MM = "panhardAxleMm";
+    public static final String CENTRE_PIVOT_HEIGHT_MM = "centrePivotHeightMm";
+    public static final String CENTRE_PIVOT_ON = "centrePivotOn";
+    public static final String ON_AXLE = "axle";
+    public static final String ON_BODY = "body";
+    public static final String PIVOT_INNER_MM = "pivotInnerMm";
+    public static final String PIVOT_OUTER_MM = "pivotOuterMm";
 
     private VehicleKeys() {
     }

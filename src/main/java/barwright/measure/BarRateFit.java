@@ -1,6 +1,7 @@
 package barwright.measure;
 
 import java.util.List;
+import java.util.stream.IntStream;
 
 /**
  * A bar's rate fitted to load and deflection readings (model.md 12.1).
@@ -24,7 +25,7 @@ public record BarRateFit(double rate, double lash, double rSquared, List<BarRead
 
     /** @return the readings flagged as far off the line */
     public List<BarReading> outliers() {
-        return java.util.stream.IntStream.range(0, readings.size())
+        return IntStream.range(0, readings.size())
                 .filter(i -> roles.get(i) == ReadingRole.OUTLIER).mapToObj(readings::get).toList();
     }
 

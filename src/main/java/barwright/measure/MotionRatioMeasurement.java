@@ -3,6 +3,7 @@ package barwright.measure;
 import barwright.solver.LinearFit;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 
@@ -38,7 +39,7 @@ public final class MotionRatioMeasurement {
         double cosine = cosineCorrection(linkAngle);
         double[] wheel = readings.stream().mapToDouble(TravelReading::wheelTravel).toArray();
         double[] component = readings.stream().mapToDouble(TravelReading::componentTravel).toArray();
-        double span = java.util.Arrays.stream(wheel).max().orElse(0) - java.util.Arrays.stream(wheel).min().orElse(0);
+        double span = Arrays.stream(wheel).max().orElse(0) - Arrays.stream(wheel).min().orElse(0);
         if (span == 0) {
             throw new MeasurementException("every reading has the same wheel travel, " + plain(wheel[0] * 1e3)
                     + " mm: move the wheel between readings");
@@ -52,10 +53,10 @@ public final class MotionRatioMeasurement {
         for (int i = 0; i < residuals.length; i++) {
             residuals[i] = component[i] - line.at(wheel[i]);
         }
-        double largestTravel = java.util.Arrays.stream(component).map(Math::abs).max().orElse(0);
+        double largestTravel = Arrays.stream(component).map(Math::abs).max().orElse(0);
         boolean[] far = OutlierRule.flag(residuals, 1e-3 * largestTravel);
         double change = 0;
-        long distinctPositions = java.util.Arrays.stream(wheel).distinct().count();
+        long distinctPositions = Arrays.stream(wheel).distinct().count();
         if (readings.size() >= QUADRATIC_READINGS && distinctPositions >= 3) {
             change = 2 * LinearFit.quadratic(wheel, component).c2() * cosine;
         }
@@ -76,7 +77,7 @@ public final class MotionRatioMeasurement {
                     + "the travel is not estimated");
         }
         return new MotionRatioFit(ratio, line.rSquared(), change, cosine, readings,
-                java.util.Arrays.stream(residuals).boxed().toList(), flags, warnings);
+                Arrays.stream(residuals).boxed().toList(), flags, warnings);
     }
 
     /**

@@ -1,7 +1,7 @@
 package barwright.measure;
 
 import barwright.model.AxlePosition;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import barwright.solver.RootFinder;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -27,6 +27,9 @@ import static barwright.measure.BarRateMeasurement.plain;
 public final class TiltMethod {
     /** A result less certain than this (expanded, m) is refused with the raise that would do (the program's choice). */
     public static final double LARGEST_USEFUL_UNCERTAINTY = 0.025;
+    /** The raise that would bring the uncertainty down to the useful one: to 0.1 mm, in 100 evaluations. */
+    private static final RootFinder RAISE_NEEDED = RootFinder.of("the raise that makes the height certain enough",
+            1e-4, 100);
     /** Coverage factor of the expanded uncertainty (about 95 % for normal scatter). */
     public static final double COVERAGE = 2;
 
@@ -111,8 +114,8 @@ public final class TiltMethod {
             advice = "no safe raise reaches that with these scales: use scales that read finer than "
                     + plain(test.scaleResolution()) + " kg";
         } else {
-            // the uncertainty falls as the raise grows over this range; Brent's method, 0.1 mm, 100 evaluations
-            double needed = new BrentSolver(1e-4).solve(100,
+            // the uncertainty falls as the raise grows over this range; Brent's method to 0.1 mm, 100 evaluations
+            double needed = RAISE_NEEDED.solve(
                     h -> uncertainty(test, aboveWheelCentres, h) - LARGEST_USEFUL_UNCERTAINTY, test.raise(), highest);
             advice = String.format(Locale.ROOT, "raise the %s axle at least %.0f mm", test.raisedAxle().key(),
                     Math.ceil(needed * 1e3));

@@ -1,5 +1,7 @@
 package barwright.model;
 
+import java.util.Objects;
+
 /**
  * One axle's suspension, tyres and anti-roll bar.
  *
@@ -26,8 +28,8 @@ public record Axle(double track, double rollCentreHeight, double unsprungMass, d
         Checks.positive("springRate", springRate);
         Checks.positive("springMotionRatio", springMotionRatio);
         Checks.positive("tyreVerticalRate", tyreVerticalRate);
-        java.util.Objects.requireNonNull(tyre, "tyre");
-        java.util.Objects.requireNonNull(suspension, "suspension");
+        Objects.requireNonNull(tyre, "tyre");
+        Objects.requireNonNull(suspension, "suspension");
     }
 
     /** An axle with no linkage: the roll-centre height as typed. */

@@ -1,5 +1,8 @@
 package barwright.model;
 
+import java.util.Comparator;
+import java.util.Objects;
+
 /**
  * A tyre with load-sensitive grip and cornering stiffness, for the Magic Formula of model.md 8. The friction
  * and the cornering stiffness each come either from a law (the scalar parameters) or from points against load
@@ -33,7 +36,7 @@ public record Tyre(double nominalLoad, double frictionAtNominalLoad, double fric
         Checks.positive("corneringStiffnessPeakLoadRatio", corneringStiffnessPeakLoadRatio);
         Checks.positive("shapeFactor", shapeFactor);
         Checks.finite("curvatureFactor", curvatureFactor);
-        java.util.Objects.requireNonNull(camber, "camber");
+        Objects.requireNonNull(camber, "camber");
     }
 
     /** A tyre with both laws and no camber effect (version-1 files). */
@@ -69,7 +72,7 @@ public record Tyre(double nominalLoad, double frictionAtNominalLoad, double fric
     /** @return the same tyre with its cornering stiffness (N/rad) from points; display stand-ins as above */
     public Tyre withCorneringStiffnessByLoad(LoadTable points) {
         LoadPoint stiffest = points.points().stream()
-                .max(java.util.Comparator.comparingDouble(LoadPoint::value)).orElseThrow();
+                .max(Comparator.comparingDouble(LoadPoint::value)).orElseThrow();
         return new Tyre(nominalLoad, frictionAtNominalLoad, frictionLoadSensitivity,
                 points.linearAt(nominalLoad) / nominalLoad, stiffest.load() / nominalLoad, shapeFactor,
                 curvatureFactor, frictionByLoad, points, camber);

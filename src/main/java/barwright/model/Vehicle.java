@@ -36,11 +36,6 @@ public record Vehicle(String name, double mass, double frontMassFraction, Corner
         Checks.nonNegative("differentialWheelTravel", differentialWheelTravel);
     }
 
-    /** @return true where the chassis is modelled as a torsion spring between the axles */
-    public boolean hasFlexibleChassis() {
-        return chassisTorsionalStiffness != null;
-    }
-
     public Vehicle withFront(Axle newFront) {
         return new Vehicle(name, mass, frontMassFraction, cornerMasses, cgHeight, wheelbase,
                 chassisTorsionalStiffness, newFront, rear, differentialWheelTravel);

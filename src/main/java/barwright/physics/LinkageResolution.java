@@ -6,6 +6,7 @@ import barwright.model.Vehicle;
 import barwright.physics.linkage.AxleKinematics;
 import barwright.physics.linkage.LinkageLimitException;
 import barwright.physics.linkage.RollState;
+import java.util.Locale;
 
 /**
  * Where the analysis meets the linkages (model.md 12): the car the analysis sees at its ride height, each
@@ -76,7 +77,7 @@ public final class LinkageResolution {
         try {
             return kinematics.roll(roll);
         } catch (LinkageLimitException beyond) {
-            throw new ImpossibleVehicleException(position.key() + ".linkage: at " + String.format(java.util.Locale.ROOT,
+            throw new ImpossibleVehicleException(position.key() + ".linkage: at " + String.format(Locale.ROOT,
                     "%.1f", Math.toDegrees(Math.abs(roll))) + " deg of body roll " + beyond.getMessage());
         }
     }

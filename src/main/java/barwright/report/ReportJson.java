@@ -10,6 +10,7 @@ import barwright.physics.LoadTransferParts;
 import barwright.physics.TurnResult;
 import barwright.physics.Warning;
 import barwright.physics.bar.BarResult;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -36,9 +37,7 @@ public final class ReportJson {
     }
 
     public static ObjectNode of(AnalysisResult result) {
-        ObjectNode report = NODES.objectNode();
-        report.put("format", FORMAT);
-        report.put("version", VERSION);
+        ObjectNode report = OutputDocument.start(FORMAT, VERSION);
         ObjectNode vehicle = report.putObject("vehicle");
         vehicle.put("massKg", result.masses().mass());
         vehicle.put("frontMassFraction", result.masses().frontMassFraction());

@@ -1,7 +1,6 @@
 package barwright.report;
 
 import barwright.model.AntiRollBar;
-import barwright.report.linkage.LinkageFigures;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
@@ -11,18 +10,21 @@ import barwright.physics.GripLostToTransfer;
 import barwright.physics.TurnResult;
 import barwright.physics.Warning;
 import barwright.physics.bar.BarResult;
+import barwright.report.heading.TextHeading;
+import barwright.report.linkage.LinkageFigures;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
 
 import java.util.Locale;
 import java.util.function.Function;
+import java.util.regex.Pattern;
 
 import static barwright.units.Conversions.toPercent;
 
 /** The readable summary the command line prints for {@code analyze FILE}. */
 public final class TextSummary {
-    private static final java.util.regex.Pattern NON_FINITE = java.util.regex.Pattern.compile("NaN|Infinity");
+    private static final Pattern NON_FINITE = Pattern.compile("NaN|Infinity");
     private final UnitSystem units;
     private final StringBuilder out = new StringBuilder();
 
@@ -35,7 +37,7 @@ public final class TextSummary {
     }
 
     private String write(AnalysisResult result) {
-        line("Barwright analysis: " + result.vehicle().name() + "   (units: " + units.label() + ")");
+        line(TextHeading.of("analysis", result.vehicle().name(), units));
         line("");
         line("Car");
         row("mass", f(result.masses().mass(), Quantity.MASS, 1));

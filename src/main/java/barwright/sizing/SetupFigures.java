@@ -34,9 +34,4 @@ public record SetupFigures(double frontLoadTransferShare, double rollGradient, B
     public boolean liftsBeforeLimit(AxlePosition axle) {
         return axle == AxlePosition.FRONT ? frontLiftsBeforeLimit : rearLiftsBeforeLimit;
     }
-
-    /** @return the sum of both bars' masses (kg) */
-    public double barMass() {
-        return (frontBar == null ? 0 : frontBar.mass()) + (rearBar == null ? 0 : rearBar.mass());
-    }
 }

@@ -1,5 +1,6 @@
 package barwright.solver;
 
+import java.util.Arrays;
 import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
 import org.apache.commons.math3.stat.regression.SimpleRegression;
 
@@ -33,10 +34,6 @@ public final class LinearFit {
      * @param c2 quadratic term
      */
     public record Quadratic(double c0, double c1, double c2) {
-        /** @return dy/dx at x */
-        public double slopeAt(double x) {
-            return c1 + 2 * c2 * x;
-        }
     }
 
     /** @return the least-squares line through at least two points with distinct x */
@@ -58,7 +55,7 @@ public final class LinearFit {
     /** @return the least-squares quadratic through at least three points with three distinct x */
     public static Quadratic quadratic(double[] x, double[] y) {
         requireSameLength(x, y, 3);
-        if (java.util.Arrays.stream(x).distinct().count() < 3) {
+        if (Arrays.stream(x).distinct().count() < 3) {
             throw new IllegalArgumentException("a quadratic needs at least three different x values");
         }
         double[][] design = new double[x.length][];

@@ -39,8 +39,9 @@ class CoreArchitectureTest {
     /** The computation packages: they compute and know nothing of output, files' edges or screens. */
     private static final String[] COMPUTATION = {"barwright.units..", "barwright.model..", "barwright.physics..",
             "barwright.solver..", "barwright.sizing..", "barwright.insight.."};
-    /** The core: the computation packages plus the file format and the output. */
-    private static final String[] CORE = concat(COMPUTATION, "barwright.io..", "barwright.report..");
+    /** The core: the computation packages plus the file format, the loader and the output. */
+    private static final String[] CORE = concat(COMPUTATION, "barwright.io..", "barwright.loading..",
+            "barwright.report..");
 
     /*
      * Rules main still breaks (DEVELOPERS.md, "Layout", says the same): null where the rule is enforced. Each
@@ -48,8 +49,7 @@ class CoreArchitectureTest {
      * fails once the rule holds until the note is removed here and in DEVELOPERS.md.
      */
     private static final String NOT_YET_CHARTS = null;
-    private static final String NOT_YET_IO = "io.BarReader builds the beam model (physics.beam) to refuse an "
-            + "unbuildable shaped bar";
+    private static final String NOT_YET_IO = null;
     private static final String NOT_YET_REPORT = null;
     private static final String NOT_YET_CYCLES = null;
 

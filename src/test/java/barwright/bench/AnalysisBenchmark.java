@@ -1,7 +1,7 @@
 package barwright.bench;
 
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
@@ -45,7 +45,7 @@ public class AnalysisBenchmark {
             if (in == null) {
                 throw new IllegalStateException("no built-in sample " + sample);
             }
-            vehicle = VehicleFileReader.parse(in.readAllBytes()).vehicle();
+            vehicle = VehicleLoader.parse(in.readAllBytes()).vehicle();
         }
     }
 

@@ -6,7 +6,7 @@ import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
 import barwright.insight.Sensitivity;
 import barwright.insight.SensitivityResult;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.Vehicle;
 import barwright.physics.VehicleAnalysis;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -37,7 +37,7 @@ public class InsightBenchmark {
 
     @Setup
     public void load() throws Exception {
-        vehicle = VehicleFileReader.read(Path.of("sample-vehicles", sample + ".json")).vehicle();
+        vehicle = VehicleLoader.read(Path.of("sample-vehicles", sample + ".json")).vehicle();
     }
 
     @Benchmark

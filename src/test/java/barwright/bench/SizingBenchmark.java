@@ -1,6 +1,6 @@
 package barwright.bench;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
@@ -50,7 +50,7 @@ public class SizingBenchmark {
 
     @Setup
     public void setUp() throws Exception {
-        vehicle = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json")).vehicle();
+        vehicle = VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json")).vehicle();
         List<StockSize> sizes = new ArrayList<>();
         // 25 solids (14 to 38 mm) and 600 tubes (25 diameters 16 to 40 mm x 24 walls 1.0 to 5.6 mm)
         for (int d = 14; d <= 38; d++) {

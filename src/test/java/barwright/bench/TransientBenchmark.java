@@ -2,7 +2,7 @@ package barwright.bench;
 
 import barwright.io.DynamicsInputReader;
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.DynamicsInputs;
 import barwright.model.LapLog;
 import barwright.physics.AnalysisResult;
@@ -38,7 +38,7 @@ public class TransientBenchmark {
 
     @Setup
     public void load() throws Exception {
-        VehicleDocument document = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback-dampers.json"));
+        VehicleDocument document = VehicleLoader.read(Path.of("sample-vehicles/club-hatchback-dampers.json"));
         analysis = VehicleAnalysis.analyse(document.vehicle());
         inputs = DynamicsInputReader.read(document.tree());
         int samples = 60_000;

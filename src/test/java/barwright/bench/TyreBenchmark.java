@@ -1,7 +1,7 @@
 package barwright.bench;
 
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
@@ -44,7 +44,7 @@ public class TyreBenchmark {
 
     @Setup
     public void load() throws IOException, VehicleFileException {
-        vehicle = VehicleFileReader.parse(Files.readAllBytes(
+        vehicle = VehicleLoader.parse(Files.readAllBytes(
                 Path.of("sample-vehicles/club-hatchback-fitted-tyres.json"))).vehicle();
         data = InventedTyreData.generate(InventedTyreData.SEED, 286);
     }

@@ -3,7 +3,7 @@ package barwright.cli;
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
 import barwright.insight.Wheel;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.physics.VehicleAnalysis;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
@@ -27,7 +27,7 @@ class EnvelopeCommandTest {
         assertThat(json.get("format").asText()).isEqualTo("barwright.envelope");
         assertThat(json.get("boundaries")).hasSize(4);
         LiftEnvelopeResult expected = LiftEnvelope.of(VehicleAnalysis.analyse(
-                VehicleFileReader.read(Path.of(HATCHBACK)).vehicle()));
+                VehicleLoader.read(Path.of(HATCHBACK)).vehicle()));
         for (int i = 0; i < 4; i++) {
             Wheel wheel = Wheel.values()[i];
             JsonNode boundary = json.get("boundaries").get(i);

@@ -71,7 +71,8 @@ class GeometryCommandTest {
                 "--json").out());
         for (String axle : List.of("/front", "/rear")) {
             // lowered 25 mm, each roll centre falls by more than the body does (common practice: lowering a car on
-            // double wishbones drops its roll centres faster than its ride height)
+            // double wishbones drops its roll centres faster than its ride height; docs/validation.md, "Suspension
+            // linkages, camber and tyres from data")
             assertThat(lowered.at(axle + "/staticRollCentreHeightMm").asDouble())
                     .isLessThan(standard.at(axle + "/staticRollCentreHeightMm").asDouble() - 25);
         }

@@ -76,6 +76,31 @@ class MeasureCommandTest {
     }
 
     @Test
+    void cornersAndCentreOfMassApplyWriteTheirKeysIntoACopy() throws Exception {
+        Path weighed = directory.resolve("weighed.json");
+        Run corners = run("measure", "corners", CAR, "--kg", "400,380,340,360", "--apply", "--output",
+                weighed.toString());
+        assertThat(corners.code()).as(corners.err()).isEqualTo(0);
+        JsonNode body = new ObjectMapper().readTree(weighed.toFile()).path("vehicle");
+        assertThat(body.path("cornerMassesKg").path("rightFront").asDouble()).isEqualTo(380);
+        // the mass and front share now follow from the corners (file-format.md): the copy gives neither
+        assertThat(body.has("massKg")).isFalse();
+        assertThat(body.has("frontMassFraction")).isFalse();
+        Run analysis = run("analyze", weighed.toString(), "--json");
+        assertThat(analysis.code()).as(analysis.err()).isEqualTo(0);
+        // by hand: 400 + 380 + 340 + 360 = 1480 kg
+        assertThat(analysis.json().path("vehicle").path("massKg").asDouble()).isCloseTo(1480, within(1e-9));
+
+        Path tilted = directory.resolve("tilted.json");
+        Run height = run("measure", "cg", CAR, "--raised-axle", "rear", "--raise-mm", "300",
+                "--raised-front-axle-kg", "800", "--apply", "--output", tilted.toString(), "--json");
+        assertThat(height.code()).as(height.err()).isEqualTo(0);
+        // the copy holds the height the command printed, in mm to 0.1 mm
+        assertThat(new ObjectMapper().readTree(tilted.toFile()).path("vehicle").path("cgHeightMm").asDouble())
+                .isCloseTo(height.json().path("cgHeightMm").asDouble(), within(0.05));
+    }
+
+    @Test
     void badReadingsAreRefusedWithTheirLineOrValue() throws Exception {
         Path bad = directory.resolve("bad.csv");
         Files.writeString(bad, "loadN,deflectionMm\n10,1\nabc,2\n30,3\n");

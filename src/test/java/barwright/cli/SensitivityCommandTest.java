@@ -2,7 +2,7 @@ package barwright.cli;
 
 import barwright.insight.Sensitivity;
 import barwright.insight.SensitivityResult;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
 
@@ -19,7 +19,7 @@ class SensitivityCommandTest {
         assertThat(run.exitCode()).isZero();
         JsonNode json = run.json();
         assertThat(json.get("format").asText()).isEqualTo("barwright.sensitivity");
-        SensitivityResult expected = Sensitivity.of(VehicleFileReader.read(Path.of(ROADSTER)).vehicle());
+        SensitivityResult expected = Sensitivity.of(VehicleLoader.read(Path.of(ROADSTER)).vehicle());
         JsonNode changes = json.get("changes");
         assertThat(changes).hasSize(expected.rows().size());
         for (int i = 0; i < changes.size(); i++) {

@@ -1,6 +1,6 @@
 package barwright.cli;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -56,7 +56,7 @@ class SizeCommandTest {
             bar.set("material", candidate.path("material"));
             bar.set("section", candidate.path("section"));
             bar.set("selectedArm", candidate.path("selectedArm"));
-            AnalysisResult analysed = VehicleAnalysis.analyse(VehicleFileReader.fromTree(tree).vehicle());
+            AnalysisResult analysed = VehicleAnalysis.analyse(VehicleLoader.fromTree(tree).vehicle());
             // the JSON prints doubles in full (Jackson round-trips them): 1e-12 relative
             assertThat(candidate.path("frontLoadTransferShare").asDouble())
                     .isCloseTo(analysed.frontLoadTransferShare(), within(1e-12));
@@ -76,7 +76,7 @@ class SizeCommandTest {
         ObjectNode tree = (ObjectNode) MAPPER.readTree(Files.readAllBytes(Path.of(HATCHBACK)));
         ObjectNode section = (ObjectNode) tree.path("front").path("bar").path("section");
         section.put("outerDiameterMm", root.path("exactSolidDiameterMm").asDouble());
-        assertThat(VehicleAnalysis.analyse(VehicleFileReader.fromTree(tree).vehicle()).frontLoadTransferShare())
+        assertThat(VehicleAnalysis.analyse(VehicleLoader.fromTree(tree).vehicle()).frontLoadTransferShare())
                 .isCloseTo(0.47, within(1e-6));
     }
 
@@ -88,7 +88,7 @@ class SizeCommandTest {
                 "--materials", "current,spring steel", "--catalogues", "solid-metric,tube-inch", "--apply", "1",
                 "--output", vehicle.toString(), "--sweep-csv", sweep.toString())[0];
         assertThat(text).contains("Sizing the rear bar", "inside rear wheel stays down", "Caution");
-        var sized = VehicleFileReader.read(vehicle);
+        var sized = VehicleLoader.read(vehicle);
         assertThat(sized.tree().path("notes").asText()).contains("Invented"); // the rest of the file kept
         List<CSVRecord> records = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
                 .parse(new StringReader(Files.readString(sweep))).getRecords();

@@ -1,7 +1,7 @@
 package barwright.cli;
 
-import barwright.io.VehicleFileReader;
 import barwright.io.VehicleDocument;
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -35,7 +35,7 @@ class TyreFitCommandTest {
                 Files.readString(Path.of("sample-vehicles/club-hatchback.json")));
         car.put("version", 2);
         ((ObjectNode) car.get("front")).set("tyre", root.get("tyre"));
-        VehicleDocument document = VehicleFileReader.fromTree(car);
+        VehicleDocument document = VehicleLoader.fromTree(car);
         assertThat(document.vehicle().front().tyre().frictionByLoad().points()).hasSize(4);
         assertThat(document.vehicle().front().tyre().camber().isNone()).isFalse();
     }

@@ -1,5 +1,6 @@
 package barwright.cli;
 
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -139,7 +140,7 @@ final class VehicleFileMutations {
         set(slot, NODES.numberNode(-1e9));
         java.util.regex.Matcher range = null;
         try {
-            barwright.io.VehicleFileReader.fromTree(tree);
+            barwright.loading.VehicleLoader.fromTree(tree);
         } catch (barwright.io.VehicleFileException refused) {
             range = RANGE.matcher(refused.getMessage());
         }

@@ -1,6 +1,6 @@
 package barwright.insight;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.Vehicle;
 
 import java.nio.file.Path;
@@ -19,7 +19,7 @@ final class Samples {
 
     static Vehicle vehicle(String name) {
         try {
-            return VehicleFileReader.read(path(name)).vehicle();
+            return VehicleLoader.read(path(name)).vehicle();
         } catch (Exception unreadable) {
             throw new IllegalStateException("sample " + name + " does not load", unreadable);
         }

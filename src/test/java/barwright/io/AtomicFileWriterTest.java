@@ -1,5 +1,6 @@
 package barwright.io;
 
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.junit.jupiter.api.Test;
@@ -179,7 +180,7 @@ class AtomicFileWriterTest {
                 "--apply", "1", "--output", output.toString());
         assertThat(run.exitCode()).as(run.err()).isEqualTo(0);
         assertThat(Files.size(output)).isLessThanOrEqualTo(JsonInput.MAX_BYTES);
-        VehicleDocument reread = VehicleFileReader.read(output);
+        VehicleDocument reread = VehicleLoader.read(output);
         assertThat(reread.tree().get("workshopLog")).isEqualTo(log);
     }
 

@@ -1,5 +1,6 @@
 package barwright.io;
 
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -28,7 +29,7 @@ class JsonInputTest {
 
     private static String refusal(String text) {
         try {
-            VehicleFileReader.parse(text.getBytes(StandardCharsets.UTF_8));
+            VehicleLoader.parse(text.getBytes(StandardCharsets.UTF_8));
         } catch (VehicleFileException refused) {
             return refused.getMessage();
         }
@@ -61,7 +62,7 @@ class JsonInputTest {
         ByteArrayOutputStream withMark = new ByteArrayOutputStream();
         withMark.write(new byte[]{(byte) 0xEF, (byte) 0xBB, (byte) 0xBF});
         withMark.write(text);
-        assertThat(VehicleFileReader.parse(withMark.toByteArray()).tree()).isEqualTo(Fixtures.testVehicleTree());
+        assertThat(VehicleLoader.parse(withMark.toByteArray()).tree()).isEqualTo(Fixtures.testVehicleTree());
     }
 
     @Test
@@ -70,14 +71,14 @@ class JsonInputTest {
         byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
         int at = text.indexOf("\"name\"") + 1; // line 4 of the test vehicle: {, format, version, name
         bytes[at] = (byte) 0xC3; // a lead byte followed by an ASCII letter: not UTF-8
-        assertThatThrownBy(() -> VehicleFileReader.parse(bytes)).hasMessageContaining("not UTF-8")
+        assertThatThrownBy(() -> VehicleLoader.parse(bytes)).hasMessageContaining("not UTF-8")
                 .hasMessageContaining("0xC3").hasMessageContaining("line 4, column 4");
     }
 
     @Test
     void utf16IsNamed() {
         byte[] bytes = ("\uFEFF" + Fixtures.testVehicleText()).getBytes(StandardCharsets.UTF_16BE);
-        assertThatThrownBy(() -> VehicleFileReader.parse(bytes)).hasMessageContaining("UTF-16")
+        assertThatThrownBy(() -> VehicleLoader.parse(bytes)).hasMessageContaining("UTF-16")
                 .hasMessageContaining("save it as UTF-8");
     }
 
@@ -118,7 +119,7 @@ class JsonInputTest {
         // the test vehicle's rear bar names a built-in material; a key of the person's own beside the name must
         // not make the reader ask for the four properties (unknown keys are kept, files.md)
         ObjectNode tree = Fixtures.with(Fixtures.testVehicleTree(), "rear.bar.material.supplier", "\"Acme\"");
-        VehicleDocument document = VehicleFileReader.fromTree(tree);
+        VehicleDocument document = VehicleLoader.fromTree(tree);
         assertThat(document.tree().at("/rear/bar/material/supplier").asText()).isEqualTo("Acme");
         assertThat(document.vehicle().rear().bar().material().name())
                 .isEqualTo(Fixtures.testVehicleTree().at("/rear/bar/material/name").asText());

@@ -1,5 +1,6 @@
 package barwright.io;
 
+import barwright.loading.VehicleLoader;
 import barwright.model.DoubleWishbone;
 import barwright.model.LiveAxlePanhard;
 import barwright.model.LiveAxleWatts;
@@ -30,7 +31,7 @@ class LinkageFileTest {
             + "\"upperOuterMm\": [680, 480], \"lowerInnerMm\": [300, 200], \"lowerOuterMm\": [720, 160]}";
 
     private static VehicleDocument read(ObjectNode tree) throws VehicleFileException {
-        return VehicleFileReader.parse(Fixtures.text(tree).getBytes(StandardCharsets.UTF_8));
+        return VehicleLoader.parse(Fixtures.text(tree).getBytes(StandardCharsets.UTF_8));
     }
 
     @Test

@@ -1,5 +1,6 @@
 package barwright.io;
 
+import barwright.loading.VehicleLoader;
 import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
@@ -51,11 +52,11 @@ class SampleVehiclesTest {
     @ParameterizedTest
     @MethodSource("samples")
     void sampleLoadsAnalysesAndRoundTrips(Path sample) throws Exception {
-        VehicleDocument document = VehicleFileReader.read(sample);
+        VehicleDocument document = VehicleLoader.read(sample);
         AnalysisResult result = VehicleAnalysis.analyse(document.vehicle());
         Path saved = directory.resolve(sample.getFileName());
         VehicleFileWriter.save(document, saved);
-        VehicleDocument again = VehicleFileReader.read(saved);
+        VehicleDocument again = VehicleLoader.read(saved);
         assertThat(again.tree()).isEqualTo(document.tree());
         Vehicle reloaded = again.vehicle();
         assertThat(reloaded).isEqualTo(document.vehicle());
@@ -63,14 +64,14 @@ class SampleVehiclesTest {
         // the built-in copy in the jar is the same file
         try (InputStream in = SampleVehiclesTest.class.getResourceAsStream("/barwright/samples/" + sample.getFileName())) {
             assertThat(in).as("built into the jar").isNotNull();
-            assertThat(VehicleFileReader.parse(in.readAllBytes()).tree()).isEqualTo(document.tree());
+            assertThat(VehicleLoader.parse(in.readAllBytes()).tree()).isEqualTo(document.tree());
         }
     }
 
     @ParameterizedTest
     @MethodSource("samples")
     void sampleGivesFiguresTheTradeExpects(Path sample) throws Exception {
-        AnalysisResult result = VehicleAnalysis.analyse(VehicleFileReader.read(sample).vehicle());
+        AnalysisResult result = VehicleAnalysis.analyse(VehicleLoader.read(sample).vehicle());
         double rollGradient = result.rollGradient() * G / DEG;
         // general bounds for any car on tyres (common practice): 0.3-8 deg/g, limit 0.6-1.8 g, front share
         // of load transfer 0.3-0.8, ride frequencies 0.8-3.5 Hz, no bar past yield at its check travel

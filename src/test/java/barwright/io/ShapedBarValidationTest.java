@@ -1,6 +1,7 @@
 package barwright.io;
 
 import barwright.cli.Cli;
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.junit.jupiter.api.Test;
@@ -23,7 +24,7 @@ class ShapedBarValidationTest {
     Path folder;
 
     private ObjectNode estate() throws Exception {
-        return VehicleFileReader.read(Path.of("sample-vehicles/estate-dropped-rear-bar.json")).editableTree();
+        return VehicleLoader.read(Path.of("sample-vehicles/estate-dropped-rear-bar.json")).editableTree();
     }
 
     private int analyze(ObjectNode tree, ByteArrayOutputStream err) throws Exception {

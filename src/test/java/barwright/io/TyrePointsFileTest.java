@@ -1,5 +1,6 @@
 package barwright.io;
 
+import barwright.loading.VehicleLoader;
 import barwright.model.Tyre;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.junit.jupiter.api.Test;
@@ -35,7 +36,7 @@ class TyrePointsFileTest {
         ObjectNode tree = Fixtures.with(withPoints(), "front.tyre.camberForPeakGripDeg", "-2");
         tree = Fixtures.with(tree, "front.tyre.peakFrictionLossPerDegSquared", "0.004");
         tree = Fixtures.with(tree, "front.tyre.camberStiffnessPerLoad", "0.015");
-        Tyre tyre = VehicleFileReader.fromTree(tree).vehicle().front().tyre();
+        Tyre tyre = VehicleLoader.fromTree(tree).vehicle().front().tyre();
         assertThat(tyre.frictionByLoad().points()).hasSize(3);
         assertThat(tyre.frictionByLoad().points().get(1).value()).isEqualTo(1.20);
         // N/deg to N/rad: times 180/pi (NIST SP 811's degree)
@@ -49,7 +50,7 @@ class TyrePointsFileTest {
 
     @Test
     void aVersionOneFileReadsAsBeforeWithNoPointsAndNoCamber() throws VehicleFileException {
-        Tyre tyre = VehicleFileReader.fromTree(Fixtures.testVehicleTree()).vehicle().front().tyre();
+        Tyre tyre = VehicleLoader.fromTree(Fixtures.testVehicleTree()).vehicle().front().tyre();
         assertThat(tyre.hasFrictionPoints()).isFalse();
         assertThat(tyre.hasStiffnessPoints()).isFalse();
         assertThat(tyre.camber().isNone()).isTrue();
@@ -59,7 +60,7 @@ class TyrePointsFileTest {
     void aLawAndPointsTogetherAreRefusedAtTheLawKey() {
         ObjectNode tree = Fixtures.with(Fixtures.with(withPoints(), "front.tyre.frictionAtNominalLoad", "1.2"),
                 "front.tyre.corneringStiffnessPeakLoadRatio", "2");
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(tree)).isInstanceOf(VehicleFileException.class)
+        assertThatThrownBy(() -> VehicleLoader.fromTree(tree)).isInstanceOf(VehicleFileException.class)
                 .hasMessageContaining("front.tyre.frictionAtNominalLoad cannot be given together with "
                         + "peakFrictionByLoad")
                 .hasMessageContaining("front.tyre.corneringStiffnessPeakLoadRatio cannot be given together with "
@@ -69,26 +70,26 @@ class TyrePointsFileTest {
     @Test
     void pointsThatCannotMakeACurveAreRefusedPointByPoint() {
         ObjectNode twoPoints = Fixtures.with(withPoints(), "front.tyre.peakFrictionByLoad[2]", null);
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(twoPoints))
+        assertThatThrownBy(() -> VehicleLoader.fromTree(twoPoints))
                 .hasMessageContaining("front.tyre.peakFrictionByLoad has 2 entries: must have 3 to 50");
         ObjectNode backwards = Fixtures.with(withPoints(), "front.tyre.peakFrictionByLoad[2]",
                 "{\"loadN\": 3000, \"peakFriction\": 1.1}");
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(backwards))
+        assertThatThrownBy(() -> VehicleLoader.fromTree(backwards))
                 .hasMessageContaining("front.tyre.peakFrictionByLoad[2].loadN = 3000 N: loads must increase");
         ObjectNode negative = Fixtures.with(withPoints(), "front.tyre.corneringStiffnessByLoad[1]",
                 "{\"loadN\": 4000, \"corneringStiffnessNPerDeg\": -5}");
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(negative))
+        assertThatThrownBy(() -> VehicleLoader.fromTree(negative))
                 .hasMessageContaining("front.tyre.corneringStiffnessByLoad[1].corneringStiffnessNPerDeg = -5 N/deg");
         ObjectNode notANumber = Fixtures.with(withPoints(), "front.tyre.peakFrictionByLoad[0]",
                 "{\"loadN\": 2000, \"peakFriction\": \"high\"}");
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(notANumber))
+        assertThatThrownBy(() -> VehicleLoader.fromTree(notANumber))
                 .hasMessageContaining("front.tyre.peakFrictionByLoad[0].peakFriction = \"high\": must be a number");
     }
 
     @Test
     void theNewKeysInAVersionOneFileAreRefusedAskingForVersionTwo() {
         ObjectNode tree = Fixtures.with(withPoints(), "version", "1");
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(tree))
+        assertThatThrownBy(() -> VehicleLoader.fromTree(tree))
                 .hasMessageContaining("front.tyre.peakFrictionByLoad needs file version 2");
     }
 
@@ -96,7 +97,7 @@ class TyrePointsFileTest {
     void camberOutOfRangeIsRefusedWithItsRange() {
         ObjectNode tree = Fixtures.with(Fixtures.with(Fixtures.testVehicleTree(), "version", "2"),
                 "rear.tyre.camberForPeakGripDeg", "-25");
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(tree))
+        assertThatThrownBy(() -> VehicleLoader.fromTree(tree))
                 .hasMessageContaining("rear.tyre.camberForPeakGripDeg = -25 deg: must be between -10 and 10 deg");
     }
 }

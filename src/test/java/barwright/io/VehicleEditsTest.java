@@ -1,5 +1,6 @@
 package barwright.io;
 
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.junit.jupiter.api.Test;
 
@@ -13,11 +14,11 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 class VehicleEditsTest {
     @Test
     void aVariantKeepsUnknownKeysAndChangesWhatItNames() throws Exception {
-        VehicleDocument document = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json"));
+        VehicleDocument document = VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json"));
         var tree = document.editableTree();
         tree.put("myOwnKey", "kept");
-        VehicleDocument withKey = VehicleFileReader.fromTree(tree);
-        VehicleDocument changed = VehicleEdits.withEdits(withKey, List.of("rear.bar.selectedArm=3",
+        VehicleDocument withKey = VehicleLoader.fromTree(tree);
+        VehicleDocument changed = VehicleLoader.withEdits(withKey, List.of("rear.bar.selectedArm=3",
                 "front.bar.armLengthsMm[0]=185", "rear.bar.material={\"name\": \"spring steel\"}"));
         assertThat(changed.tree().path("myOwnKey").asText()).isEqualTo("kept");
         assertThat(changed.vehicle().rear().bar().selectedArm()).isEqualTo(3);
@@ -27,20 +28,20 @@ class VehicleEditsTest {
 
     @Test
     void aBadValueIsRefusedWithItsKeyPath() throws Exception {
-        VehicleDocument document = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json"));
-        assertThatThrownBy(() -> VehicleEdits.withEdits(document, List.of("front.bar.section.outerDiameterMm=500")))
+        VehicleDocument document = VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json"));
+        assertThatThrownBy(() -> VehicleLoader.withEdits(document, List.of("front.bar.section.outerDiameterMm=500")))
                 .isInstanceOfSatisfying(VehicleFileException.class, refused -> assertThat(refused.problems())
                         .extracting(Problem::path).contains("front.bar.section.outerDiameterMm"));
-        assertThatThrownBy(() -> VehicleEdits.withEdits(document, List.of("front.bar.armLengthsMm[7]=200")))
+        assertThatThrownBy(() -> VehicleLoader.withEdits(document, List.of("front.bar.armLengthsMm[7]=200")))
                 .hasMessageContaining("names no entry");
-        assertThatThrownBy(() -> VehicleEdits.withEdits(document, List.of("no equals sign")))
+        assertThatThrownBy(() -> VehicleLoader.withEdits(document, List.of("no equals sign")))
                 .hasMessageContaining("key.path=value");
     }
 
     @Test
     void aKeyThatChangesNothingIsRefusedWithTheNearestKey() throws Exception {
-        VehicleDocument document = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json"));
-        assertThatThrownBy(() -> VehicleEdits.withEdits(document, List.of("front.trakMm=2000")))
+        VehicleDocument document = VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json"));
+        assertThatThrownBy(() -> VehicleLoader.withEdits(document, List.of("front.trakMm=2000")))
                 .isInstanceOfSatisfying(VehicleFileException.class, refused -> assertThat(refused.problems())
                         .extracting(Problem::path).containsExactly("front.trakMm"))
                 .hasMessageContaining("did you mean front.trackMm?");
@@ -53,17 +54,17 @@ class VehicleEditsTest {
     @Test
     void anOptionalKeyTheFileLeftOutIsAccepted() throws Exception {
         // a key the file does not have but the program reads changes the car: not a typo
-        var tree = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json")).editableTree();
+        var tree = VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json")).editableTree();
         ((ObjectNode) tree.get("vehicle")).remove("chassisTorsionalStiffnessNmPerDeg");
-        VehicleDocument without = VehicleFileReader.fromTree(tree);
-        VehicleDocument with = VehicleEdits.withEdits(without, List.of("vehicle.chassisTorsionalStiffnessNmPerDeg=20000"));
+        VehicleDocument without = VehicleLoader.fromTree(tree);
+        VehicleDocument with = VehicleLoader.withEdits(without, List.of("vehicle.chassisTorsionalStiffnessNmPerDeg=20000"));
         assertThat(with.vehicle().chassisTorsionalStiffness()).isNotNull();
     }
 
     @Test
     void aMalformedKeyPathIsRefusedInWords() throws Exception {
-        VehicleDocument document = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json"));
-        assertThatThrownBy(() -> VehicleEdits.withEdits(document, List.of("front..trackMm=1")))
+        VehicleDocument document = VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json"));
+        assertThatThrownBy(() -> VehicleLoader.withEdits(document, List.of("front..trackMm=1")))
                 .hasMessageContaining("front..trackMm is not a key path: keys joined by dots");
     }
 

@@ -1,5 +1,6 @@
 package barwright.io;
 
+import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.MaterialLibrary;
 import barwright.model.TubeSection;
@@ -18,13 +19,13 @@ class VehicleFileReaderTest {
     private static final double DEG = Math.PI / 180;
 
     private static VehicleDocument read(ObjectNode tree) throws VehicleFileException {
-        return VehicleFileReader.parse(Fixtures.text(tree).getBytes(StandardCharsets.UTF_8));
+        return VehicleLoader.parse(Fixtures.text(tree).getBytes(StandardCharsets.UTF_8));
     }
 
     @Test
     void keysInFileUnitsBecomeSi() throws Exception {
         // files.md: units are in the key names (mm, N/mm, GPa, MPa, N·m/deg); the core holds SI (model.md)
-        Vehicle car = VehicleFileReader.parse(Fixtures.testVehicleText().getBytes(StandardCharsets.UTF_8)).vehicle();
+        Vehicle car = VehicleLoader.parse(Fixtures.testVehicleText().getBytes(StandardCharsets.UTF_8)).vehicle();
         assertThat(car.mass()).isEqualTo(1050);
         assertThat(car.frontMassFraction()).isEqualTo(0.62);
         assertThat(car.cgHeight()).isCloseTo(0.5, within(1e-15));
@@ -83,14 +84,14 @@ class VehicleFileReaderTest {
         VehicleDocument document = read(Fixtures.testVehicleTree());
         ObjectNode edit = document.editableTree();
         ((ObjectNode) edit.get("front")).put("springRateNPerMm", 80);
-        VehicleDocument edited = VehicleFileReader.fromTree(edit);
+        VehicleDocument edited = VehicleLoader.fromTree(edit);
         assertThat(edited.vehicle().front().springRate()).isCloseTo(80e3, within(1e-9));
         // the open document is untouched by the edit
         assertThat(document.tree().get("front").get("springRateNPerMm").asDouble()).isEqualTo(55);
         assertThat(document.vehicle().front().springRate()).isCloseTo(55e3, within(1e-9));
         // a failed edit leaves nothing half-loaded: the exception is all there is
         ((ObjectNode) edit.get("front")).put("springRateNPerMm", -1);
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(edit)).isInstanceOf(VehicleFileException.class)
+        assertThatThrownBy(() -> VehicleLoader.fromTree(edit)).isInstanceOf(VehicleFileException.class)
                 .satisfies(e -> assertThat(((VehicleFileException) e).problems())
                         .extracting(Problem::path).containsExactly("front.springRateNPerMm"));
     }
@@ -105,7 +106,7 @@ class VehicleFileReaderTest {
     @Test
     void bytesOverFourMegabytesAreRefused() {
         byte[] big = new byte[(int) VehicleFileReader.MAX_BYTES + 1];
-        assertThatThrownBy(() -> VehicleFileReader.parse(big)).isInstanceOf(VehicleFileException.class)
+        assertThatThrownBy(() -> VehicleLoader.parse(big)).isInstanceOf(VehicleFileException.class)
                 .hasMessageContaining("larger than 4 MB");
     }
 }

@@ -1,5 +1,6 @@
 package barwright.io;
 
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.junit.jupiter.api.Test;
@@ -27,10 +28,10 @@ class VehicleFileWriterTest {
         ObjectNode tree = Fixtures.with(Fixtures.testVehicleTree(), "workshopNote", "\"re-check links after the race\"");
         tree = Fixtures.with(tree, "front.tyre.supplierCode", "{\"compound\": \"R7\", \"batch\": [3, 4]}");
         Path original = Fixtures.write(directory, "car.json", Fixtures.text(tree));
-        VehicleDocument document = VehicleFileReader.read(original);
+        VehicleDocument document = VehicleLoader.read(original);
         Path saved = directory.resolve("saved.json");
         VehicleFileWriter.save(document, saved);
-        JsonNode reread = VehicleFileReader.read(saved).tree();
+        JsonNode reread = VehicleLoader.read(saved).tree();
         assertThat(reread.get("workshopNote").asText()).isEqualTo("re-check links after the race");
         assertThat(reread.at("/front/tyre/supplierCode/compound").asText()).isEqualTo("R7");
         assertThat(reread.at("/front/tyre/supplierCode/batch/1").asInt()).isEqualTo(4);
@@ -41,7 +42,7 @@ class VehicleFileWriterTest {
     void savedTextIsTheTreePrettyPrinted() throws Exception {
         String text = VehicleFileWriter.toJson(Fixtures.testVehicleTree());
         assertThat(text).endsWith("\n").contains("\n  \"format\" : \"barwright.vehicle\"");
-        assertThat(VehicleFileReader.parse(text.getBytes(StandardCharsets.UTF_8)).tree())
+        assertThat(VehicleLoader.parse(text.getBytes(StandardCharsets.UTF_8)).tree())
                 .isEqualTo(Fixtures.testVehicleTree());
     }
 
@@ -49,7 +50,7 @@ class VehicleFileWriterTest {
     void aSaveIntoADirectoryThatCannotBeWrittenLeavesTheOldFileIntact() throws Exception {
         Path locked = Files.createDirectory(directory.resolve("locked"));
         Path target = Fixtures.write(locked, "car.json", "the old file\n");
-        VehicleDocument document = VehicleFileReader.parse(Fixtures.testVehicleText().getBytes(StandardCharsets.UTF_8));
+        VehicleDocument document = VehicleLoader.parse(Fixtures.testVehicleText().getBytes(StandardCharsets.UTF_8));
         DirectoryLock lock = DirectoryLock.lock(locked);
         try {
             assertThatThrownBy(() -> VehicleFileWriter.save(document, target)).isInstanceOf(IOException.class);
@@ -65,7 +66,7 @@ class VehicleFileWriterTest {
         // the target is a directory with something in it: the temporary file is written, the move fails
         Path target = Files.createDirectory(directory.resolve("car.json"));
         Fixtures.write(target, "inside.txt", "keep me");
-        VehicleDocument document = VehicleFileReader.parse(Fixtures.testVehicleText().getBytes(StandardCharsets.UTF_8));
+        VehicleDocument document = VehicleLoader.parse(Fixtures.testVehicleText().getBytes(StandardCharsets.UTF_8));
         assertThatThrownBy(() -> VehicleFileWriter.save(document, target)).isInstanceOf(IOException.class);
         assertThat(Files.readString(target.resolve("inside.txt"))).isEqualTo("keep me");
         assertThat(filesIn(directory)).containsExactly("car.json");
@@ -74,9 +75,9 @@ class VehicleFileWriterTest {
     @Test
     void aSaveReplacesTheOldFileWhole() throws Exception {
         Path target = Fixtures.write(directory, "car.json", "x".repeat(100_000));
-        VehicleDocument document = VehicleFileReader.parse(Fixtures.testVehicleText().getBytes(StandardCharsets.UTF_8));
+        VehicleDocument document = VehicleLoader.parse(Fixtures.testVehicleText().getBytes(StandardCharsets.UTF_8));
         VehicleFileWriter.save(document, target);
-        assertThat(VehicleFileReader.read(target).tree()).isEqualTo(document.tree());
+        assertThat(VehicleLoader.read(target).tree()).isEqualTo(document.tree());
         assertThat(filesIn(directory)).containsExactly("car.json");
     }
 

@@ -3,7 +3,7 @@ package barwright.measure;
 import barwright.io.RateCalibrationKeys;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.model.RateCalibration;
@@ -31,7 +31,7 @@ class RateCalibrationTest {
 
     private static VehicleDocument fixture() throws Exception {
         try (InputStream in = RateCalibrationTest.class.getResourceAsStream("/barwright/io/test-vehicle.json")) {
-            return VehicleFileReader.parse(in.readAllBytes());
+            return VehicleLoader.parse(in.readAllBytes());
         }
     }
 
@@ -64,7 +64,7 @@ class RateCalibrationTest {
         VehicleDocument document = fixture();
         ObjectNode tree = document.editableTree();
         RateCalibrationKeys.put((ObjectNode) tree.path("front").path("bar"), MEASURED);
-        VehicleDocument again = VehicleFileReader.fromTree(tree);
+        VehicleDocument again = VehicleLoader.fromTree(tree);
         assertThat(again.vehicle().front().bar().rateCalibration()).isEqualTo(MEASURED);
         AnalysisResult result = VehicleAnalysis.analyse(again.vehicle());
         JsonNode report = ReportJson.of(result);
@@ -79,7 +79,7 @@ class RateCalibrationTest {
         ObjectNode calibration = ((ObjectNode) tree.path("front").path("bar")).putObject("rateCalibration");
         calibration.put("effectiveRateFactor", 3.5);
         calibration.put("measuredOn", "30/11/2026");
-        assertThatThrownBy(() -> VehicleFileReader.fromTree(tree)).isInstanceOf(VehicleFileException.class)
+        assertThatThrownBy(() -> VehicleLoader.fromTree(tree)).isInstanceOf(VehicleFileException.class)
                 .satisfies(e -> assertThat(((VehicleFileException) e).problems().toString())
                         .contains("front.bar.rateCalibration.effectiveRateFactor")
                         .contains("front.bar.rateCalibration.measuredOn"));

@@ -1,6 +1,6 @@
 package barwright.physics;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.Axle;
 import barwright.model.AxlePosition;
 import barwright.model.LiveAxleWatts;
@@ -24,7 +24,7 @@ class LinkageAnalysisTest {
     private static final double SAME = 1e-9;
 
     private static Vehicle sample(String name) throws Exception {
-        return VehicleFileReader.read(Path.of("sample-vehicles", name + ".json")).vehicle();
+        return VehicleLoader.read(Path.of("sample-vehicles", name + ".json")).vehicle();
     }
 
     /** The same car with each linkage taken away and its static roll centre typed in instead. */

@@ -4,6 +4,7 @@ import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
 import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
+import barwright.loading.VehicleLoader;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.report.ReportJson;
@@ -44,7 +45,7 @@ class RandomValidCarPropertyTest {
             long seed = FIRST_SEED + i;
             VehicleDocument document;
             try {
-                document = VehicleFileReader.fromTree(car(new Random(seed)));
+                document = VehicleLoader.fromTree(car(new Random(seed)));
             } catch (VehicleFileException refused) {
                 // only the one cross-key rule (bushing span within the torsion length) can refuse a car drawn
                 // inside every range; that is kept out by construction, so any refusal is a failure here

@@ -10,7 +10,8 @@ import static org.assertj.core.api.Assertions.within;
 
 /**
  * Camber (model.md 8.2): no loss at the best camber and the same loss either side of it; no thrust at zero
- * camber; J670's sense of the thrust; the curve's peak unchanged by the thrust. Checked against the definitions
+ * camber; J670's sense of the thrust (from memory: docs/validation.md, "Suspension linkages, camber and tyres
+ * from data"); the curve's peak unchanged by the thrust. Checked against the definitions
  * and small-angle limits, not by restating the code.
  */
 class TyreCamberTest {

@@ -12,7 +12,8 @@ import static org.assertj.core.api.Assertions.withinPercentage;
 /**
  * The tyre of model.md 8: load-sensitive friction, load-dependent cornering stiffness and the Magic Formula
  * (Pacejka, Tyre and Vehicle Dynamics: F_y = D sin(C atan(B x - E (B x - atan B x))), peak D, slope at the
- * origin B C D). Expected values from those formulas and trigonometric identities worked in the tests.
+ * origin B C D; from memory: docs/validation.md, "Formulas named beside tests"). Expected values from those
+ * formulas and trigonometric identities worked in the tests.
  */
 class TyreModelTest {
     private static final Tyre TYRE = TestCars.tyre(); // F_z0 3500 N, mu0 1.2, s -0.15, k_c 16, p 2, C 1.3, E -0.5

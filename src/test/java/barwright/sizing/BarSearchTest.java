@@ -1,7 +1,7 @@
 package barwright.sizing;
 
-import barwright.io.VehicleEdits;
 import barwright.io.VehicleDocument;
+import barwright.loading.VehicleLoader;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
@@ -52,7 +52,7 @@ class BarSearchTest {
         SizingResult result = BarSearch.run(document.vehicle(), request, Progress.NONE);
         assertThat(result.candidates()).isNotEmpty();
         for (Candidate candidate : result.candidates()) {
-            AnalysisResult analysed = VehicleAnalysis.analyse(VehicleEdits.withBars(document, candidate.settings()).vehicle());
+            AnalysisResult analysed = VehicleAnalysis.analyse(VehicleLoader.withBars(document, candidate.settings()).vehicle());
             SetupFigures listed = candidate.figures();
             assertThat(listed.frontLoadTransferShare()).isCloseTo(analysed.frontLoadTransferShare(),
                     within(SAME_ARITHMETIC));
@@ -93,7 +93,7 @@ class BarSearchTest {
                     BarChoice choice = new BarChoice(AxlePosition.FRONT, MATERIALS.get(m), sizes.get(s), hole);
                     AnalysisResult analysed;
                     try {
-                        analysed = VehicleAnalysis.analyse(VehicleEdits.withBars(document, List.of(choice.setting())).vehicle());
+                        analysed = VehicleAnalysis.analyse(VehicleLoader.withBars(document, List.of(choice.setting())).vehicle());
                     } catch (ImpossibleVehicleException unstable) {
                         continue;
                     }
@@ -143,7 +143,7 @@ class BarSearchTest {
                                 new BarChoice(AxlePosition.REAR, MaterialLibrary.SPRING_STEEL, rear, rearHole)),
                                 new SetupEvaluator(document.vehicle()).figures(), 0);
                         AnalysisResult analysed = VehicleAnalysis.analyse(
-                                VehicleEdits.withBars(document, pair.settings()).vehicle());
+                                VehicleLoader.withBars(document, pair.settings()).vehicle());
                         if (analysed.front().bar().safetyFactor() < 1.5 || analysed.rear().bar().safetyFactor() < 1.5) {
                             continue;
                         }

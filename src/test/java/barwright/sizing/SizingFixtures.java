@@ -1,7 +1,7 @@
 package barwright.sizing;
 
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.BarSection;
 import barwright.model.SolidSection;
 import barwright.model.TubeSection;
@@ -16,11 +16,11 @@ public final class SizingFixtures {
     }
 
     public static VehicleDocument hatchback() throws Exception {
-        return VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json"));
+        return VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json"));
     }
 
     public static VehicleDocument sample(String name) throws Exception {
-        return VehicleFileReader.read(Path.of("sample-vehicles/" + name));
+        return VehicleLoader.read(Path.of("sample-vehicles/" + name));
     }
 
     /** A small catalogue: a few solids and tubes, enough to brute-force. */

@@ -18,7 +18,7 @@ import static org.assertj.core.api.Assertions.within;
 /**
  * Tubes of equal rate: each rate and mass recomputed here from the formulas themselves, Castigliano's link
  * compliance of model.md 2 and mass = density x area x (L + 2 a_max) of model.md 1 (areas and moments of a
- * circle and an annulus, Roark's Formulas for Stress and Strain).
+ * circle and an annulus, Roark's Formulas for Stress and Strain; docs/validation.md, "Sections and torsion").
  */
 class TubeEquivalentsTest {
     private static final double E = 207e9;

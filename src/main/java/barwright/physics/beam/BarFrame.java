@@ -12,6 +12,7 @@ import barwright.solver.frame.Vector3;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * A meshed bar as a frame: its supports and its link loads.
@@ -192,7 +193,7 @@ public final class BarFrame {
                     + "rising together, so it is no anti-roll bar; point both arms the same way");
         }
         if (Math.abs(left - right) > MAX_LEVER_ARM_DIFFERENCE * meanLeverArm()) {
-            throw new IllegalArgumentException(String.format(java.util.Locale.ROOT, "the link points sit at "
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "the link points sit at "
                     + "unequal lever arms about the bushing axis (left %s, right %s, %.0f %% apart; at most %.0f %% "
                     + "is modelled): such a bar also resists both wheels rising together, which this model "
                     + "leaves out", LengthText.of(left), LengthText.of(right),

@@ -2,8 +2,8 @@ package barwright.report.dynamics;
 
 import barwright.physics.dynamics.RollState;
 import barwright.physics.dynamics.TransientResult;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.List;
@@ -26,9 +26,7 @@ public final class TransientJson {
     }
 
     public static ObjectNode of(TransientResult result) {
-        ObjectNode node = JsonNodeFactory.instance.objectNode();
-        node.put("format", FORMAT);
-        node.put("version", VERSION);
+        ObjectNode node = OutputDocument.start(FORMAT, VERSION);
         number(node, "rollNaturalFrequencyHz", result.modes().naturalFrequency());
         number(node, "rollDampingRatio", result.modes().dampingRatio());
         number(node, "steadyRollDeg", toDegrees(result.steadyRoll()));

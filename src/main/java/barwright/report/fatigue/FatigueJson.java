@@ -2,6 +2,7 @@ package barwright.report.fatigue;
 
 import barwright.physics.fatigue.FatigueResult;
 import barwright.physics.fatigue.StressCycle;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -24,9 +25,7 @@ public final class FatigueJson {
 
     /** @param results by key ("front", "rear" or "history"), in order */
     public static ObjectNode of(Map<String, FatigueResult> results) {
-        ObjectNode root = JsonNodeFactory.instance.objectNode();
-        root.put("format", FORMAT);
-        root.put("version", VERSION);
+        ObjectNode root = OutputDocument.start(FORMAT, VERSION);
         results.forEach((key, result) -> root.set(key, bar(result)));
         return root;
     }

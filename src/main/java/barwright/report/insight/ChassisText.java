@@ -4,6 +4,7 @@ import barwright.insight.ChassisPoint;
 import barwright.insight.ChassisStudy;
 import barwright.insight.ChassisStudyResult;
 import barwright.report.Cautions;
+import barwright.report.heading.TextHeading;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
@@ -25,8 +26,7 @@ public final class ChassisText {
 
     public String of(ChassisStudyResult study) {
         StringBuilder out = new StringBuilder();
-        out.append("Barwright chassis stiffness: ").append(study.vehicleName()).append("   (units: ")
-                .append(units.label()).append(")\n");
+        out.append(TextHeading.of("chassis stiffness", study.vehicleName(), units)).append('\n');
         out.append("Total roll stiffness of the axles (with tyres): ").append(stiffness(study.totalRollStiffness()))
                 .append(". Bar change studied: ").append(study.barChange()).append(".\n");
         out.append("Rigid chassis: ").append(figures(study.rigid())).append(".\n");

@@ -12,6 +12,7 @@ import barwright.insight.SensitivityResult;
 import barwright.insight.SensitivityRow;
 import barwright.model.TurnDirection;
 import barwright.report.ReportJson;
+import barwright.report.heading.OutputDocument;
 import barwright.units.DisplayUnit;
 import barwright.units.UnitSystem;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -158,9 +159,7 @@ public final class InsightJson {
     }
 
     private static ObjectNode header(String format, String vehicleName) {
-        ObjectNode node = NODES.objectNode();
-        node.put("format", format);
-        node.put("version", VERSION);
+        ObjectNode node = OutputDocument.start(format, VERSION);
         node.put("vehicle", vehicleName);
         return node;
     }

@@ -6,6 +6,7 @@ import barwright.insight.SensitivityResult;
 import barwright.insight.SensitivityRow;
 import barwright.report.Cautions;
 import barwright.report.ReportJson;
+import barwright.report.heading.TextHeading;
 import barwright.units.DisplayUnit;
 import barwright.units.Figures;
 import barwright.units.Quantity;
@@ -25,8 +26,7 @@ public final class SensitivityText {
 
     public String of(SensitivityResult result) {
         StringBuilder out = new StringBuilder();
-        out.append("Barwright sensitivity: ").append(result.vehicleName()).append("   (units: ")
-                .append(units.label()).append(")\n");
+        out.append(TextHeading.of("sensitivity", result.vehicleName(), units)).append('\n');
         out.append("Each change is made to the car and the changed car analysed in full; the figures are the "
                 + "differences, for the turn to the ").append(result.turn().word()).append(".\n");
         out.append("The car as it is: ").append(base(result.base())).append("\n\n");

@@ -4,6 +4,7 @@ import barwright.model.AxlePosition;
 import barwright.physics.linkage.InstantCentre;
 import barwright.physics.linkage.RollState;
 import barwright.physics.linkage.TravelState;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -23,9 +24,7 @@ public final class GeometryJson {
     }
 
     public static ObjectNode of(GeometryTables front, GeometryTables rear) {
-        ObjectNode root = NODES.objectNode();
-        root.put("format", FORMAT);
-        root.put("version", VERSION);
+        ObjectNode root = OutputDocument.start(FORMAT, VERSION);
         root.set(key(front.position()), axle(front));
         root.set(key(rear.position()), axle(rear));
         return root;

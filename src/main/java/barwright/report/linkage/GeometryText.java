@@ -11,6 +11,7 @@ import barwright.physics.linkage.InstantCentre;
 import barwright.physics.linkage.RollState;
 import barwright.physics.linkage.TravelState;
 import barwright.report.Cautions;
+import barwright.report.heading.TextHeading;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
@@ -27,8 +28,7 @@ public final class GeometryText {
 
     public String of(String vehicleName, GeometryTables front, GeometryTables rear) {
         StringBuilder out = new StringBuilder();
-        out.append("Barwright suspension geometry: ").append(vehicleName).append("   (units: ").append(units.label())
-                .append(")\n");
+        out.append(TextHeading.of("suspension geometry", vehicleName, units)).append('\n');
         out.append("Roll: positive for a left turn, the body leaning right, the right wheel in bump. Camber: SAE J670, "
                 + "top leaning away from the car's centre positive.\n");
         axle(out, "Front", front);

@@ -11,6 +11,8 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
 
 /**
  * The linkage figures of the analysis report, per axle (docs/file-format.md, analysis report): the roll-centre
@@ -71,8 +73,8 @@ public final class LinkageFigures {
         rows.add(new String[] {"outside / inside camber at limit", text(AxlePosition.FRONT, f -> cambers(f, units)),
                 text(AxlePosition.REAR, f -> cambers(f, units))});
         rows.add(new String[] {"camber change per deg of roll", text(AxlePosition.FRONT, f -> String.format(
-                java.util.Locale.ROOT, "%.2f deg", f.camberChangePerRoll() + 0.0)), text(AxlePosition.REAR,
-                f -> String.format(java.util.Locale.ROOT, "%.2f deg", f.camberChangePerRoll() + 0.0))});
+                Locale.ROOT, "%.2f deg", f.camberChangePerRoll() + 0.0)), text(AxlePosition.REAR,
+                f -> String.format(Locale.ROOT, "%.2f deg", f.camberChangePerRoll() + 0.0))});
         return rows;
     }
 
@@ -92,7 +94,7 @@ public final class LinkageFigures {
         return result.vehicle().axle(position).hasLinkage() ? value + " (linkage)" : value + " (typed)";
     }
 
-    private String text(AxlePosition position, java.util.function.Function<LinkageAtLimit, String> shown) {
+    private String text(AxlePosition position, Function<LinkageAtLimit, String> shown) {
         LinkageAtLimit figures = atLimit[position.ordinal()];
         if (figures == null) {
             return refused[position.ordinal()] == null ? "-" : "see note";

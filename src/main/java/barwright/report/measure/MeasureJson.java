@@ -4,8 +4,8 @@ import barwright.measure.BarRateFit;
 import barwright.measure.CentreOfMassHeight;
 import barwright.measure.CornerWeights;
 import barwright.measure.MotionRatioFit;
+import barwright.report.heading.OutputDocument;
 import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.List;
@@ -17,7 +17,6 @@ import static barwright.units.Conversions.toMillimetres;
 public final class MeasureJson {
     public static final String FORMAT = "barwright.measure";
     public static final int VERSION = 1;
-    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     private MeasureJson() {
     }
@@ -87,9 +86,7 @@ public final class MeasureJson {
     }
 
     private static ObjectNode header(String measurement) {
-        ObjectNode node = NODES.objectNode();
-        node.put("format", FORMAT);
-        node.put("version", VERSION);
+        ObjectNode node = OutputDocument.start(FORMAT, VERSION);
         node.put("measurement", measurement);
         return node;
     }

@@ -4,6 +4,7 @@ import barwright.measure.BarRateFit;
 import barwright.measure.CentreOfMassHeight;
 import barwright.measure.CornerWeights;
 import barwright.measure.MotionRatioFit;
+import barwright.measure.MotionRatioMeasurement;
 import barwright.measure.TiltMethod;
 import barwright.units.Figures;
 import barwright.units.Quantity;
@@ -45,7 +46,7 @@ public final class MeasureText {
         if (fit.cosineCorrection() != 1) {
             out.append(String.format(Locale.ROOT, "  cosine correction applied   %.4f%n", fit.cosineCorrection()));
         }
-        String trend = Math.abs(fit.ratioChangePer100Mm()) < barwright.measure.MotionRatioMeasurement.NOTABLE_CHANGE_PER_100_MM
+        String trend = Math.abs(fit.ratioChangePer100Mm()) < MotionRatioMeasurement.NOTABLE_CHANGE_PER_100_MM
                 ? "about constant" : fit.ratioChangePer100Mm() > 0 ? "rising in bump" : "falling in bump";
         out.append(String.format(Locale.ROOT, "  change per 100 mm of travel %+.4f (%s)%n", fit.ratioChangePer100Mm(),
                 trend));

@@ -5,6 +5,7 @@ import org.apache.pdfbox.pdmodel.font.PDType1Font;
 import org.apache.pdfbox.pdmodel.font.Standard14Fonts;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.util.Map;
 
 /**
@@ -57,7 +58,7 @@ final class PdfCanvas {
         try {
             return font.getStringWidth(printable(text, font)) / 1000 * size;
         } catch (IOException impossible) {
-            throw new java.io.UncheckedIOException(impossible);
+            throw new UncheckedIOException(impossible);
         }
     }
 

@@ -1,10 +1,10 @@
 package barwright.report.sizing;
 
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.FigureRow;
 import barwright.units.UnitSystem;
 import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 /**
@@ -14,15 +14,12 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 public final class ComparisonJson {
     public static final String FORMAT = "barwright.comparison";
     public static final int VERSION = 1;
-    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     private ComparisonJson() {
     }
 
     public static ObjectNode of(Comparison comparison) {
-        ObjectNode root = NODES.objectNode();
-        root.put("format", FORMAT);
-        root.put("version", VERSION);
+        ObjectNode root = OutputDocument.start(FORMAT, VERSION);
         ArrayNode names = root.putArray("configurations");
         comparison.configurations().forEach(c -> names.add(c.name()));
         ArrayNode balances = root.putArray("limitBalance");

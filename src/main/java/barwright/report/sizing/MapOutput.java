@@ -1,13 +1,13 @@
 package barwright.report.sizing;
 
 import barwright.report.ReportJson;
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.BarFigures;
 import barwright.sizing.SetupFigures;
 import barwright.sizing.map.AdjustmentMap;
 import barwright.sizing.map.BarOption;
 import barwright.sizing.map.MapCell;
 import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
@@ -29,15 +29,12 @@ public final class MapOutput {
             "rearSelectedArm", "rearArmMm", "current", "frontLoadTransferShare", "rollGradientDegPerG", "limitG",
             "limitBalance", "frontInsideLiftG", "rearInsideLiftG", "frontLiftsBeforeLimit", "rearLiftsBeforeLimit",
             "frontBarSafetyFactor", "rearBarSafetyFactor", "problem");
-    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     private MapOutput() {
     }
 
     public static ObjectNode json(AdjustmentMap map) {
-        ObjectNode root = NODES.objectNode();
-        root.put("format", FORMAT);
-        root.put("version", VERSION);
+        ObjectNode root = OutputDocument.start(FORMAT, VERSION);
         root.put("vehicle", map.vehicle().name());
         root.put("rows", map.rows().size());
         root.put("columns", map.columns().size());

@@ -1,5 +1,6 @@
 package barwright.report.sizing;
 
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.preload.CornerLoads;
 import barwright.sizing.preload.LinkPreload;
 import barwright.sizing.preload.PreloadResult;
@@ -20,9 +21,7 @@ public final class PreloadJson {
     }
 
     public static ObjectNode of(PreloadResult result) {
-        ObjectNode root = JsonNodeFactory.instance.objectNode();
-        root.put("format", FORMAT);
-        root.put("version", VERSION);
+        ObjectNode root = OutputDocument.start(FORMAT, VERSION);
         root.put("axle", result.axle().key());
         root.put("gainingDiagonal", result.diagonal().gains());
         root.put("linkChangeMm", toMillimetres(result.linkChange()));

@@ -1,9 +1,10 @@
 package barwright.report.sizing;
 
+import barwright.io.BarNodes;
 import barwright.report.ReportJson;
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.BarChoice;
 import barwright.sizing.BarFigures;
-import barwright.io.BarNodes;
 import barwright.sizing.Candidate;
 import barwright.sizing.ExactSolution;
 import barwright.sizing.Rejection;
@@ -39,9 +40,7 @@ public final class SizingJson {
      */
     public static ObjectNode of(SizingRequest request, SizingResult result, ExactSolution exactSolid,
                                 ExactSolution exactWall) {
-        ObjectNode root = NODES.objectNode();
-        root.put("format", FORMAT);
-        root.put("version", VERSION);
+        ObjectNode root = OutputDocument.start(FORMAT, VERSION);
         ArrayNode axles = root.putArray("axles");
         request.axles().forEach(axle -> axles.add(axle.key()));
         ReportJson.putOrNull(root, "targetFrontLoadTransferShare", Double.isNaN(result.targetShare()) ? null

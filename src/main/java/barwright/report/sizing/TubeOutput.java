@@ -1,13 +1,13 @@
 package barwright.report.sizing;
 
-import barwright.physics.bar.BarResult;
 import barwright.io.BarNodes;
+import barwright.physics.bar.BarResult;
+import barwright.report.heading.OutputDocument;
 import barwright.sizing.TubeEquivalents;
 import barwright.sizing.TubeMatch;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
 import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.util.Locale;
@@ -28,9 +28,7 @@ public final class TubeOutput {
     }
 
     public static ObjectNode json(TubeEquivalents.Comparison comparison) {
-        ObjectNode root = JsonNodeFactory.instance.objectNode();
-        root.put("format", FORMAT);
-        root.put("version", VERSION);
+        ObjectNode root = OutputDocument.start(FORMAT, VERSION);
         BarResult solid = comparison.solid();
         ObjectNode solidNode = root.putObject("solid");
         solidNode.set(MATERIAL, BarNodes.material(comparison.solidBar().material()));

@@ -1,11 +1,11 @@
 package barwright.report.tyre;
 
 import barwright.io.TyreWriter;
+import barwright.report.heading.OutputDocument;
 import barwright.tyrefit.CurveFit;
 import barwright.tyrefit.MagicFormula;
 import barwright.tyrefit.TyreFit;
 import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
@@ -22,9 +22,7 @@ public final class TyreFitJson {
     }
 
     public static ObjectNode of(TyreFit fit) {
-        ObjectNode root = JsonNodeFactory.instance.objectNode();
-        root.put("format", FORMAT);
-        root.put("version", VERSION);
+        ObjectNode root = OutputDocument.start(FORMAT, VERSION);
         root.set("tyre", TyreWriter.toJson(fit.tyre()));
         ObjectNode details = root.putObject("fit");
         details.put("method", "Magic Formula per curve by Levenberg-Marquardt least squares (model.md 8.3)");

@@ -4,7 +4,7 @@ import barwright.io.FileWriteException;
 import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.ui.chart.ChartExport;
 import barwright.ui.chart.ResultChart;
 import barwright.ui.document.OpenDocument;
@@ -68,7 +68,7 @@ public final class FileCommands {
     public boolean load(Path file) {
         VehicleDocument read;
         try {
-            read = VehicleFileReader.read(file);
+            read = VehicleLoader.read(file);
         } catch (VehicleFileException refused) {
             if (!Files.exists(file)) {
                 recent.remove(file);

@@ -5,8 +5,8 @@ import barwright.io.KeyPath;
 import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
@@ -19,7 +19,7 @@ import java.util.function.Consumer;
 /**
  * The vehicle file a person has open: its JSON tree (which may hold a value the core refuses while they
  * type), the last tree the core accepted, the undo history, the file it came from and whether it has
- * unsaved changes. Edits go by key path; every edit is validated with {@link VehicleFileReader#fromTree}.
+ * unsaved changes. Edits go by key path; every edit is validated with {@link VehicleLoader#fromTree}.
  * Lives on the event thread.
  */
 public final class OpenDocument {
@@ -130,7 +130,7 @@ public final class OpenDocument {
     private void setTree(ObjectNode next) {
         tree = next;
         try {
-            lastValid = VehicleFileReader.fromTree(next);
+            lastValid = VehicleLoader.fromTree(next);
             problems = List.of();
         } catch (VehicleFileException refused) {
             problems = refused.problems();

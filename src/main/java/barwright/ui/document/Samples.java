@@ -2,7 +2,7 @@ package barwright.ui.document;
 
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -34,7 +34,7 @@ public final class Samples {
             if (in == null) {
                 throw new IllegalStateException("the built-in sample " + sample.resource() + " is missing");
             }
-            return VehicleFileReader.parse(in.readAllBytes());
+            return VehicleLoader.parse(in.readAllBytes());
         } catch (IOException unreadable) {
             throw new UncheckedIOException(unreadable);
         } catch (VehicleFileException refused) {

@@ -3,7 +3,7 @@ package barwright.ui.insight;
 import barwright.insight.LiftEnvelope;
 import barwright.insight.LiftEnvelopeResult;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.insight.EnvelopeText;
 import barwright.ui.chart.EnvelopeChart;
@@ -96,7 +96,7 @@ public final class EnvelopeView extends JPanel {
 
     private static LiftEnvelopeResult envelopeOf(Path file) {
         try {
-            return LiftEnvelope.of(VehicleAnalysis.analyse(VehicleFileReader.read(file).vehicle()));
+            return LiftEnvelope.of(VehicleAnalysis.analyse(VehicleLoader.read(file).vehicle()));
         } catch (VehicleFileException refused) {
             throw new IllegalArgumentException("the file was refused: " + refused.problems().get(0), refused);
         }

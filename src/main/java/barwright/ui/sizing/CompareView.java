@@ -3,10 +3,9 @@ package barwright.ui.sizing;
 import barwright.io.Problem;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.Vehicle;
 import barwright.physics.curve.Chart;
-import barwright.io.VehicleEdits;
 import barwright.sizing.compare.Comparison;
 import barwright.sizing.compare.Configuration;
 import barwright.sizing.compare.FigureRow;
@@ -139,7 +138,7 @@ final class CompareView extends JPanel {
             return;
         }
         try {
-            VehicleDocument read = VehicleFileReader.read(file);
+            VehicleDocument read = VehicleLoader.read(file);
             add(new Entry(file.getFileName().toString(), "file " + file, read.vehicle()));
         } catch (VehicleFileException refused) {
             context.dialogs().showError("Cannot compare " + file.getFileName(), "The file was not added:\n\n"
@@ -155,7 +154,7 @@ final class CompareView extends JPanel {
             return;
         }
         try {
-            VehicleDocument changed = VehicleEdits.withEdits(context.currentCar(), edits);
+            VehicleDocument changed = VehicleLoader.withEdits(context.currentCar(), edits);
             add(new Entry(nextName("variant"), "the open car with " + String.join("; ", edits), changed.vehicle()));
         } catch (VehicleFileException refused) {
             work.say("The variant is refused: " + refused.problems().stream().map(Problem::toString)

@@ -1,7 +1,7 @@
 package barwright.ui.workshop;
 
 import barwright.io.VehicleDocument;
-import barwright.io.WorkshopEdits;
+import barwright.io.VehicleEdits;
 import barwright.measure.CentreOfMassHeight;
 import barwright.measure.MeasurementException;
 import barwright.measure.TiltMethod;
@@ -178,7 +178,7 @@ public final class CentreOfMassPage extends JPanel {
             return;
         }
         double height = current.height();
-        CheckedEdit.apply(document, tree -> WorkshopEdits.putCentreOfMassHeight(tree, height), this)
+        CheckedEdit.apply(document, tree -> VehicleEdits.putCentreOfMassHeight(tree, height), this)
                 .ifPresent(result::why);
     }
 

@@ -1,7 +1,7 @@
 package barwright.ui.workshop;
 
 import barwright.io.VehicleFileException;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.ui.document.OpenDocument;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
@@ -18,7 +18,7 @@ final class CheckedEdit {
         ObjectNode next = (ObjectNode) document.tree().deepCopy();
         change.accept(next);
         try {
-            VehicleFileReader.fromTree(next);
+            VehicleLoader.fromTree(next);
         } catch (VehicleFileException refused) {
             return Optional.of("Not put into the car: " + String.join("; ", refused.problems().stream()
                     .map(Object::toString).toList()));

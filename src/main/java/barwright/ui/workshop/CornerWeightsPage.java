@@ -1,11 +1,12 @@
 package barwright.ui.workshop;
 
 import barwright.io.VehicleDocument;
-import barwright.io.WorkshopEdits;
+import barwright.io.VehicleEdits;
 import barwright.measure.CornerWeighing;
 import barwright.measure.CornerWeights;
 import barwright.measure.MeasurementException;
 import barwright.model.AxlePosition;
+import barwright.model.CornerMasses;
 import barwright.report.measure.MeasureText;
 import barwright.sizing.preload.GainingDiagonal;
 import barwright.ui.document.OpenDocument;
@@ -160,8 +161,8 @@ public final class CornerWeightsPage extends JPanel {
             return;
         }
         CornerWeights readings = current;
-        CheckedEdit.apply(document, tree -> WorkshopEdits.putCornerMasses(tree, readings.leftFront(),
-                readings.rightFront(), readings.leftRear(), readings.rightRear()), this).ifPresent(result::why);
+        CheckedEdit.apply(document, tree -> VehicleEdits.putCornerMasses(tree, new CornerMasses(
+                readings.leftFront(), readings.rightFront(), readings.leftRear(), readings.rightRear())), this).ifPresent(result::why);
     }
 
     /** @return the text shown (tests) */

@@ -45,7 +45,7 @@ class BeamBarProfileTest {
     @Test
     void eachStationCombinesBendingAndTorsionByVonMises() {
         // von Mises for a normal stress with a shear: sqrt(sigma^2 + 3 tau^2) (Shigley's Mechanical
-        // Engineering Design, ch. 5); in the tube of a plain U-bar the torque is F a everywhere (statics)
+        // Engineering Design, ch. 5, from memory: docs/validation.md, "Formulas named beside tests"); in the tube of a plain U-bar the torque is F a everywhere (statics)
         AntiRollBar bar = uBar(SECTION, 1.0, 0.8, 0.25, 0.04);
         BeamBarSolution solution = BeamBar.solve(bar, TRAVEL);
         double tubeShear = solution.result().linkForce() * 0.25 * SECTION.outerRadius() / SECTION.polarMoment();

@@ -1,7 +1,7 @@
 package barwright.physics.beam;
 
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.BarCentreline;
 import barwright.model.Point3;
@@ -113,7 +113,7 @@ class ShapedSampleVehicleTest {
     }
 
     private static Vehicle read(Path file) throws Exception {
-        VehicleDocument document = VehicleFileReader.read(file);
+        VehicleDocument document = VehicleLoader.read(file);
         return document.vehicle();
     }
 }

@@ -32,7 +32,8 @@ class UnequalLeverArmTest {
      * bent, and each arm is a cantilever from its corner. Link forces with no moment about the axis,
      * F_L = a_R / a and F_R = a_L / a (a the mean arm, opposite senses), twist the tube by the torque
      * T = a_L a_R / a. The strain energy of the unit load pattern (Castigliano's theorem with the usual
-     * energies U = T^2 L / 2GJ of torsion and F^2 l^3 / 6EI of a tip-loaded cantilever, from memory) gives the
+     * energies U = T^2 L / 2GJ of torsion and F^2 l^3 / 6EI of a tip-loaded cantilever, from memory:
+     * docs/validation.md, "Formulas named beside tests") gives the
      * relative travel measure of model.md 2 as c = 2U = T^2 L / GJ + F_L^2 a_L^3 / 3EI + F_R^2 a_R^3 / 3EI,
      * and k_link = 1 / c. Straight elements and loads at nodes: the cubic elements are exact, so the
      * tolerance is round-off, 1e-9 relative.

@@ -1,6 +1,6 @@
 package barwright.physics.curve;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.physics.AnalysisResult;
 import barwright.physics.HandlingPoint;
 import barwright.physics.TurnResult;
@@ -21,7 +21,7 @@ class CorneringCurvesTest {
 
     private static TurnResult leftTurn(String sample) throws Exception {
         AnalysisResult result = VehicleAnalysis.analyse(
-                VehicleFileReader.read(Path.of("sample-vehicles", sample + ".json")).vehicle());
+                VehicleLoader.read(Path.of("sample-vehicles", sample + ".json")).vehicle());
         return result.leftTurn();
     }
 
@@ -35,7 +35,7 @@ class CorneringCurvesTest {
     @ValueSource(strings = {"club-hatchback", "road-saloon", "sprint-roadster"})
     void the_wheel_loads_add_up_to_the_weight_at_every_point(String sample) throws Exception {
         AnalysisResult result = VehicleAnalysis.analyse(
-                VehicleFileReader.read(Path.of("sample-vehicles", sample + ".json")).vehicle());
+                VehicleLoader.read(Path.of("sample-vehicles", sample + ".json")).vehicle());
         CorneringCurves curves = CorneringCurves.sample(result.leftTurn(), POINTS);
         double weight = result.masses().mass() * STANDARD_GRAVITY;
         for (int p = 0; p < POINTS; p++) {

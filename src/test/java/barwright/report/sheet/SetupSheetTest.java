@@ -1,5 +1,6 @@
 package barwright.report.sheet;
 
+import barwright.loading.VehicleLoader;
 import barwright.physics.VehicleAnalysis;
 import barwright.units.UnitSystem;
 import org.apache.pdfbox.Loader;
@@ -16,7 +17,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 class SetupSheetTest {
     @Test
     void theSheetHoldsTheFiguresTheMapAndTheCautions() throws Exception {
-        var document = barwright.io.VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json"));
+        var document = barwright.loading.VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json"));
         var result = VehicleAnalysis.analyse(document.vehicle());
         byte[] pdf = SetupSheet.toPdf(SetupSheet.contentFor(result, LocalDate.of(2025, 6, 1), UnitSystem.SI));
         try (PDDocument parsed = Loader.loadPDF(pdf)) {

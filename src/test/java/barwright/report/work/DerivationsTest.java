@@ -1,6 +1,6 @@
 package barwright.report.work;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
@@ -41,7 +41,7 @@ class DerivationsTest {
     private static AnalysisResult analyse(Consumer<ObjectNode> change) throws Exception {
         ObjectNode tree = sample();
         change.accept(tree);
-        return VehicleAnalysis.analyse(VehicleFileReader.fromTree(tree).vehicle());
+        return VehicleAnalysis.analyse(VehicleLoader.fromTree(tree).vehicle());
     }
 
     private static double value(Derivation derivation, String symbol) {

@@ -1,6 +1,6 @@
 package barwright.report.work;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
@@ -23,7 +23,7 @@ import static org.assertj.core.api.Assertions.within;
 class TyrePointsWorkTest {
     @Test
     void theLimitOfACarOnFittedTyresIsWorkedFromThePointsAndCloses() throws Exception {
-        AnalysisResult result = VehicleAnalysis.analyse(VehicleFileReader.parse(Files.readAllBytes(
+        AnalysisResult result = VehicleAnalysis.analyse(VehicleLoader.parse(Files.readAllBytes(
                 Path.of("sample-vehicles/club-hatchback-fitted-tyres.json"))).vehicle());
         Derivation limit = Derivations.of(result, KeyFigure.of(KeyFigure.Kind.LIMIT, TurnDirection.LEFT));
         String text = WorkText.of(limit, UnitSystem.SI, Locale.ROOT);

@@ -40,7 +40,8 @@ class FrameClosedFormTest {
         double rigidity = ROUND_BAR.youngsModulus() * ROUND_BAR.secondMomentY();
         // cantilever with an end load: tip deflection P L^3 / (3 E I), tip slope P L^2 / (2 E I)
         // (Gere & Goodno, Mechanics of Materials, appendix table of cantilever deflections; Roark's
-        // Formulas for Stress and Strain, table of beam deflections, cantilever with end load)
+        // Formulas for Stress and Strain, table of beam deflections, cantilever with end load; from memory:
+        // docs/validation.md, "Formulas named beside tests")
         double deflection = LOAD * Math.pow(length, 3) / (3 * rigidity);
         double slope = LOAD * length * length / (2 * rigidity);
         Vector3 tipMove = solution.translation(tip);

@@ -5,7 +5,10 @@ import java.util.List;
 
 /** Small frames for the tests: straight members cut into elements, with invented but steel-like values. */
 final class FrameFixtures {
-    /** A steel-like round bar, 25 mm solid: E = 205 GPa, G = 80 GPa (typical handbook values for steel). */
+    /**
+     * A steel-like round bar, 25 mm solid: E = 205 GPa, G = 80 GPa (typical handbook values for steel, from memory:
+     * docs/validation.md, "Formulas named beside tests").
+     */
     static final SectionProperties ROUND_BAR = SectionProperties.round(205e9, 80e9,
             Math.PI * 0.025 * 0.025 / 4, Math.PI * Math.pow(0.025, 4) / 64, Math.PI * Math.pow(0.025, 4) / 32);
 

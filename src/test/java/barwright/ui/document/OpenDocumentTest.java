@@ -1,7 +1,7 @@
 package barwright.ui.document;
 
 import barwright.io.KeyPath;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import com.fasterxml.jackson.databind.node.DoubleNode;
 import com.fasterxml.jackson.databind.node.IntNode;
 import com.fasterxml.jackson.databind.node.TextNode;
@@ -79,7 +79,7 @@ class OpenDocumentTest {
         assertThat(document.isDirty()).isFalse();
         assertThat(document.file()).isEqualTo(file);
         assertThat(document.displayName()).isEqualTo("car.json");
-        assertThat(VehicleFileReader.read(file).tree()).isEqualTo(document.tree());
+        assertThat(VehicleLoader.read(file).tree()).isEqualTo(document.tree());
         try (var leftovers = Files.list(folder)) {
             assertThat(leftovers).containsExactly(file); // the temporary file of the atomic save is gone
         }

@@ -6,6 +6,7 @@ import barwright.insight.LiftEnvelopeResult;
 import barwright.insight.Sensitivity;
 import barwright.insight.SensitivityResult;
 import barwright.insight.Wheel;
+import barwright.loading.VehicleLoader;
 import barwright.model.Vehicle;
 import barwright.physics.VehicleAnalysis;
 import barwright.report.insight.EnvelopeText;
@@ -119,7 +120,7 @@ class InsightViewsTest {
         Path saloon = Path.of("sample-vehicles", "road-saloon.json");
         GuiActionRunner.execute(() -> panel.envelope().compareWith(saloon));
         InsightWindows.settle(window, panel);
-        LiftEnvelopeResult expected = coreEnvelope(barwright.io.VehicleFileReader.read(saloon).vehicle());
+        LiftEnvelopeResult expected = coreEnvelope(barwright.loading.VehicleLoader.read(saloon).vehicle());
         assertThat(series(EnvelopeChart.COMPARED_FRONT).getX(0).doubleValue()).isEqualTo(
                 -expected.boundary(Wheel.LEFT_FRONT).points().get(0).lateralAcceleration() / STANDARD_GRAVITY);
         assertThat(frame.label("insight.envelope.compareNote").text()).contains("Road saloon");

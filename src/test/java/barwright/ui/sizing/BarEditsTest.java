@@ -1,6 +1,6 @@
 package barwright.ui.sizing;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
 import barwright.model.MaterialLibrary;
@@ -27,9 +27,9 @@ import static org.assertj.core.api.Assertions.assertThat;
  */
 class BarEditsTest {
     private static OpenDocument hatchback() throws Exception {
-        ObjectNode tree = VehicleFileReader.read(Path.of("sample-vehicles/club-hatchback.json")).editableTree();
+        ObjectNode tree = VehicleLoader.read(Path.of("sample-vehicles/club-hatchback.json")).editableTree();
         tree.put("workshopNote", "kept by every edit"); // a key the program does not know
-        return new OpenDocument(VehicleFileReader.fromTree(tree), null, "test");
+        return new OpenDocument(VehicleLoader.fromTree(tree), null, "test");
     }
 
     @Test

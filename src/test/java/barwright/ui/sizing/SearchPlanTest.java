@@ -1,7 +1,7 @@
 package barwright.ui.sizing;
 
 import barwright.io.VehicleDocument;
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
@@ -32,7 +32,7 @@ import static org.assertj.core.api.Assertions.within;
  */
 class SearchPlanTest {
     private static VehicleDocument car(String file) throws Exception {
-        return VehicleFileReader.read(Path.of("sample-vehicles", file));
+        return VehicleLoader.read(Path.of("sample-vehicles", file));
     }
 
     private static SearchSettings settings(List<AxlePosition> axles, SearchSettings.ShareAim aim, Double value,

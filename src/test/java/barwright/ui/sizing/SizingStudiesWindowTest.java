@@ -1,6 +1,5 @@
 package barwright.ui.sizing;
 
-import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
 import barwright.model.AxlePosition;
 import barwright.model.MaterialLibrary;
@@ -8,6 +7,7 @@ import barwright.model.Vehicle;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
 import barwright.io.BarNodes;
+import barwright.loading.VehicleLoader;
 import barwright.sizing.TubeEquivalents;
 import barwright.sizing.TubeMatch;
 import barwright.sizing.catalogue.Catalogues;
@@ -104,7 +104,7 @@ class SizingStudiesWindowTest {
     void setups_compare_side_by_side_with_the_full_analysis_and_their_differences(@TempDir Path folder)
             throws Exception {
         Path saved = folder.resolve("roadster.json");
-        VehicleFileWriter.save(VehicleFileReader.read(Path.of("sample-vehicles/sprint-roadster.json")), saved);
+        VehicleFileWriter.save(VehicleLoader.read(Path.of("sample-vehicles/sprint-roadster.json")), saved);
         DialogFixture sizing = fixture.openTool("Compare setups…");
         sizing.textBox("compare.name").deleteText().enterText("as it is");
         sizing.button("compare.addOpen").click();
@@ -121,7 +121,7 @@ class SizingStudiesWindowTest {
         AnalysisResult asItIs = VehicleAnalysis.analyse(car);
         AnalysisResult variant = VehicleAnalysis.analyse(car.withAxle(AxlePosition.REAR,
                 car.rear().withBar(car.rear().bar().withSelectedArm(0))));
-        AnalysisResult roadster = VehicleAnalysis.analyse(VehicleFileReader.read(saved).vehicle());
+        AnalysisResult roadster = VehicleAnalysis.analyse(VehicleLoader.read(saved).vehicle());
         JTableFixture table = sizing.table("compare.figures");
         int share = row(table, "front share of load transfer");
         assertThat(table.columnIndexFor("rear hole 1")).isEqualTo(2);

@@ -1,6 +1,6 @@
 package barwright.ui.window;
 
-import barwright.io.VehicleFileReader;
+import barwright.loading.VehicleLoader;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
 import barwright.ui.document.Samples;
@@ -46,7 +46,7 @@ class FigureMeaningWindowTest {
     @Test
     void bothRollGradientsAreShownLabelledWithTheCoresValues() throws Exception {
         AnalysisResult expected = VehicleAnalysis.analyse(
-                VehicleFileReader.fromTree(Samples.load(Samples.CLUB_HATCHBACK).editableTree()).vehicle());
+                VehicleLoader.fromTree(Samples.load(Samples.CLUB_HATCHBACK).editableTree()).vehicle());
         double perG = STANDARD_GRAVITY / RADIANS_PER_DEGREE;
         assertThat(number(fixture.figure("figure.rollGradient"))).isCloseTo(expected.rollGradient() * perG,
                 within(0.005));

@@ -1,7 +1,7 @@
 package barwright.ui.window;
 
-import barwright.io.VehicleFileReader;
 import barwright.io.VehicleFileWriter;
+import barwright.loading.VehicleLoader;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
 import barwright.ui.action.Dialogs;
@@ -51,7 +51,7 @@ class MainWindowTest {
     private static AnalysisResult coreAnalysis(java.util.function.Consumer<ObjectNode> change) throws Exception {
         ObjectNode tree = Samples.load(Samples.CLUB_HATCHBACK).editableTree();
         change.accept(tree);
-        return VehicleAnalysis.analyse(VehicleFileReader.fromTree(tree).vehicle());
+        return VehicleAnalysis.analyse(VehicleLoader.fromTree(tree).vehicle());
     }
 
     private boolean bannerShowing() {
@@ -164,7 +164,7 @@ class MainWindowTest {
 
         assertThat(fixture.dialogs.unsavedQuestions).isEqualTo(1);
         assertThat(documentTree()).isEqualTo(saved);
-        assertThat(VehicleFileReader.read(file).tree()).isEqualTo(saved);
+        assertThat(VehicleLoader.read(file).tree()).isEqualTo(saved);
         assertThat(fixture.frame.textBox("front.bar.section.outerDiameterMm").text()).isEqualTo("23.5");
         assertThat(fixture.window.getTitle()).contains("hatchback.json").doesNotContain("unsaved");
     }
