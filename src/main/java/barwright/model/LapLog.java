@@ -54,20 +54,49 @@ public record LapLog(double[] times, double[] lateral, double[] longitudinal, do
     }
 
     private double interpolate(double[] values, double time) {
-        if (time <= times[0]) {
-            return values[0];
-        }
+        return valueAt(values, intervalOf(time, -1), time);
+    }
+
+    /**
+     * @param time  (s)
+     * @param guess an interval index to try first (the last call's, when walking along the log), or -1
+     * @return the index i of the sample interval [t_i, t_i+1] that holds the time, clamped to the log's first and
+     *     last intervals; from a good guess this costs no search
+     */
+    public int intervalOf(double time, int guess) {
         int last = times.length - 1;
+        if (guess >= 0 && guess < last && times[guess] <= time && time <= times[guess + 1]) {
+            return guess;
+        }
+        if (guess >= 0 && guess + 1 < last && times[guess + 1] <= time && time <= times[guess + 2]) {
+            return guess + 1;
+        }
+        if (time <= times[0]) {
+            return 0;
+        }
         if (time >= times[last]) {
-            return values[last];
+            return last - 1;
         }
         int found = Arrays.binarySearch(times, time);
-        if (found >= 0) {
-            return values[found];
+        return found >= 0 ? Math.min(found, last - 1) : -found - 2;
+    }
+
+    /**
+     * @param values   one of this log's columns
+     * @param interval the index of the interval holding the time, from {@link #intervalOf}
+     * @return the column at a time: linear inside the log, held before its first and after its last sample (the
+     *     interval's end values outside it)
+     */
+    public double valueAt(double[] values, int interval, double time) {
+        double lower = times[interval];
+        double upper = times[interval + 1];
+        if (time <= lower) {
+            return values[interval];
         }
-        int upper = -found - 1;
-        int lower = upper - 1;
-        double share = (time - times[lower]) / (times[upper] - times[lower]);
-        return values[lower] + share * (values[upper] - values[lower]);
+        if (time >= upper) {
+            return values[interval + 1];
+        }
+        double share = (time - lower) / (upper - lower);
+        return values[interval] + share * (values[interval + 1] - values[interval]);
     }
 }

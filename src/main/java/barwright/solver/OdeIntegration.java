@@ -1,10 +1,14 @@
 package barwright.solver;
 
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
-import org.apache.commons.math3.ode.FirstOrderIntegrator;
 import org.apache.commons.math3.ode.events.EventHandler;
+import org.apache.commons.math3.ode.nonstiff.AdaptiveStepsizeIntegrator;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 import org.apache.commons.math3.ode.sampling.StepHandler;
+import org.apache.commons.math3.ode.sampling.StepInterpolator;
+
+import java.util.Arrays;
 
 /**
  * An explicit ODE integration with error control: Commons Math's Dormand-Prince 8(5,3) with the accuracy,
@@ -55,34 +59,118 @@ public record OdeIntegration(double minimumStep, double maximumStep, double abso
      */
     public double integrate(FirstOrderDifferentialEquations equations, double start, double[] state, double end,
                             StepHandler steps, Iterable<Event> events) {
-        FirstOrderIntegrator integrator = new DormandPrince853Integrator(minimumStep, maximumStep,
-                absoluteTolerance, relativeTolerance);
-        integrator.setMaxEvaluations(maximumEvaluations);
-        if (steps != null) {
-            integrator.addStepHandler(steps);
+        return integrate(equations, start, state, new double[0], end, null, steps, events);
+    }
+
+    /**
+     * Integrates from start to end in pieces that end at the breakpoints inside (start, end), the corners of an
+     * input, so that no step straddles one and the error control never fights a kink it cannot resolve. One
+     * integrator serves every piece, with its step handler (told of the start once, and of the last step only at
+     * the end) and its events; each piece's first step is tried at the piece's length, no wider than the step
+     * ceiling, and the evaluation budget counts over the whole run. A breakpoint closer than the smallest step to
+     * the previous one is passed over. The state array holds the initial state and receives the final one.
+     *
+     * @param breakpoints        times (s), increasing; those outside (start, end) are passed over
+     * @param absoluteTolerances each state variable's allowed local error, in its own unit; null for the scalar
+     *                           {@link #absoluteTolerance} on every one
+     * @return the time reached: the end, or the time of a stopping event
+     */
+    public double integrate(FirstOrderDifferentialEquations equations, double start, double[] state,
+                            double[] breakpoints, double end, double[] absoluteTolerances, StepHandler steps,
+                            Iterable<Event> events) {
+        AdaptiveStepsizeIntegrator integrator;
+        if (absoluteTolerances == null) {
+            integrator = new DormandPrince853Integrator(minimumStep, maximumStep, absoluteTolerance,
+                    relativeTolerance);
+        } else {
+            double[] relative = new double[absoluteTolerances.length];
+            Arrays.fill(relative, relativeTolerance);
+            integrator = new DormandPrince853Integrator(minimumStep, maximumStep, absoluteTolerances.clone(),
+                    relative);
         }
+        Pieces pieces = new Pieces(steps);
         for (Event event : events) {
-            integrator.addEventHandler(new EventHandler() {
-                @Override
-                public void init(double t0, double[] y0, double t) {
-                }
-
-                @Override
-                public double g(double t, double[] y) {
-                    return event.value(t, y);
-                }
-
-                @Override
-                public Action eventOccurred(double t, double[] y, boolean increasing) {
-                    // a kink of the right-hand side: restart the step there so the error control stays honest
-                    return event.occurred(t, y, increasing) ? Action.STOP : Action.RESET_DERIVATIVES;
-                }
-
-                @Override
-                public void resetState(double t, double[] y) {
-                }
-            }, maximumStep / 2, eventAccuracy, 100);
+            integrator.addEventHandler(handler(event, pieces), maximumStep / 2, eventAccuracy, 100);
         }
-        return integrator.integrate(equations, start, state, end, state);
+        if (steps != null) {
+            integrator.addStepHandler(pieces);
+        }
+        int used = 0;
+        double reached = start;
+        int next = 0;
+        while (reached < end && !pieces.stopped) {
+            while (next < breakpoints.length && breakpoints[next] < reached + minimumStep) {
+                next++;
+            }
+            double pieceEnd = next < breakpoints.length && breakpoints[next] < end - minimumStep
+                    ? breakpoints[next] : end;
+            pieces.last = pieceEnd == end;
+            if (used >= maximumEvaluations) {
+                throw new TooManyEvaluationsException(maximumEvaluations);
+            }
+            integrator.setMaxEvaluations(maximumEvaluations - used);
+            integrator.setInitialStepSize(Math.min(pieceEnd - reached, maximumStep));
+            double got = integrator.integrate(equations, reached, state, pieceEnd, state);
+            // unless an event stopped it, the integrator has reached the piece's end, even where it hands back a
+            // time an ulp short (it counts an event within an ulp of the end as the end)
+            reached = pieces.stopped ? got : pieceEnd;
+            used += integrator.getEvaluations();
+        }
+        return reached;
+    }
+
+    private static EventHandler handler(Event event, Pieces pieces) {
+        return new EventHandler() {
+            @Override
+            public void init(double t0, double[] y0, double t) {
+            }
+
+            @Override
+            public double g(double t, double[] y) {
+                return event.value(t, y);
+            }
+
+            @Override
+            public Action eventOccurred(double t, double[] y, boolean increasing) {
+                if (event.occurred(t, y, increasing)) {
+                    pieces.stopped = true;
+                    return Action.STOP;
+                }
+                // a kink of the right-hand side: restart the step there so the error control stays honest
+                return Action.RESET_DERIVATIVES;
+            }
+
+            @Override
+            public void resetState(double t, double[] y) {
+            }
+        };
+    }
+
+    /**
+     * Passes the steps of every piece to one handler as the steps of one run: told of the start once, and of
+     * the last step only at the end of the last piece (not at a stopping event).
+     */
+    private static final class Pieces implements StepHandler {
+        private final StepHandler steps;
+        private boolean started;
+        private boolean last;
+        private boolean stopped;
+
+        Pieces(StepHandler steps) {
+            this.steps = steps;
+        }
+
+        @Override
+        public void init(double t0, double[] y0, double t) {
+            if (!started) {
+                started = true;
+                steps.init(t0, y0, t);
+            }
+        }
+
+        @Override
+        public void handleStep(StepInterpolator interpolator, boolean isLast) {
+            steps.handleStep(interpolator, isLast && last && !stopped);
+        }
     }
 }

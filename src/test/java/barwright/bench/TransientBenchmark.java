@@ -23,7 +23,7 @@ import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 
 /**
- * The roll in motion (model.md 12): 3 s of a step response (target under 5 ms) and a 20-minute log at 50 Hz,
+ * The roll in motion (model.md 14): 3 s of a step response (target under 5 ms) and a 20-minute log at 50 Hz,
  * 60,000 samples, replayed (target under 1 s). The log is the shipped invented lap's a_y repeated with a
  * seeded jitter, invented data. Run:
  * {@code mvn -B -q test-compile exec:exec@bench -Dbench.args="TransientBenchmark -f 1 -wi 3 -i 5 -w 1 -r 1"}

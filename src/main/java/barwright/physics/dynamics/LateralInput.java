@@ -17,6 +17,22 @@ public interface LateralInput {
     double finestFeature();
 
     /**
+     * @return the times at which a_y or a_x has a corner or a jump (s), increasing; the integration restarts
+     *     at each, so its error control never straddles one. None by default (a smooth input).
+     */
+    default double[] breakpoints() {
+        return new double[0];
+    }
+
+    /**
+     * @return this input for one run on one thread: the same values, but it may remember where the last call
+     *     was to answer the next one faster. Itself by default.
+     */
+    default LateralInput forOneThread() {
+        return this;
+    }
+
+    /**
      * A step of a_y from 0 to a target, rising linearly over a rise time (0 for a true step).
      *
      * @param target   the held a_y (m/s^2)
@@ -40,6 +56,12 @@ public interface LateralInput {
         @Override
         public double finestFeature() {
             return riseTime > 0 ? riseTime : Double.POSITIVE_INFINITY;
+        }
+
+        /** @return the end of the rise, where a_y turns to held */
+        @Override
+        public double[] breakpoints() {
+            return riseTime > 0 ? new double[] {riseTime} : new double[0];
         }
     }
 

@@ -26,11 +26,22 @@ public final class RollModel {
     private final double rearInertia;
     private final Double chassisStiffness;
     private final MassProperties masses;
-    private final double cgHeight;
-    private final double wheelbase;
     private final int frontTyreIndex;
     private final int rearTyreIndex;
     private final int dimension;
+    // what does not change with time, computed once (the integrator evaluates the model some million times)
+    private final boolean rigid;
+    private final double sprungMass;
+    private final double gravityMoment;
+    private final double frontTrack;
+    private final double rearTrack;
+    private final double frontDirectPerAccel;
+    private final double rearDirectPerAccel;
+    private final double shiftPerLongitudinal;
+    private final double staticLeftFront;
+    private final double staticRightFront;
+    private final double staticLeftRear;
+    private final double staticRightRear;
 
     /**
      * @param rollInertiaAboutAxis I_xx + m_s h'^2 (kg m^2)
@@ -48,12 +59,24 @@ public final class RollModel {
         this.frontInertia = rollInertiaAboutAxis * frontSprungMass / masses.sprungMass();
         this.rearInertia = rollInertiaAboutAxis * rearSprungMass / masses.sprungMass();
         this.chassisStiffness = chassisStiffness;
-        this.cgHeight = cgHeight;
-        this.wheelbase = masses.cgToFrontAxle() + masses.cgToRearAxle();
         int next = chassisStiffness == null ? 2 : 4;
         frontTyreIndex = front.hasTyreState() ? next++ : -1;
         rearTyreIndex = rear.hasTyreState() ? next++ : -1;
         dimension = next;
+        rigid = chassisStiffness == null;
+        sprungMass = masses.sprungMass();
+        gravityMoment = sprungMass * STANDARD_GRAVITY * rollArm;
+        frontTrack = front.track();
+        rearTrack = rear.track();
+        frontDirectPerAccel = front.directTransferPerAccel() * frontTrack;
+        rearDirectPerAccel = rear.directTransferPerAccel() * rearTrack;
+        // a_x moves m a_x h / l from the front axle to the rear, half from each wheel (model.md 9)
+        shiftPerLongitudinal = masses.mass() * cgHeight / (masses.cgToFrontAxle() + masses.cgToRearAxle()) / 2;
+        MassProperties.StaticWheelLoads loads = masses.staticLoads();
+        staticLeftFront = loads.leftFront();
+        staticRightFront = loads.rightFront();
+        staticLeftRear = loads.leftRear();
+        staticRightRear = loads.rightRear();
     }
 
     /**
@@ -114,42 +137,63 @@ public final class RollModel {
         return frontInertia + rearInertia;
     }
 
-    double frontRoll(double[] y) {
-        return y[0];
+    /**
+     * The moments and loads at one instant, the post-lift rule applied: one run's scratch space, filled by
+     * {@link #evaluate} without allocating (the integrator asks for it some 20 times a step), and read at once.
+     */
+    static final class Evaluation {
+        double time;
+        double lateral;
+        double frontRoll;
+        double rearRoll;
+        /** The suspension moments passed to the body (N m), the post-lift rule applied. */
+        double frontMoment;
+        double rearMoment;
+        double frontTransfer;
+        double rearTransfer;
+        /** The static loads shifted by a_x (N): LF, RF, LR, RR. */
+        final double[] loads = new double[4];
+        /** Each wheel's load with both wheels of its axle down (N): where it crosses zero, that wheel lifts. */
+        final double[] liftMargins = new double[4];
+        /** What both wheels of a side can still hold against the moment reaching the ground (N m). */
+        double leftMargin;
+        double rightMargin;
+        double meanRoll;
+
+        /** @return the car at this instant, as a value */
+        RollState state() {
+            return new RollState(time, lateral, frontRoll, rearRoll, meanRoll, frontTransfer, rearTransfer,
+                    Math.max(0, loads[0] - frontTransfer), Math.max(0, loads[1] + frontTransfer),
+                    Math.max(0, loads[2] - rearTransfer), Math.max(0, loads[3] + rearTransfer));
+        }
     }
 
-    double rearRoll(double[] y) {
-        return chassisStiffness == null ? y[0] : y[2];
-    }
-
-    /** The moments and loads at one instant, the post-lift rule applied. */
-    record Forces(RollState state, double frontMoment, double rearMoment, double frontRawMoment,
-                  double rearRawMoment, double[] liftMargins, double leftMargin, double rightMargin) {
-    }
-
-    /** @return the suspension moments, transfers and wheel loads at a time and state */
-    Forces forces(double time, double[] y, LateralInput input) {
+    /** Fills an evaluation with the suspension moments, transfers and wheel loads at a time and state. */
+    void evaluate(double time, double[] y, LateralInput input, Evaluation out) {
         double accel = input.lateral(time);
-        double shift = masses.mass() * input.longitudinal(time) * cgHeight / wheelbase / 2;
-        MassProperties.StaticWheelLoads loads = masses.staticLoads();
-        double leftFront = loads.leftFront() - shift;
-        double rightFront = loads.rightFront() - shift;
-        double leftRear = loads.leftRear() + shift;
-        double rightRear = loads.rightRear() + shift;
+        double shift = shiftPerLongitudinal * input.longitudinal(time);
+        double[] loads = out.loads;
+        loads[0] = staticLeftFront - shift;
+        loads[1] = staticRightFront - shift;
+        loads[2] = staticLeftRear + shift;
+        loads[3] = staticRightRear + shift;
 
-        double frontRoll = frontRoll(y);
-        double rearRoll = rearRoll(y);
+        double frontRoll = y[0];
+        double rearRoll = rigid ? y[0] : y[2];
         double frontRate = y[1];
-        double rearRate = chassisStiffness == null ? y[1] : y[3];
+        double rearRate = rigid ? y[1] : y[3];
         double frontRaw = front.moment(frontRoll, frontRate, frontTyreIndex < 0 ? 0 : y[frontTyreIndex]);
         double rearRaw = rear.moment(rearRoll, rearRate, rearTyreIndex < 0 ? 0 : y[rearTyreIndex]);
-        double frontDirect = front.directTransferPerAccel() * accel * front.track();
-        double rearDirect = rear.directTransferPerAccel() * accel * rear.track();
+        double frontDirect = frontDirectPerAccel * accel;
+        double rearDirect = rearDirectPerAccel * accel;
         // transfer an axle would have with both wheels down (N), positive to the right wheels
-        double frontContact = (frontDirect + frontRaw) / front.track();
-        double rearContact = (rearDirect + rearRaw) / rear.track();
-        double[] margins = {leftFront - frontContact, rightFront + frontContact, leftRear - rearContact,
-                rightRear + rearContact};
+        double frontContact = (frontDirect + frontRaw) / frontTrack;
+        double rearContact = (rearDirect + rearRaw) / rearTrack;
+        double[] margins = out.liftMargins;
+        margins[0] = loads[0] - frontContact;
+        margins[1] = loads[1] + frontContact;
+        margins[2] = loads[2] - rearContact;
+        margins[3] = loads[3] + rearContact;
 
         // the steady model's post-lift rule: the lifted axle carries its inside wheel's static load, its
         // suspension moment no more than at the steady lift; the other axle takes the rest of the moment
@@ -160,26 +204,29 @@ public final class RollModel {
         double total = frontDirect + rearDirect;
         if (margins[0] <= 0 || margins[1] <= 0) {
             boolean left = margins[0] <= 0;
-            double inside = left ? leftFront : rightFront;
+            double inside = left ? loads[0] : loads[1];
             frontMoment = liftedMoment(front, frontRaw, inside, frontDirect, left);
             frontTransfer = left ? inside : -inside;
-            rearTransfer = (total + frontMoment + rearRaw - frontTransfer * front.track()) / rear.track();
+            rearTransfer = (total + frontMoment + rearRaw - frontTransfer * frontTrack) / rearTrack;
         } else if (margins[2] <= 0 || margins[3] <= 0) {
             boolean left = margins[2] <= 0;
-            double inside = left ? leftRear : rightRear;
+            double inside = left ? loads[2] : loads[3];
             rearMoment = liftedMoment(rear, rearRaw, inside, rearDirect, left);
             rearTransfer = left ? inside : -inside;
-            frontTransfer = (total + frontRaw + rearMoment - rearTransfer * rear.track()) / front.track();
+            frontTransfer = (total + frontRaw + rearMoment - rearTransfer * rearTrack) / frontTrack;
         }
         double ground = total + frontMoment + rearMoment;
-        // what both wheels of a side can still hold against the moment reaching the ground (N m)
-        double leftMargin = leftFront * front.track() + leftRear * rear.track() - ground;
-        double rightMargin = rightFront * front.track() + rightRear * rear.track() + ground;
-        double mean = (frontSprungMass * frontRoll + rearSprungMass * rearRoll) / masses.sprungMass();
-        RollState state = new RollState(time, accel, frontRoll, rearRoll, mean, frontTransfer, rearTransfer,
-                Math.max(0, leftFront - frontTransfer), Math.max(0, rightFront + frontTransfer),
-                Math.max(0, leftRear - rearTransfer), Math.max(0, rightRear + rearTransfer));
-        return new Forces(state, frontMoment, rearMoment, frontRaw, rearRaw, margins, leftMargin, rightMargin);
+        out.time = time;
+        out.lateral = accel;
+        out.frontRoll = frontRoll;
+        out.rearRoll = rearRoll;
+        out.frontMoment = frontMoment;
+        out.rearMoment = rearMoment;
+        out.frontTransfer = frontTransfer;
+        out.rearTransfer = rearTransfer;
+        out.leftMargin = loads[0] * frontTrack + loads[2] * rearTrack - ground;
+        out.rightMargin = loads[1] * frontTrack + loads[3] * rearTrack + ground;
+        out.meanRoll = (frontSprungMass * frontRoll + rearSprungMass * rearRoll) / sprungMass;
     }
 
     /**
@@ -201,33 +248,36 @@ public final class RollModel {
                 : Math.max(raw, -Math.max(steadyCap, insideMoment + direct));
     }
 
-    /** Writes dy/dt. */
+    /** Writes dy/dt (allocates its own scratch space: for occasional calls, such as the linearisation). */
     void derivatives(double time, double[] y, LateralInput input, double[] yDot) {
-        Forces forces = forces(time, y, input);
-        double accel = forces.state().lateral();
-        double gravity = STANDARD_GRAVITY;
-        double frontRoll = frontRoll(y);
-        double rearRoll = rearRoll(y);
-        if (chassisStiffness == null) {
-            double sprung = masses.sprungMass();
+        Evaluation evaluation = new Evaluation();
+        evaluate(time, y, input, evaluation);
+        derivatives(evaluation, y, yDot);
+    }
+
+    /** Writes dy/dt from an evaluation of the same state. */
+    void derivatives(Evaluation forces, double[] y, double[] yDot) {
+        double accel = forces.lateral;
+        double frontRoll = forces.frontRoll;
+        double rearRoll = forces.rearRoll;
+        if (rigid) {
             yDot[0] = y[1];
-            yDot[1] = (sprung * rollArm * accel + sprung * gravity * rollArm * frontRoll - forces.frontMoment()
-                    - forces.rearMoment()) / (frontInertia + rearInertia);
+            yDot[1] = (sprungMass * rollArm * accel + gravityMoment * frontRoll - forces.frontMoment
+                    - forces.rearMoment) / (frontInertia + rearInertia);
         } else {
             double twist = chassisStiffness * (frontRoll - rearRoll);
             yDot[0] = y[1];
-            yDot[1] = (frontSprungMass * rollArm * (accel + gravity * frontRoll) - forces.frontMoment() - twist)
-                    / frontInertia;
+            yDot[1] = (frontSprungMass * rollArm * (accel + STANDARD_GRAVITY * frontRoll) - forces.frontMoment
+                    - twist) / frontInertia;
             yDot[2] = y[3];
-            yDot[3] = (rearSprungMass * rollArm * (accel + gravity * rearRoll) - forces.rearMoment() + twist)
-                    / rearInertia;
+            yDot[3] = (rearSprungMass * rollArm * (accel + STANDARD_GRAVITY * rearRoll) - forces.rearMoment
+                    + twist) / rearInertia;
         }
         if (frontTyreIndex >= 0) {
             yDot[frontTyreIndex] = front.tyreRollRate(frontRoll, y[1], y[frontTyreIndex]);
         }
         if (rearTyreIndex >= 0) {
-            yDot[rearTyreIndex] = rear.tyreRollRate(rearRoll, chassisStiffness == null ? y[1] : y[3],
-                    y[rearTyreIndex]);
+            yDot[rearTyreIndex] = rear.tyreRollRate(rearRoll, rigid ? y[1] : y[3], y[rearTyreIndex]);
         }
     }
 

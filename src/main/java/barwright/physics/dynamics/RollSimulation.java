@@ -6,6 +6,7 @@ import org.apache.commons.math3.ode.sampling.StepHandler;
 import org.apache.commons.math3.ode.sampling.StepInterpolator;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -43,12 +44,14 @@ public final class RollSimulation {
     public static Run run(RollModel model, LateralInput input, double[] times, OdeIntegration integration) {
         double start = times[0];
         double end = times[times.length - 1];
+        LateralInput drive = input.forOneThread();
         OdeIntegration settings = integration.withMaximumStep(
                 Math.min(integration.maximumStep(), input.finestFeature()));
         double[] state = new double[model.dimension()];
         List<RollState> states = new ArrayList<>(times.length);
         double[] firstLift = {Double.NaN};
         double[] rollover = {Double.NaN};
+        RollModel.Evaluation stage = new RollModel.Evaluation();
         FirstOrderDifferentialEquations equations = new FirstOrderDifferentialEquations() {
             @Override
             public int getDimension() {
@@ -57,9 +60,11 @@ public final class RollSimulation {
 
             @Override
             public void computeDerivatives(double t, double[] y, double[] yDot) {
-                model.derivatives(t, y, input, yDot);
+                model.evaluate(t, y, drive, stage);
+                model.derivatives(stage, y, yDot);
             }
         };
+        RollModel.Evaluation recorded = new RollModel.Evaluation();
         StepHandler recorder = new StepHandler() {
             private int next;
 
@@ -71,20 +76,23 @@ public final class RollSimulation {
             @Override
             public void handleStep(StepInterpolator step, boolean isLast) {
                 double reached = step.getCurrentTime();
-                while (next < times.length && (times[next] <= reached || (isLast && times[next] <= reached))) {
+                // at the run's end the integrator may stop an ulp short of the last time: it is recorded too
+                while (next < times.length && (times[next] <= reached || isLast)) {
                     step.setInterpolatedTime(times[next]);
-                    states.add(model.forces(times[next], step.getInterpolatedState(), input).state());
+                    model.evaluate(times[next], step.getInterpolatedState(), drive, recorded);
+                    states.add(recorded.state());
                     next++;
                 }
             }
         };
+        Margins margins = new Margins(model, drive);
         List<OdeIntegration.Event> events = new ArrayList<>();
         for (int i = 0; i < 4; i++) {
             int wheel = i;
             events.add(new OdeIntegration.Event() {
                 @Override
                 public double value(double time, double[] y) {
-                    return model.forces(time, y, input).liftMargins()[wheel];
+                    return margins.at(time, y).liftMargins[wheel];
                 }
 
                 @Override
@@ -101,8 +109,8 @@ public final class RollSimulation {
             events.add(new OdeIntegration.Event() {
                 @Override
                 public double value(double time, double[] y) {
-                    RollModel.Forces forces = model.forces(time, y, input);
-                    return left ? forces.leftMargin() : forces.rightMargin();
+                    RollModel.Evaluation at = margins.at(time, y);
+                    return left ? at.leftMargin : at.rightMargin;
                 }
 
                 @Override
@@ -116,11 +124,71 @@ public final class RollSimulation {
             });
         }
         if (end > start) {
-            settings.integrate(equations, start, state, end, recorder, events);
+            settings.integrate(equations, start, state, input.breakpoints(), end, stateTolerances(model, settings),
+                    recorder, events);
         } else {
-            states.add(model.forces(start, state, input).state());
+            model.evaluate(start, state, drive, recorded);
+            states.add(recorded.state());
         }
         return new Run(states, firstLift[0], rollover[0]);
+    }
+
+    /**
+     * The six event functions read one evaluation of the model at each (time, state) the integrator checks:
+     * it asks all six at the same point, one after the other.
+     */
+    private static final class Margins {
+        private final RollModel model;
+        private final LateralInput drive;
+        private final RollModel.Evaluation evaluation = new RollModel.Evaluation();
+        private final double[] state;
+        private boolean filled;
+
+        Margins(RollModel model, LateralInput drive) {
+            this.model = model;
+            this.drive = drive;
+            this.state = new double[model.dimension()];
+        }
+
+        RollModel.Evaluation at(double time, double[] y) {
+            if (!filled || time != evaluation.time || !same(y)) {
+                model.evaluate(time, y, drive, evaluation);
+                System.arraycopy(y, 0, state, 0, state.length);
+                filled = true;
+            }
+            return evaluation;
+        }
+
+        private boolean same(double[] y) {
+            for (int i = 0; i < state.length; i++) {
+                if (y[i] != state[i]) {
+                    return false;
+                }
+            }
+            return true;
+        }
+    }
+
+    /**
+     * Each state variable's absolute tolerance: the settings' own for the rolls (rad), and for the rates (rad/s)
+     * that times the body's undamped roll frequency sqrt(K_net / I) (1/s), the size a rate has to a roll in the
+     * body's motion, so that the two weigh alike in the error control.
+     *
+     * @return the tolerances in the order of the state; null (the scalar tolerance) where the car has no
+     *     positive net roll stiffness
+     */
+    static double[] stateTolerances(RollModel model, OdeIntegration settings) {
+        double frequency = Math.sqrt(model.netRigidStiffness() / model.inertiaAboutAxis());
+        if (!(frequency > 0) || Double.isInfinite(frequency)) {
+            return null;
+        }
+        double[] tolerances = new double[model.dimension()];
+        Arrays.fill(tolerances, settings.absoluteTolerance());
+        tolerances[1] *= frequency;
+        if (!model.rigidChassis()) {
+            tolerances[3] *= frequency;
+        }
+        return tolerances;
     }
 
     /** @return evenly spaced times from 0 to the duration, both included (s) */

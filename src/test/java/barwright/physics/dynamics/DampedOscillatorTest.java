@@ -1,8 +1,5 @@
 package barwright.physics.dynamics;
 
-import barwright.model.Damper;
-import barwright.physics.MassProperties;
-import barwright.physics.TestCars;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -15,9 +12,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  * known in closed form. The closed forms (from memory, the standard second-order step response, as in any
  * vibrations text; not checked against a book here): omega_n = sqrt(K_net / I), zeta = C / (2 sqrt(K_net I)),
  * overshoot exp(-zeta pi / sqrt(1 - zeta^2)), peak time pi / (omega_n sqrt(1 - zeta^2)). C is derived here
- * independently of the code: each damper of coefficient c at motion ratio MR gives c MR^2 at the wheel, and two
- * wheels at t/2 from the centre give C = 2 c MR^2 (t/2)^2. Tolerance 0.5 % (the issue's): the run is
- * recorded every 1 ms, so the peak time is within 0.5 ms of the true one (under 0.5 % of a peak time above
+ * independently of the code ({@link LinearCar}): each damper of coefficient c at motion ratio MR gives c MR^2 at
+ * the wheel, and two wheels at t/2 from the centre give C = 2 c MR^2 (t/2)^2. Tolerance 0.5 % (the issue's): the
+ * run is recorded every 1 ms, so the peak time is within 0.5 ms of the true one (under 0.5 % of a peak time above
  * 0.1 s) and the peak value within (omega_n 0.5 ms)^2 / 2 relative, far below.
  */
 class DampedOscillatorTest {
@@ -26,24 +23,13 @@ class DampedOscillatorTest {
     @ParameterizedTest(name = "c = {0} N s/m, MR {1}")
     @CsvSource({"1500, 0.9", "3000, 0.8", "800, 1.0", "5000, 0.7"})
     void stepResponseIsTheClosedFormOscillator(double coefficient, double motionRatio) {
-        MassProperties masses = MassProperties.of(TestCars.clubCar());
-        double frontTrack = 1.46;
-        double rearTrack = 1.44;
-        double frontSuspension = 60e3;  // N m/rad, invented
-        double rearSuspension = 45e3;
-        double inertia = 350;           // kg m^2 about the roll axis, invented
-        RollModel model = new RollModel(
-                rigidTyreAxle(frontTrack, frontSuspension, coefficient, motionRatio),
-                rigidTyreAxle(rearTrack, rearSuspension, coefficient, motionRatio),
-                masses, inertia, null, 0.5);
+        LinearCar car = new LinearCar(coefficient, motionRatio);
+        RollModel model = car.model();
         double accel = 0.8 * STANDARD_GRAVITY;
 
-        double kNet = frontSuspension + rearSuspension - masses.sprungMass() * STANDARD_GRAVITY * masses.rollArm();
-        double damping = 2 * coefficient * motionRatio * motionRatio
-                * (frontTrack * frontTrack + rearTrack * rearTrack) / 4;
-        double omega = Math.sqrt(kNet / inertia);
-        double zeta = damping / (2 * Math.sqrt(kNet * inertia));
-        double steady = masses.sprungMass() * masses.rollArm() * accel / kNet;
+        double omega = car.naturalFrequency();
+        double zeta = car.dampingRatio();
+        double steady = car.steadyRoll(accel);
         double overshoot = Math.exp(-zeta * Math.PI / Math.sqrt(1 - zeta * zeta));
         double peakTime = Math.PI / (omega * Math.sqrt(1 - zeta * zeta));
 
@@ -56,10 +42,5 @@ class DampedOscillatorTest {
         assertEquals(overshoot, result.overshoot(), TOLERANCE * overshoot);
         assertEquals(steady * (1 + overshoot), result.peakRoll(), TOLERANCE * steady * overshoot);
         assertEquals(peakTime, result.peakRollTime(), TOLERANCE * peakTime);
-    }
-
-    private static AxleRoll rigidTyreAxle(double track, double suspension, double coefficient, double ratio) {
-        return new AxleRoll(track, suspension, Double.POSITIVE_INFINITY,
-                new RollDamping(Damper.linear(ratio, coefficient), track), 0, Double.POSITIVE_INFINITY);
     }
 }
