@@ -6,6 +6,7 @@ import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.model.Vehicle;
 import barwright.physics.bar.BarResult;
+import barwright.physics.linkage.AxleKinematics;
 
 import java.util.List;
 
@@ -37,6 +38,9 @@ public final class AnalysisPipeline {
     private final double rearCornerSprungMass;
     private final AxleGrip frontGrip;
     private final AxleGrip rearGrip;
+    // each linkage axle's geometry against roll (null for a typed roll centre), model.md 11
+    private final AxleRollGeometry frontGeometry;
+    private final AxleRollGeometry rearGeometry;
 
     /**
      * Stage 1: what does not depend on the bars.
@@ -44,8 +48,13 @@ public final class AnalysisPipeline {
      * @throws ImpossibleVehicleException where the masses cannot be analysed whatever the bars
      */
     public AnalysisPipeline(Vehicle given) {
-        // linkage axles: the computed static roll centre and the ride-height changes (model.md 12)
-        Vehicle vehicle = LinkageResolution.atRideHeight(given);
+        // linkage axles: the computed static roll centre and the ride-height changes (model.md 11), and each one's
+        // geometry against roll, followed once for every bar the pipeline is asked about
+        AxleKinematics frontKinematics = given.front().hasLinkage()
+                ? LinkageResolution.kinematics(given, AxlePosition.FRONT) : null;
+        AxleKinematics rearKinematics = given.rear().hasLinkage()
+                ? LinkageResolution.kinematics(given, AxlePosition.REAR) : null;
+        Vehicle vehicle = LinkageResolution.atRideHeight(given, frontKinematics, rearKinematics);
         this.vehicle = vehicle;
         this.masses = MassProperties.of(vehicle);
         this.loads = masses.staticLoads();
@@ -55,6 +64,40 @@ public final class AnalysisPipeline {
                 loads.rearAxle());
         this.frontGrip = new AxleGrip(new TyreModel(vehicle.front().tyre()));
         this.rearGrip = new AxleGrip(new TyreModel(vehicle.rear().tyre()));
+        double follow = frontKinematics == null && rearKinematics == null ? 0 : rollToFollow();
+        this.frontGeometry = frontKinematics == null ? null
+                : AxleRollGeometry.of(AxlePosition.FRONT, frontKinematics, follow);
+        this.rearGeometry = rearKinematics == null ? null
+                : AxleRollGeometry.of(AxlePosition.REAR, rearKinematics, follow);
+    }
+
+    /**
+     * How far the linkages' roll is followed for this car, whatever bars it is given (model.md 11): half as much
+     * again as the roll of the car without bars at a_y = mu_max g (no axle grips more than its tyres' highest
+     * friction times its load, and its load does not change in a turn), plus a degree; at most
+     * {@link AxleRollGeometry#MAX_ROLL}, and that where the car without bars has no stable roll position.
+     *
+     * @return the roll (rad)
+     */
+    private double rollToFollow() {
+        double frontSprings = AxleStiffness.of(vehicle.front().withBar(null), null, frontCornerSprungMass)
+                .rollStiffness();
+        double rearSprings = AxleStiffness.of(vehicle.rear().withBar(null), null, rearCornerSprungMass)
+                .rollStiffness();
+        RollResponse withoutBars = RollResponse.withRollArm(masses, masses.rollArm(), frontSprings, rearSprings,
+                vehicle.chassisTorsionalStiffness());
+        if (withoutBars == null || !(withoutBars.rollPerAccel() > 0)) {
+            return AxleRollGeometry.MAX_ROLL;
+        }
+        double weight = masses.mass() * STANDARD_GRAVITY;
+        double highestFriction = 0;
+        for (int i = 1; i <= 20; i++) {
+            double load = weight * i / 20;
+            highestFriction = Math.max(highestFriction, Math.max(frontGrip.tyre().friction(load),
+                    rearGrip.tyre().friction(load)));
+        }
+        double roll = 1.5 * withoutBars.rollPerAccel() * highestFriction * STANDARD_GRAVITY + Math.toRadians(1);
+        return Math.min(AxleRollGeometry.MAX_ROLL, roll);
     }
 
     public Vehicle vehicle() {
@@ -127,11 +170,25 @@ public final class AnalysisPipeline {
      * @param curvePoints points of each handling curve (at least 2)
      */
     public TurnPair turns(RollBalance balance, int curvePoints) {
+        return turns(balance, migration(balance), curvePoints);
+    }
+
+    /**
+     * The roll centres' migration for a linear stage's roll stiffnesses (model.md 11).
+     *
+     * @return it, or null where no axle has a linkage
+     */
+    public RollCentreMigration migration(RollBalance balance) {
+        return RollCentreMigration.of(vehicle, masses, balance.frontRollStiffness(), balance.rearRollStiffness(),
+                vehicle.chassisTorsionalStiffness(), frontGeometry, rearGeometry);
+    }
+
+    private TurnPair turns(RollBalance balance, RollCentreMigration migration, int curvePoints) {
         AxleGrip front = grip(AxlePosition.FRONT);
         AxleGrip rear = grip(AxlePosition.REAR);
-        TurnResult left = TurnAnalysis.analyse(cornering(vehicle, masses, TurnDirection.LEFT, balance),
+        TurnResult left = TurnAnalysis.analyse(cornering(vehicle, masses, TurnDirection.LEFT, balance, migration),
                 masses.mass(), masses.frontMassFraction(), front, rear, curvePoints);
-        SteadyCornering rightCornering = cornering(vehicle, masses, TurnDirection.RIGHT, balance);
+        SteadyCornering rightCornering = cornering(vehicle, masses, TurnDirection.RIGHT, balance, migration);
         TurnResult right = mirrorSymmetric() ? left.withCornering(rightCornering)
                 : TurnAnalysis.analyse(rightCornering, masses.mass(), masses.frontMassFraction(), front, rear,
                 curvePoints);
@@ -143,10 +200,11 @@ public final class AnalysisPipeline {
      * longitudinal acceleration).
      */
     static SteadyCornering cornering(Vehicle vehicle, MassProperties masses, TurnDirection direction,
-                                     RollBalance balance) {
+                                     RollBalance balance, RollCentreMigration migration) {
         return new SteadyCornering(direction, masses, vehicle.cgHeight(), vehicle.front().track(),
                 vehicle.rear().track(), balance.frontTransfer(), balance.rearTransfer(), balance.roll(),
-                balance.frontRollStiffness(), balance.rearRollStiffness(), vehicle.chassisTorsionalStiffness());
+                balance.frontRollStiffness(), balance.rearRollStiffness(), vehicle.chassisTorsionalStiffness(),
+                migration);
     }
 
     /**
@@ -171,7 +229,8 @@ public final class AnalysisPipeline {
         // K = W_f/C_f - W_r/C_r in rad per g (Gillespie, Fundamentals of Vehicle Dynamics, ch. 6), per m/s^2 here
         double understeer = (loads.frontAxle() / frontCornering - loads.rearAxle() / rearCornering)
                 / STANDARD_GRAVITY;
-        TurnPair turns = turns(balance, HANDLING_CURVE_POINTS);
+        RollCentreMigration migration = migration(balance);
+        TurnPair turns = turns(balance, migration, HANDLING_CURVE_POINTS);
 
         AxleResult front = new AxleResult(frontStiffness, frontBar, balance.front(), frontCornering,
                 cornerSprungMass(AxlePosition.FRONT));
@@ -180,9 +239,9 @@ public final class AnalysisPipeline {
         double rollShare = balance.frontRollStiffness() / (balance.frontRollStiffness() + balance.rearRollStiffness());
         AnalysisResult withoutWarnings = new AnalysisResult(vehicle, masses, front, rear, balance.roll(),
                 suspensionRoll, balance.frontLoadTransferShare(), rollShare, understeer, turns.left(),
-                turns.right(), List.of());
+                turns.right(), List.of(), grip(AxlePosition.FRONT), grip(AxlePosition.REAR), migration);
         return new AnalysisResult(vehicle, masses, front, rear, balance.roll(), suspensionRoll,
                 balance.frontLoadTransferShare(), rollShare, understeer, turns.left(), turns.right(),
-                Warnings.of(withoutWarnings));
+                Warnings.of(withoutWarnings), grip(AxlePosition.FRONT), grip(AxlePosition.REAR), migration);
     }
 }

@@ -21,13 +21,35 @@ import java.util.List;
  * @param leftTurn                 the turn to the left
  * @param rightTurn                the turn to the right
  * @param warnings                 results a person should act on
+ * @param frontGrip                the front tyres' grip the turns were worked out with
+ * @param rearGrip                 the rear tyres'
+ * @param migration                the roll centres' migration the turns followed, or null where no axle has a
+ *                                 linkage (model.md 11)
  */
 public record AnalysisResult(Vehicle vehicle, MassProperties masses, AxleResult front, AxleResult rear,
                              RollResponse roll, RollResponse suspensionRoll, double frontLoadTransferShare,
                              double frontRollStiffnessShare, double understeerGradient, TurnResult leftTurn,
-                             TurnResult rightTurn, List<Warning> warnings) {
+                             TurnResult rightTurn, List<Warning> warnings, AxleGrip frontGrip, AxleGrip rearGrip,
+                             RollCentreMigration migration) {
     public AnalysisResult {
         warnings = List.copyOf(warnings);
+        java.util.Objects.requireNonNull(frontGrip, "frontGrip");
+        java.util.Objects.requireNonNull(rearGrip, "rearGrip");
+    }
+
+    /** The figures of a car with typed roll centres, each axle's grip from its tyre at zero camber to the road. */
+    public AnalysisResult(Vehicle vehicle, MassProperties masses, AxleResult front, AxleResult rear,
+                          RollResponse roll, RollResponse suspensionRoll, double frontLoadTransferShare,
+                          double frontRollStiffnessShare, double understeerGradient, TurnResult leftTurn,
+                          TurnResult rightTurn, List<Warning> warnings) {
+        this(vehicle, masses, front, rear, roll, suspensionRoll, frontLoadTransferShare, frontRollStiffnessShare,
+                understeerGradient, leftTurn, rightTurn, warnings, new AxleGrip(new TyreModel(vehicle.front().tyre())),
+                new AxleGrip(new TyreModel(vehicle.rear().tyre())), null);
+    }
+
+    /** @return the axle's tyre grip, the one the analysis used */
+    public AxleGrip grip(AxlePosition position) {
+        return position == AxlePosition.FRONT ? frontGrip : rearGrip;
     }
 
     public AxleResult axle(AxlePosition position) {

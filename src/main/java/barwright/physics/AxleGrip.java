@@ -42,6 +42,15 @@ public final class AxleGrip {
 
     /** @return the axle's capacity: the sum of mu(F_z, gamma) F_z over its two tyres (N) */
     public double capacity(double outsideLoad, double insideLoad) {
+        return capacity(outsideLoad, insideLoad, outsideCamber, insideCamber);
+    }
+
+    /**
+     * @param outsideCamber the outside wheel's camber to the road, SAE J670 (rad)
+     * @param insideCamber  the inside wheel's camber to the road, SAE J670 (rad), entering with its sign turned
+     * @return the axle's capacity with these cambers instead of the axle's own (N)
+     */
+    public double capacity(double outsideLoad, double insideLoad, double outsideCamber, double insideCamber) {
         return tyre.peakForce(outsideLoad, outsideCamber) + tyre.peakForce(insideLoad, -insideCamber);
     }
 
@@ -50,9 +59,19 @@ public final class AxleGrip {
      *     with the same total load shared equally between the two tyres (model.md 8.1)
      */
     public double gripLostToTransfer(double outsideLoad, double insideLoad) {
+        return gripLostToTransfer(outsideLoad, insideLoad, outsideCamber, insideCamber);
+    }
+
+    /**
+     * @return the share of grip lost to load transfer with these cambers: both capacities at the same cambers,
+     *     so only the loads differ
+     */
+    public double gripLostToTransfer(double outsideLoad, double insideLoad, double outsideCamber,
+                                     double insideCamber) {
         double even = 0.5 * (outsideLoad + insideLoad);
-        double evenCapacity = capacity(even, even);
-        return evenCapacity > 0 ? 1 - capacity(outsideLoad, insideLoad) / evenCapacity : 0;
+        double evenCapacity = capacity(even, even, outsideCamber, insideCamber);
+        return evenCapacity > 0
+                ? 1 - capacity(outsideLoad, insideLoad, outsideCamber, insideCamber) / evenCapacity : 0;
     }
 
     /** @return the axle's cornering stiffness at these loads: C(F_z,o) + C(F_z,i) (N/rad) */
@@ -67,6 +86,15 @@ public final class AxleGrip {
      * @return the slip angle (rad), or NaN where the two tyres at a common slip angle cannot give that force
      */
     public double slipAngleFor(double requiredForce, double outsideLoad, double insideLoad) {
+        return slipAngleFor(requiredForce, outsideLoad, insideLoad, outsideCamber, insideCamber);
+    }
+
+    /**
+     * As {@link #slipAngleFor(double, double, double)} with these cambers (SAE J670, rad) instead of the axle's
+     * own.
+     */
+    public double slipAngleFor(double requiredForce, double outsideLoad, double insideLoad, double outsideCamber,
+                               double insideCamber) {
         if (requiredForce <= 0) {
             return 0;
         }

@@ -12,12 +12,20 @@ public final class GripLostToTransfer {
     private GripLostToTransfer() {
     }
 
-    /** @return the share lost, 0 to 1 (0 for a tyre whose grip does not fall with load) */
+    /**
+     * @return the share lost, 0 to 1 (0 for a tyre whose grip does not fall with load), with the analysis's own
+     *     axle grip and, for a linkage axle, its wheels' cambers at the limit (the same in both capacities, so
+     *     only the loads differ)
+     */
     public static double atLimit(AnalysisResult result, AxlePosition axle, TurnDirection direction) {
         TurnResult turn = result.turn(direction);
-        WheelLoads loads = turn.cornering().wheelLoads(turn.limit());
-        AxleGrip grip = new AxleGrip(new TyreModel(result.vehicle().axle(axle).tyre()));
-        return axle == AxlePosition.FRONT ? grip.gripLostToTransfer(loads.frontOutside(), loads.frontInside())
-                : grip.gripLostToTransfer(loads.rearOutside(), loads.rearInside());
+        SteadyCornering cornering = turn.cornering();
+        SteadyCornering.Point point = cornering.at(turn.limit());
+        AxleGrip grip = result.grip(axle);
+        double outside = point.loads().outside(axle);
+        double inside = point.loads().inside(axle);
+        Double outsideCamber = cornering.outsideCamber(axle, point);
+        return outsideCamber == null ? grip.gripLostToTransfer(outside, inside)
+                : grip.gripLostToTransfer(outside, inside, outsideCamber, cornering.insideCamber(axle, point));
     }
 }

@@ -27,11 +27,26 @@ public final class LinkageResolution {
         if (!vehicle.front().hasLinkage() && !vehicle.rear().hasLinkage()) {
             return vehicle;
         }
+        return atRideHeight(vehicle, vehicle.front().hasLinkage() ? kinematics(vehicle, AxlePosition.FRONT) : null,
+                vehicle.rear().hasLinkage() ? kinematics(vehicle, AxlePosition.REAR) : null);
+    }
+
+    /**
+     * As {@link #atRideHeight(Vehicle)} with each linkage axle's kinematics already worked out.
+     *
+     * @param front the front linkage's kinematics, null where the front has none
+     * @param rear  the rear's, null where it has none
+     */
+    static Vehicle atRideHeight(Vehicle vehicle, AxleKinematics front, AxleKinematics rear) {
+        if (front == null && rear == null) {
+            return vehicle;
+        }
         Vehicle resolved = vehicle;
         for (AxlePosition position : AxlePosition.values()) {
             Axle axle = vehicle.axle(position);
-            if (axle.hasLinkage()) {
-                double height = kinematics(vehicle, position).atRideHeight().loadTransferHeight();
+            AxleKinematics kinematics = position == AxlePosition.FRONT ? front : rear;
+            if (kinematics != null) {
+                double height = kinematics.atRideHeight().loadTransferHeight();
                 resolved = resolved.withAxle(position, axle.withRollCentreHeight(height));
             }
         }

@@ -55,8 +55,9 @@ final class ModelRangeWarnings {
     }
 
     /**
-     * The outside wheel's load is piecewise linear in a_y, with corners only where an inside wheel lifts, so
-     * its lowest value up to the limit is at 0, at a lift or at the limit.
+     * The outside wheel's load is piecewise linear in a_y, with corners only where an inside wheel lifts (gently
+     * curved before the first lift where the roll centres migrate, model.md 11), so its lowest value up to the
+     * limit is at 0, at a lift or at the limit.
      */
     private static Optional<Warning> outsideWheelUnloaded(AnalysisResult result, AxlePosition axle) {
         List<String> cases = new ArrayList<>();
@@ -123,7 +124,7 @@ final class ModelRangeWarnings {
     }
 
     private static double friction(AnalysisResult result, AxlePosition axle, double load) {
-        return new TyreModel(result.vehicle().axle(axle).tyre()).friction(load);
+        return result.grip(axle).tyre().friction(load);
     }
 
     private static Optional<Warning> rollGradient(AnalysisResult result) {

@@ -1,9 +1,5 @@
 package barwright.physics;
 
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
-import org.apache.commons.math3.linear.LUDecomposition;
-import org.apache.commons.math3.linear.RealVector;
 
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
 import static barwright.units.Constants.STANDARD_GRAVITY;
@@ -26,14 +22,39 @@ public record RollResponse(double frontRollPerAccel, double rearRollPerAccel, do
      */
     public static RollResponse of(MassProperties masses, double frontRollStiffness, double rearRollStiffness,
                                   Double chassisStiffness) {
-        double rollArm = masses.rollArm();
+        requireStable(masses, frontRollStiffness + rearRollStiffness);
+        RollResponse roll = withRollArm(masses, masses.rollArm(), frontRollStiffness, rearRollStiffness,
+                chassisStiffness);
+        if (roll == null) {
+            throw new ImpossibleVehicleException(String.format(
+                    "No stable roll position with this chassis: the flexible body (chassis %.0f N·m/deg) with "
+                            + "front %.0f and rear %.0f N·m/deg at the axles cannot hold the sprung mass %.0f kg on "
+                            + "a roll arm of %.0f mm. Stiffen the chassis or the axles, or lower the sprung CG.",
+                    chassisStiffness * RADIANS_PER_DEGREE, frontRollStiffness * RADIANS_PER_DEGREE,
+                    rearRollStiffness * RADIANS_PER_DEGREE, masses.sprungMass(), masses.rollArm() * 1e3));
+        }
+        return roll;
+    }
+
+    /**
+     * The same response with the roll arm h' given instead of the masses' own (the roll axis moved, as by
+     * roll-centre migration, model.md 11).
+     *
+     * @param rollArm h' (m)
+     * @return the roll per a_y, or null where the body has no stable roll position with that arm
+     */
+    static RollResponse withRollArm(MassProperties masses, double rollArm, double frontRollStiffness,
+                                    double rearRollStiffness, Double chassisStiffness) {
         double sprungMass = masses.sprungMass();
         double gravity = STANDARD_GRAVITY;
         double total = frontRollStiffness + rearRollStiffness;
-        requireStable(masses, total);
+        double gravityRollMoment = sprungMass * gravity * rollArm;
+        if (!(total > gravityRollMoment)) {
+            return null;
+        }
         if (chassisStiffness == null) {
             // phi = m_s a_y h' / (K_f + K_r - m_s g h'), model.md 5
-            double roll = sprungMass * rollArm / (total - masses.gravityRollMoment());
+            double roll = sprungMass * rollArm / (total - gravityRollMoment);
             return new RollResponse(roll, roll, roll);
         }
         // (K_f + K_c - m_sf g h') phi_f - K_c phi_r = m_sf h' a_y, and its twin at the rear (model.md 6)
@@ -41,21 +62,13 @@ public record RollResponse(double frontRollPerAccel, double rearRollPerAccel, do
         double rearDiagonal = rearRollStiffness + chassisStiffness - masses.rearSprungMass() * gravity * rollArm;
         double determinant = frontDiagonal * rearDiagonal - chassisStiffness * chassisStiffness;
         if (!(frontDiagonal > 0 && determinant > 0)) {
-            throw new ImpossibleVehicleException(String.format(
-                    "No stable roll position with this chassis: the flexible body (chassis %.0f N·m/deg) with "
-                            + "front %.0f and rear %.0f N·m/deg at the axles cannot hold the sprung mass %.0f kg on "
-                            + "a roll arm of %.0f mm. Stiffen the chassis or the axles, or lower the sprung CG.",
-                    chassisStiffness * RADIANS_PER_DEGREE, frontRollStiffness * RADIANS_PER_DEGREE,
-                    rearRollStiffness * RADIANS_PER_DEGREE, sprungMass, rollArm * 1e3));
+            return null;
         }
-        Array2DRowRealMatrix matrix = new Array2DRowRealMatrix(new double[][]{
-                {frontDiagonal, -chassisStiffness},
-                {-chassisStiffness, rearDiagonal}});
-        RealVector rollMoments = new ArrayRealVector(new double[]{
-                masses.frontSprungMass() * rollArm, masses.rearSprungMass() * rollArm});
-        RealVector roll = new LUDecomposition(matrix).getSolver().solve(rollMoments);
-        double front = roll.getEntry(0);
-        double rear = roll.getEntry(1);
+        // the 2 x 2 system by Cramer's rule: no matrix objects in the inner loop of the migrating roll (model.md 11)
+        double frontMoment = masses.frontSprungMass() * rollArm;
+        double rearMoment = masses.rearSprungMass() * rollArm;
+        double front = (frontMoment * rearDiagonal + chassisStiffness * rearMoment) / determinant;
+        double rear = (frontDiagonal * rearMoment + chassisStiffness * frontMoment) / determinant;
         double mean = (masses.frontSprungMass() * front + masses.rearSprungMass() * rear) / sprungMass;
         return new RollResponse(front, rear, mean);
     }

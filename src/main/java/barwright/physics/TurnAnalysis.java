@@ -31,8 +31,10 @@ public final class TurnAnalysis {
                                      AxleGrip frontGrip, AxleGrip rearGrip, int curvePoints) {
         double rollover = cornering.rollover();
         double ceiling = Math.min(SEARCH_CEILING, rollover);
-        double frontLimit = axleLimit(cornering, AxlePosition.FRONT, mass * frontMassFraction, frontGrip, ceiling);
-        double rearLimit = axleLimit(cornering, AxlePosition.REAR, mass * (1 - frontMassFraction), rearGrip, ceiling);
+        double[] limits = axleLimits(cornering, mass * frontMassFraction, mass * (1 - frontMassFraction), frontGrip,
+                rearGrip, ceiling);
+        double frontLimit = limits[0];
+        double rearLimit = limits[1];
         double limit = Math.min(frontLimit, rearLimit);
         List<HandlingPoint> curve = handlingCurve(cornering, mass, frontMassFraction, frontGrip, rearGrip, limit,
                 curvePoints);
@@ -60,10 +62,59 @@ public final class TurnAnalysis {
         return ceiling;
     }
 
+    /**
+     * Both axles' limits from one scan: each step's wheel loads (and roll) serve both axles, then each axle's
+     * crossing is solved on its own. The same steps and solves as {@link #axleLimit} for each axle.
+     *
+     * @return {front limit, rear limit} (m/s^2)
+     */
+    static double[] axleLimits(SteadyCornering cornering, double frontMassShare, double rearMassShare,
+                               AxleGrip frontGrip, AxleGrip rearGrip, double ceiling) {
+        DoubleUnaryOperator frontSurplus = accel -> capacityAt(cornering, AxlePosition.FRONT, frontGrip, accel)
+                - frontMassShare * accel;
+        DoubleUnaryOperator rearSurplus = accel -> capacityAt(cornering, AxlePosition.REAR, rearGrip, accel)
+                - rearMassShare * accel;
+        double front = Double.NaN;
+        double rear = Double.NaN;
+        double low = 0;
+        while (low < ceiling && (Double.isNaN(front) || Double.isNaN(rear))) {
+            double high = Math.min(ceiling, low + SCAN_STEP);
+            SteadyCornering.Point point = cornering.at(high);
+            if (Double.isNaN(front) && capacityAt(cornering, AxlePosition.FRONT, frontGrip, point)
+                    - frontMassShare * high <= 0) {
+                front = GRIP_LIMIT.solve(frontSurplus, low, high);
+            }
+            if (Double.isNaN(rear) && capacityAt(cornering, AxlePosition.REAR, rearGrip, point)
+                    - rearMassShare * high <= 0) {
+                rear = GRIP_LIMIT.solve(rearSurplus, low, high);
+            }
+            low = high;
+        }
+        return new double[] {Double.isNaN(front) ? ceiling : front, Double.isNaN(rear) ? ceiling : rear};
+    }
+
+    /** @return the axle's capacity at the loads of that a_y, and the linkage's cambers there where it has one */
     private static double capacityAt(SteadyCornering cornering, AxlePosition axle, AxleGrip grip, double accel) {
-        WheelLoads loads = cornering.wheelLoads(accel);
-        return axle == AxlePosition.FRONT ? grip.capacity(loads.frontOutside(), loads.frontInside())
-                : grip.capacity(loads.rearOutside(), loads.rearInside());
+        return capacityAt(cornering, axle, grip, cornering.at(accel));
+    }
+
+    private static double capacityAt(SteadyCornering cornering, AxlePosition axle, AxleGrip grip,
+                                     SteadyCornering.Point point) {
+        double outside = point.loads().outside(axle);
+        double inside = point.loads().inside(axle);
+        Double outsideCamber = cornering.outsideCamber(axle, point);
+        return outsideCamber == null ? grip.capacity(outside, inside)
+                : grip.capacity(outside, inside, outsideCamber, cornering.insideCamber(axle, point));
+    }
+
+    /** @return the axle's common slip angle for the force at that a_y, with the linkage's cambers where it has one */
+    private static double slipAngle(SteadyCornering cornering, AxlePosition axle, AxleGrip grip, double force,
+                                    SteadyCornering.Point point) {
+        double outside = point.loads().outside(axle);
+        double inside = point.loads().inside(axle);
+        Double outsideCamber = cornering.outsideCamber(axle, point);
+        return outsideCamber == null ? grip.slipAngleFor(force, outside, inside)
+                : grip.slipAngleFor(force, outside, inside, outsideCamber, cornering.insideCamber(axle, point));
     }
 
     private static List<HandlingPoint> handlingCurve(SteadyCornering cornering, double mass,
@@ -72,11 +123,11 @@ public final class TurnAnalysis {
         List<HandlingPoint> curve = new ArrayList<>(points);
         for (int i = 0; i < points; i++) {
             double accel = limit * i / (points - 1);
-            WheelLoads loads = cornering.wheelLoads(accel);
-            double front = frontGrip.slipAngleFor(mass * frontMassFraction * accel, loads.frontOutside(),
-                    loads.frontInside());
-            double rear = rearGrip.slipAngleFor(mass * (1 - frontMassFraction) * accel, loads.rearOutside(),
-                    loads.rearInside());
+            SteadyCornering.Point point = cornering.at(accel);
+            double front = slipAngle(cornering, AxlePosition.FRONT, frontGrip, mass * frontMassFraction * accel,
+                    point);
+            double rear = slipAngle(cornering, AxlePosition.REAR, rearGrip, mass * (1 - frontMassFraction) * accel,
+                    point);
             if (Double.isNaN(front) || Double.isNaN(rear)) {
                 break; // an axle at a common slip angle cannot give the force: the curve ends here
             }

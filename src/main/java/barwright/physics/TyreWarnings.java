@@ -26,7 +26,7 @@ final class TyreWarnings {
         List<Warning> warnings = new ArrayList<>();
         for (AxlePosition axle : AxlePosition.values()) {
             Tyre tyre = result.vehicle().axle(axle).tyre();
-            TyreModel model = new TyreModel(tyre);
+            TyreModel model = result.grip(axle).tyre(); // the analysis's own tyre model
             List<String> outside = new ArrayList<>();
             boolean onlyBelow = true;
             List<String> floored = new ArrayList<>();

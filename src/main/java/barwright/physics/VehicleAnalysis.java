@@ -31,6 +31,6 @@ public final class VehicleAnalysis {
         Vehicle vehicle = result.vehicle();
         MassProperties shifted = result.masses().withLongitudinalAcceleration(longitudinalAcceleration,
                 vehicle.cgHeight());
-        return AnalysisPipeline.cornering(vehicle, shifted, direction, result.rollBalance());
+        return AnalysisPipeline.cornering(vehicle, shifted, direction, result.rollBalance(), result.migration());
     }
 }

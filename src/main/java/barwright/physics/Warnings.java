@@ -26,6 +26,7 @@ public final class Warnings {
         }
         rolloverWarning(result).ifPresent(warnings::add);
         warnings.addAll(TyreWarnings.of(result));
+        warnings.addAll(LinkageWarnings.of(result));
         for (AxlePosition axle : AxlePosition.values()) {
             BarResult bar = result.axle(axle).bar();
             if (bar == null) {

@@ -28,6 +28,12 @@ class LiftEnvelopeTest {
     private static final double NEAR = 1e-6;
     /** Relative agreement of two evaluations of the same linear relation: round-off only. */
     private static final double LINEAR = 1e-9;
+    /**
+     * Relative gap allowed between a drawn line and the lift half-way along it where the roll centres migrate:
+     * 1 %, a chord of a gently curved boundary (the transfer's curvature comes from a few mm of roll-centre
+     * movement per degree).
+     */
+    private static final double CHORD = 0.01;
 
     static List<String> samples() {
         return Samples.NAMES;
@@ -97,7 +103,11 @@ class LiftEnvelopeTest {
     @ParameterizedTest
     @MethodSource("samples")
     void the_drawn_boundary_is_exact_between_its_points(String sample) {
-        LiftEnvelope calculator = new LiftEnvelope(VehicleAnalysis.analyse(Samples.vehicle(sample)));
+        AnalysisResult analysis = VehicleAnalysis.analyse(Samples.vehicle(sample));
+        // with roll centres that migrate the transfer is no longer linear in a_y, so neither is the boundary
+        // between its corners: the lines drawn are chords there (model.md 11), held to 1 % of the lift
+        double tolerance = analysis.migration() == null ? LINEAR : CHORD;
+        LiftEnvelope calculator = new LiftEnvelope(analysis);
         LiftEnvelopeResult envelope = calculator.compute();
         for (Wheel wheel : Wheel.values()) {
             List<EnvelopePoint> points = envelope.boundary(wheel).points();
@@ -109,7 +119,7 @@ class LiftEnvelopeTest {
                 }
                 double middle = (low.longitudinalAcceleration() + high.longitudinalAcceleration()) / 2;
                 double drawn = (low.lateralAcceleration() + high.lateralAcceleration()) / 2;
-                assertThat(calculator.lift(wheel, middle)).isCloseTo(drawn, within(LINEAR * drawn));
+                assertThat(calculator.lift(wheel, middle)).isCloseTo(drawn, within(tolerance * drawn));
             }
         }
     }
@@ -139,8 +149,16 @@ class LiftEnvelopeTest {
                 double ax = point.longitudinalAcceleration();
                 double staticInside = wheel.staticLoad(masses.staticLoads())
                         + masses.mass() * ax * vehicle.cgHeight() / (2 * vehicle.wheelbase());
-                double closedForm = staticInside / analysis.rear().loadTransfer().total();
-                assertThat(point.lateralAcceleration()).isCloseTo(closedForm, within(LINEAR * closedForm));
+                if (analysis.migration() == null) {
+                    double closedForm = staticInside / analysis.rear().loadTransfer().total();
+                    assertThat(point.lateralAcceleration()).isCloseTo(closedForm, within(LINEAR * closedForm));
+                } else {
+                    // migrating roll centres: no closed form; the boundary is where the rear transfer at that
+                    // a_y (the analysis's own, at the shifted loads) reaches the inside wheel's load (model.md 7)
+                    double transfer = VehicleAnalysis.cornering(analysis, wheel.insideIn(), ax)
+                            .loadTransfer(barwright.model.AxlePosition.REAR, point.lateralAcceleration());
+                    assertThat(transfer).isCloseTo(staticInside, within(1e-6 * staticInside));
+                }
                 if (harder != null) {
                     assertThat(harder.lateralAcceleration()).as("%s: more braking lifts sooner", wheel)
                             .isLessThan(point.lateralAcceleration());

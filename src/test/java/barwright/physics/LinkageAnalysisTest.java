@@ -52,7 +52,7 @@ class LinkageAnalysisTest {
             assertThat(linked.understeerGradient()).as(name).isCloseTo(typed.understeerGradient(), within(SAME));
             assertThat(linked.front().loadTransfer().geometric()).as(name)
                     .isCloseTo(typed.front().loadTransfer().geometric(), within(SAME * 1e3));
-            assertThat(linked.leftTurn().limit()).as(name).isCloseTo(typed.leftTurn().limit(), within(SAME));
+            // the limit is not compared: there the roll centres have moved (RollCentreMigrationTest)
         }
     }
 
@@ -74,7 +74,7 @@ class LinkageAnalysisTest {
         LinkageAtLimit atLimit = LinkageAtLimit.of(result, AxlePosition.REAR);
         TurnDirection turn = atLimit.turn();
         assertThat(atLimit.rollAtLimit()).isCloseTo(result.turn(turn).limit() * result.roll().rollPerAccel(),
-                within(1e-9));
+                within(1e-9 * atLimit.rollAtLimit()));
         assertThat(atLimit.rollCentreHeightAtLimit()).isCloseTo(0.30, within(1e-12));
         assertThat(atLimit.rollCentreMigrationPerRoll()).isCloseTo(0, within(1e-9));
         // a beam axle keeps its wheels' camber to the road

@@ -68,6 +68,29 @@ public sealed interface AxleKinematics permits IndependentKinematics, LiveAxleKi
     /** @return how far the wheel can drop from the ride height (a negative travel), and what stops it */
     TravelLimit droopLimit();
 
+    /**
+     * The body's roll followed from rest in steps of about {@code step}, to the first state at or past
+     * {@code maxRoll} or to where the linkage stops the roll.
+     *
+     * @param maxRoll the roll to reach (rad), positive
+     * @param step    about how far apart the states are (rad), positive
+     */
+    default RollSweep rollSweep(double maxRoll, double step) {
+        java.util.List<RollState> states = new java.util.ArrayList<>();
+        states.add(roll(0));
+        for (int k = 1; ; k++) {
+            double roll = Math.min(k * step, maxRoll);
+            try {
+                states.add(roll(roll));
+            } catch (LinkageLimitException beyond) {
+                return new RollSweep(states, beyond.limit().reason(), beyond.limit().locks());
+            }
+            if (roll >= maxRoll) {
+                return new RollSweep(states, null, false);
+            }
+        }
+    }
+
     /** @return the static kinematic roll centre at the ride height */
     default RollState atRideHeight() {
         return roll(0);

@@ -18,6 +18,8 @@ final class IndependentKinematics implements AxleKinematics {
             RootFinder.of("the wheel travel of a body roll", TRAVEL_ACCURACY, 200);
     /** Contact points closer to a line than this lie on it (m). */
     private static final double ON_LINE = 1e-9;
+    /** How far inside the end of the followed travel a sweep stops (m), so rounding never steps past it. */
+    private static final double INSIDE_END = 1e-9;
 
     private final SideSolver side;
     private final double track;
@@ -90,6 +92,42 @@ final class IndependentKinematics implements AxleKinematics {
             s = TRAVEL_ROOT.solve(x -> closure(x, tan), narrow ? low : 0, narrow ? high : reach);
         }
         return state(roll, s);
+    }
+
+    /**
+     * The sweep follows the wheel travel s instead of the roll: for a given s the roll that puts both contact
+     * points on the ground is explicit, tan(phi) = 2 s / (y_c(s_0 - s) + y_c(s_0 + s)) (the closure above, solved
+     * for phi), so each state costs two travel solves instead of a root search over s. The travels are spaced
+     * so that the rolls come about {@code step} apart (s = tan(k step) y_c at rest).
+     */
+    @Override
+    public RollSweep rollSweep(double maxRoll, double step) {
+        double bump = side.bumpLimit().travel() - baseTravel;
+        double droop = baseTravel - side.droopLimit().travel();
+        TravelLimit binding = bump <= droop ? side.bumpLimit() : side.droopLimit();
+        // a hair inside the end of the followed motion, so that rounding never asks for a travel past it
+        double reach = Math.min(bump, droop) - INSIDE_END;
+        java.util.List<RollState> states = new java.util.ArrayList<>();
+        states.add(state(0, 0));
+        double lastRoll = 0;
+        for (int k = 1; ; k++) {
+            double s = Math.min(reach, Math.tan(Math.min(k * step, Math.PI / 4)) * rideHeightContactY);
+            if (!(s > 0)) {
+                return new RollSweep(states, binding.reason(), binding.locks());
+            }
+            double roll = Math.atan(2 * s / (side.contactY(baseTravel - s) + side.contactY(baseTravel + s)));
+            if (!(roll > lastRoll)) {
+                return new RollSweep(states, "the body cannot roll further with both tyres on the ground", true);
+            }
+            states.add(state(roll, s));
+            lastRoll = roll;
+            if (roll >= maxRoll) {
+                return new RollSweep(states, null, false);
+            }
+            if (s >= reach) {
+                return new RollSweep(states, binding.reason(), binding.locks());
+            }
+        }
     }
 
     /** The loop closure of the two contact points on the ground: zero at the wheel travel s of the roll. */

@@ -97,8 +97,11 @@ final class TurnWork {
                     liftValue, LIFT_SOURCE, "This wheel stays on the ground up to 3 g: it does not lift.");
         }
         if (axle == cornering.firstLiftAxle()) {
-            WorkValue slope = new WorkValue("ΔF/a_y", word + " load transfer per g before any lift",
-                    result.axle(axle).loadTransfer().total(), Quantity.FORCE_PER_G);
+            // with migrating roll centres the transfer is not linear in a_y: its mean slope up to the lift
+            // (the same number as the transfer per g for typed roll centres)
+            WorkValue slope = new WorkValue("ΔF/a_y", word + " load transfer per g up to the lift, with the roll "
+                    + "centres where they are at the lift's roll", cornering.loadTransfer(axle, lift) / lift,
+                    Quantity.FORCE_PER_G);
             return new Derivation(title, "a_lift = W_i / (ΔF/a_y)", List.of(staticInside, slope), List.of(),
                     liftValue, LIFT_SOURCE, liftNote(turn, lift));
         }
@@ -113,8 +116,8 @@ final class TurnWork {
                                 Quantity.ACCELERATION),
                         new WorkValue("m", "car mass", masses.mass(), Quantity.MASS),
                         new WorkValue("h", "centre of mass height", result.vehicle().cgHeight(), Quantity.LENGTH),
-                        new WorkValue("m_s g h'", "gravity's roll moment per radian", masses.gravityRollMoment(),
-                                Quantity.ROLL_STIFFNESS),
+                        new WorkValue("m_s g h'", "gravity's roll moment per radian (h' at the first lift's roll)",
+                                cornering.liftGravityRollMoment(), Quantity.ROLL_STIFFNESS),
                         new WorkValue("t_X", first.key() + " track", result.vehicle().axle(first).track(),
                                 Quantity.LENGTH),
                         new WorkValue("t_Y", word + " track", result.vehicle().axle(axle).track(), Quantity.LENGTH)),
