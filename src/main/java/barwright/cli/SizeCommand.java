@@ -16,6 +16,7 @@ import barwright.report.sizing.SweepOutput;
 import barwright.report.sizing.TubeOutput;
 import barwright.sizing.BarSearch;
 import barwright.sizing.Candidate;
+import barwright.io.csv.CsvFileException;
 import barwright.sizing.Constraints;
 import barwright.sizing.DiameterSweep;
 import barwright.sizing.ExactSize;
@@ -57,7 +58,8 @@ final class SizeCommand implements Command {
     static final Set<String> SWITCHES = Set.of("json");
     static final Set<String> OPTIONS = Set.of("axle", "target-share", "target-offset", "target-gradient",
             "min-safety", "no-lift", "max-mass", "max-diameter", "materials", "catalogues", "holes", "count",
-            "tie-band", "tube-diameter", "sweep-csv", "apply", "output", "tubes-like-solid", "units");
+            "tie-band", "tube-diameter", "sweep-csv", "apply", "output", "tubes-like-solid", "units", "min-laps",
+            "fatigue-log");
 
     @Override
     public String name() {
@@ -68,6 +70,7 @@ final class SizeCommand implements Command {
     public String synopsis() {
         return "size FILE --axle front|rear|both (--target-share S | --target-offset D) [--target-gradient DEG_PER_G]"
                 + " [--min-safety 1.5] [--no-lift none|front|rear|both] [--max-mass KG] [--max-diameter MM]"
+                + " [--min-laps N [--fatigue-log LAP.csv]]"
                 + " [--materials current|all|NAME,...] [--catalogues NAME|PATH,...] [--holes 1,2,...] [--count 10]"
                 + " [--tie-band 0.1] [--tube-diameter MM] [--sweep-csv OUT.csv] [--apply RANK --output OUT.json]"
                 + " [--tubes-like-solid current|MM] [--json] [--units si|us]";
@@ -95,7 +98,14 @@ final class SizeCommand implements Command {
             return tubesLikeSolid(parsed, document, axles, materials, sizes, units, out);
         }
         Targets targets = targets(parsed);
-        Constraints constraints = constraints(parsed);
+        Constraints constraints;
+        try {
+            constraints = constraints(parsed).withMinimumLife(MinimumLifeOption.read(parsed, document, axles));
+        } catch (CsvFileException refused) {
+            err.println("barwright: the log " + parsed.option("fatigue-log", "") + " was refused:");
+            refused.problems().forEach(problem -> err.println("  " + problem));
+            return Cli.REFUSED;
+        }
         Map<AxlePosition, SizeChoices> choices = new EnumMap<>(AxlePosition.class);
         List<Integer> holes = holes(parsed.option("holes", null));
         for (AxlePosition axle : axles) {

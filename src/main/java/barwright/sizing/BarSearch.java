@@ -2,10 +2,14 @@ package barwright.sizing;
 
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
+import barwright.model.BarFatigueSettings;
 import barwright.model.Material;
 import barwright.model.Vehicle;
 import barwright.physics.ImpossibleVehicleException;
 import barwright.physics.RollBalance;
+import barwright.physics.fatigue.BarStressHistory;
+import barwright.physics.fatigue.FatigueLife;
+import barwright.physics.fatigue.SnCurve;
 import barwright.sizing.catalogue.StockSize;
 import barwright.solver.Progress;
 
@@ -234,7 +238,33 @@ public final class BarSearch {
                     return new Outcome(figures, axle == AxlePosition.FRONT ? Rejection.FRONT_LIFT : Rejection.REAR_LIFT);
                 }
             }
+            FatigueLimit limit = constraints.minimumLife();
+            if (limit != null) {
+                RollBalance balance = evaluator.balance(front, rear);
+                for (AxlePosition axle : request.axles()) {
+                    Rejection shortfall = fatigue(axle == AxlePosition.FRONT ? front : rear, balance, limit);
+                    if (shortfall != null) {
+                        return new Outcome(figures, shortfall);
+                    }
+                }
+            }
             return new Outcome(figures, null);
+        }
+
+        /** @return why the sized bar falls short of the least life, or null where it lasts */
+        private Rejection fatigue(AxleState state, RollBalance balance, FatigueLimit limit) {
+            AntiRollBar bar = state.bar();
+            var strength = limit.strength(bar.material());
+            if (strength.isEmpty()) {
+                return Rejection.NO_FATIGUE_DATA;
+            }
+            double perAcceleration = BarStressHistory.stressPerAcceleration(evaluator.vehicle(), state.position(),
+                    bar, state.barResult(), state.stiffness(), balance);
+            BarFatigueSettings settings = limit.settingsOf(state.position());
+            SnCurve curve = SnCurve.of(strength.get(), settings.surface(), bar.section().outerDiameter());
+            double damage = FatigueLife.damage(limit.accelerationCycles(), perAcceleration, curve,
+                    settings.stressConcentration(), limit.correction());
+            return damage * limit.minLaps() > 1 ? Rejection.FATIGUE_LIFE : null;
         }
 
         private Candidate candidate(List<BarChoice> bars, SetupFigures figures) {
