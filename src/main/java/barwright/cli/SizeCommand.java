@@ -2,6 +2,7 @@ package barwright.cli;
 
 import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
+import barwright.io.VehicleFileException;
 import barwright.io.VehicleFileWriter;
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
@@ -18,6 +19,8 @@ import barwright.sizing.BarSearch;
 import barwright.sizing.Candidate;
 import barwright.io.csv.CsvFileException;
 import barwright.sizing.Constraints;
+import barwright.sizing.FatigueLap;
+import barwright.sizing.TubeLives;
 import barwright.sizing.DiameterSweep;
 import barwright.sizing.ExactSize;
 import barwright.sizing.ExactSolution;
@@ -100,7 +103,7 @@ final class SizeCommand implements Command {
         Targets targets = targets(parsed);
         Constraints constraints;
         try {
-            constraints = constraints(parsed).withMinimumLife(MinimumLifeOption.read(parsed, document, axles));
+            constraints = constraints(parsed).withMinimumLife(MinimumLifeOption.read(parsed, document));
         } catch (CsvFileException refused) {
             err.println("barwright: the log " + parsed.option("fatigue-log", "") + " was refused:");
             refused.problems().forEach(problem -> err.println("  " + problem));
@@ -176,7 +179,7 @@ final class SizeCommand implements Command {
 
     private int tubesLikeSolid(Arguments parsed, VehicleDocument document, List<AxlePosition> axles,
                                Map<AxlePosition, List<Material>> materials, List<StockSize> sizes, UnitSystem units,
-                               PrintStream out) throws UsageException {
+                               PrintStream out) throws UsageException, VehicleFileException {
         if (axles.size() != 1) {
             throw new UsageException("--tubes-like-solid matches one axle's bar: give --axle front or rear");
         }
@@ -196,10 +199,11 @@ final class SizeCommand implements Command {
         TubeEquivalents.Comparison comparison = TubeEquivalents.compare(solidBar,
                 document.vehicle().differentialWheelTravel(), sizes, materials.get(axle),
                 TubeEquivalents.DEFAULT_TOLERANCE);
+        TubeLives lives = TubeLives.of(document.vehicle(), axle, comparison, FatigueLap.onDefaultLap(document));
         if (parsed.has("json")) {
-            out.print(VehicleFileWriter.toJson(TubeOutput.json(comparison)));
+            out.print(VehicleFileWriter.toJson(TubeOutput.json(comparison, lives)));
         } else {
-            out.print(TubeOutput.text(comparison, units));
+            out.print(TubeOutput.text(comparison, lives, units));
             out.println(Cautions.SHORT);
         }
         return Cli.OK;

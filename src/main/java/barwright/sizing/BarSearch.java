@@ -2,14 +2,10 @@ package barwright.sizing;
 
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
-import barwright.model.BarFatigueSettings;
 import barwright.model.Material;
 import barwright.model.Vehicle;
 import barwright.physics.ImpossibleVehicleException;
 import barwright.physics.RollBalance;
-import barwright.physics.fatigue.BarStressHistory;
-import barwright.physics.fatigue.FatigueLife;
-import barwright.physics.fatigue.SnCurve;
 import barwright.sizing.catalogue.StockSize;
 import barwright.solver.Progress;
 
@@ -20,6 +16,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.stream.IntStream;
 
@@ -253,18 +250,11 @@ public final class BarSearch {
 
         /** @return why the sized bar falls short of the least life, or null where it lasts */
         private Rejection fatigue(AxleState state, RollBalance balance, FatigueLimit limit) {
-            AntiRollBar bar = state.bar();
-            var strength = limit.strength(bar.material());
-            if (strength.isEmpty()) {
+            OptionalDouble laps = limit.lap().lapsToFailure(evaluator.vehicle(), state, balance);
+            if (laps.isEmpty()) {
                 return Rejection.NO_FATIGUE_DATA;
             }
-            double perAcceleration = BarStressHistory.stressPerAcceleration(evaluator.vehicle(), state.position(),
-                    bar, state.barResult(), state.stiffness(), balance);
-            BarFatigueSettings settings = limit.settingsOf(state.position());
-            SnCurve curve = SnCurve.of(strength.get(), settings.surface(), bar.section().outerDiameter());
-            double damage = FatigueLife.damage(limit.accelerationCycles(), perAcceleration, curve,
-                    settings.stressConcentration(), limit.correction());
-            return damage * limit.minLaps() > 1 ? Rejection.FATIGUE_LIFE : null;
+            return laps.getAsDouble() < limit.minLaps() ? Rejection.FATIGUE_LIFE : null;
         }
 
         private Candidate candidate(List<BarChoice> bars, SetupFigures figures) {

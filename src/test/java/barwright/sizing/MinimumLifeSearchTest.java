@@ -36,9 +36,9 @@ class MinimumLifeSearchTest {
             MaterialLibrary.CHROMOLY_4130);
 
     private static FatigueLimit limit(double laps) {
-        return new FatigueLimit(laps, Rainflow.count(BarStressHistory.fromSpectrum(DefaultSpectrum.CORNERS, 1)),
-                Map.of(AxlePosition.FRONT, SETTINGS), MeanStressCorrection.GOODMAN, Map.of(),
-                DefaultSpectrum.DESCRIPTION);
+        return new FatigueLimit(laps, new FatigueLap(Rainflow.count(BarStressHistory.fromSpectrum(
+                DefaultSpectrum.CORNERS, 1)), Map.of(AxlePosition.FRONT, SETTINGS), MeanStressCorrection.GOODMAN,
+                Map.of(), DefaultSpectrum.DESCRIPTION));
     }
 
     private static SizingRequest request(Constraints constraints, List<Material> materials) {

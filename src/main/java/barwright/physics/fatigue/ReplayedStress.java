@@ -60,9 +60,17 @@ public final class ReplayedStress {
         while (first < states.size() && states.get(first).time() < log.start()) {
             first++;
         }
-        List<RollState> lap = states.subList(first, states.size());
+        return fromStates(analysis, states.subList(first, states.size()), log.end() - log.start());
+    }
+
+    /**
+     * @param lap        the replayed states of one lap, in time order
+     * @param lapSeconds the lap's duration (s)
+     * @return each axle's bar stress at each state
+     */
+    public static LapStress fromStates(AnalysisResult analysis, List<RollState> lap, double lapSeconds) {
         return new LapStress(history(analysis, lap, AxlePosition.FRONT), history(analysis, lap, AxlePosition.REAR),
-                log.end() - log.start());
+                lapSeconds);
     }
 
     /** @return the log with its first a_y and a_x held {@link #SETTLE_SECONDS} before its start */

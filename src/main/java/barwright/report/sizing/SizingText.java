@@ -108,7 +108,7 @@ public final class SizingText {
         }
         if (constraints.minimumLife() != null) {
             parts.add(String.format(Locale.ROOT, "fatigue life at least %.0f laps of %s",
-                    constraints.minimumLife().minLaps(), constraints.minimumLife().lapDescription()));
+                    constraints.minimumLife().minLaps(), constraints.minimumLife().lap().description()));
         }
         return String.join("; ", parts);
     }
