@@ -32,6 +32,7 @@ public final class DamageChart {
         ChartStyle.apply(chart);
         panel = ChartStyle.panel(chart, name);
         panel.setPreferredSize(new Dimension(420, 240));
+        panel.setMinimumSize(new Dimension(240, 220)); // a form short of room must not squash it to a line
     }
 
     public JComponent component() {
@@ -60,6 +61,11 @@ public final class DamageChart {
         plot.setRenderer(renderer);
         plot.getDomainAxis().setLabel("Stress range of the cycle, nominal (" + stress.symbol() + ")");
         plot.getRangeAxis().setLabel("Share of the lap's damage (%)");
+        if (total > 0) {
+            plot.getRangeAxis().setAutoRange(true);
+        } else {
+            plot.getRangeAxis().setRange(0, 100); // nothing to share out: an empty 0-100 % scale, not a noise scale
+        }
         chart.setTitle(total > 0 ? "Damage of one lap by cycle range"
                 : "No cycle reaches the endurance limit: no damage");
     }

@@ -11,7 +11,6 @@ import barwright.physics.fatigue.DefaultSpectrum;
 import barwright.physics.fatigue.FatigueAnalysis;
 import barwright.physics.fatigue.FatigueResult;
 import barwright.physics.fatigue.MeanStressCorrection;
-import barwright.report.fatigue.FatigueText;
 import barwright.ui.chart.DamageChart;
 import barwright.ui.document.DocumentEvent;
 import barwright.ui.document.OpenDocument;
@@ -32,6 +31,9 @@ import java.util.function.Consumer;
  * logged lap the text points to the {@code fatigue --log} command.
  */
 public final class BarLifeView extends JPanel {
+    /** The short caution under the life (the command line prints the full one). */
+    static final String CAUTION = "An estimate with a wide scatter: inspect the bar and its ends for cracks, and "
+            + "follow the maker's schedule and your event's rules.";
     /** Bins of the damage chart. */
     static final int BINS = 12;
 
@@ -64,6 +66,14 @@ public final class BarLifeView extends JPanel {
             shown = outcome;
             redraw();
         }, message -> summary.setText("The fatigue life could not be worked out: " + message));
+    }
+
+    /** Never squashed below the chart's own least height plus a few lines of text. */
+    @Override
+    public java.awt.Dimension getMinimumSize() {
+        java.awt.Dimension text = summary.getPreferredSize();
+        java.awt.Dimension plot = chart.component().getMinimumSize();
+        return new java.awt.Dimension(plot.width, text.height + 4 + plot.height);
     }
 
     @Override
@@ -115,16 +125,17 @@ public final class BarLifeView extends JPanel {
             return;
         }
         FatigueResult result = shown.result();
-        String life = result.infiniteLife() ? "no cycle reaches the endurance limit: no fatigue damage expected"
-                : String.format(Locale.ROOT, "%s laps to failure (%.3g hours of such laps)", laps(result),
+        String life = result.infiniteLife() ? "no cycle reaches the endurance limit: no fatigue damage expected."
+                : String.format(Locale.ROOT, "%s laps to failure (%.3g hours of such laps).", laps(result),
                 result.hoursToFailure());
-        summary.setText("Fatigue life on " + DefaultSpectrum.DESCRIPTION + ", not your circuit: " + life
-                + ". Endurance limit of the bar after surface and size factors "
+        String safety = Double.isFinite(result.fatigueSafetyFactor())
+                ? String.format(Locale.ROOT, "%.2f", result.fatigueSafetyFactor()) : "(no stress)";
+        summary.setText("On the default lap (invented: 12 corners up to 1.2 g, 90 s; not your circuit): " + life
+                + "\nEndurance limit after surface and size factors "
                 + Figures.format(result.curve().enduranceLimit(), Quantity.STRESS, view.units(), 0)
-                + "; fatigue safety factor at the check travel "
-                + (Double.isFinite(result.fatigueSafetyFactor())
-                ? String.format(Locale.ROOT, "%.2f", result.fatigueSafetyFactor()) : "(no stress)")
-                + ". For a logged lap: the command fatigue FILE --log LAP.csv. " + FatigueText.CAUTION);
+                + "; fatigue safety factor at the check travel, swung both ways: " + safety
+                + (result.fatigueSafetyFactor() < 1 ? " (below 1: that much travel, again and again, wears the bar)."
+                : ".") + "\nFor your own lap: the command fatigue FILE --log LAP.csv.\n" + CAUTION);
         chart.show(shown.byRange(), view.units());
     }
 

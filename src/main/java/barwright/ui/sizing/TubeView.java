@@ -39,14 +39,15 @@ import java.util.List;
  */
 final class TubeView extends JPanel {
     static final String[] COLUMNS = {"Tube", "Material", "Link rate", "Rate vs solid", "Mass", "Mass saved",
-        "Largest stress", "Stress vs solid", "Safety factor", "Fatigue life"};
+        "Largest stress", "Fatigue life", "Stress vs solid", "Safety factor"};
     static final String[] HELP = {"The tube as the catalogue names it", "The tube's material",
         "Force per unit of relative link travel at the same hole", "The tube's rate over the solid bar's, less one",
         "The tube's mass", "The solid bar's mass less the tube's, and as a share of the solid's",
-        "Largest von Mises stress at the check travel", "The tube's largest stress over the solid bar's, less one",
-        "Static safety factor against yield at the check travel",
+        "Largest von Mises stress at the check travel",
         "Laps to failure on the default lap (invented: 12 corners up to 1.2 g), the tube in the car; "
-                + "\"no damage\": no cycle reaches the endurance limit"};
+                + "\"no damage\": no cycle reaches the endurance limit",
+        "The tube's largest stress over the solid bar's, less one",
+        "Static safety factor against yield at the check travel"};
     private final SizingContext context;
     private final FigureFormat format;
     private final JComboBox<String> axle = new JComboBox<>(new String[]{"front bar", "rear bar"});
@@ -224,8 +225,8 @@ final class TubeView extends JPanel {
                 + ": link rate " + format.text(result.linkRate(), Quantity.LINEAR_RATE) + ", mass "
                 + format.text(result.mass(), Quantity.MASS) + ", largest stress "
                 + format.text(result.maxVonMisesStress(), Quantity.STRESS) + ", safety factor "
-                + format.factor(result.safetyFactor()) + ", fatigue life "
-                + TubeOutput.lifeText(shown.lives().solid()) + " on the default lap (invented). "
+                + format.factor(result.safetyFactor()) + "; fatigue life on the default lap (invented): "
+                + TubeOutput.lifeText(shown.lives().solid()) + ". "
                 + (shown.comparison().matches().isEmpty() ? "No tube tried comes within 2 % of its rate."
                 : shown.comparison().matches().size() + " tubes come within 2 % of its rate, lightest first.");
         if (!stillApplies()) {
@@ -293,9 +294,9 @@ final class TubeView extends JPanel {
                 case 5 -> format.text(match.massSaved(), Quantity.MASS)
                         + String.format(locale, " (%.0f %%)", 100 * match.massSaved() / solidBar.mass());
                 case 6 -> format.text(match.maxStress(), Quantity.STRESS);
-                case 7 -> String.format(locale, "%+.0f %%", 100 * (match.maxStress() / solidBar.maxVonMisesStress() - 1));
-                case 8 -> format.factor(match.safetyFactor());
-                default -> TubeOutput.lifeText(shown.lives().tubes().get(row));
+                case 7 -> TubeOutput.lifeText(shown.lives().tubes().get(row));
+                case 8 -> String.format(locale, "%+.0f %%", 100 * (match.maxStress() / solidBar.maxVonMisesStress() - 1));
+                default -> format.factor(match.safetyFactor());
             };
         }
     }

@@ -98,7 +98,7 @@ class SizingStudiesWindowTest {
         // each tube's fatigue life on the default lap, as the core gives it (sizing.TubeLivesTest checks the core)
         TubeLives lives = TubeLives.of(car, AxlePosition.FRONT, core, defaultLap());
         for (int row = 0; row < core.matches().size(); row++) {
-            assertThat(table.valueAt(TableCell.row(row).column(9))).isEqualTo(TubeOutput.lifeText(lives.tubes().get(row)));
+            assertThat(table.valueAt(TableCell.row(row).column(7))).isEqualTo(TubeOutput.lifeText(lives.tubes().get(row)));
         }
         for (int row = 0; row < core.matches().size(); row++) {
             TubeMatch match = core.matches().get(row);

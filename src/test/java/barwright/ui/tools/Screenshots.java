@@ -61,7 +61,7 @@ public final class Screenshots {
         // the front bar's fatigue life on the default lap, scrolled into view (worked out off the event thread)
         SwingUtilities.invokeAndWait(() -> {
             JComponent life = (JComponent) find(window, "front.bar.life");
-            life.scrollRectToVisible(new java.awt.Rectangle(0, 0, life.getWidth(), life.getHeight()));
+            life.scrollRectToVisible(new java.awt.Rectangle(0, life.getHeight() - 1, life.getWidth(), 1));
         });
         Thread.sleep(2000);
         settle(window);
