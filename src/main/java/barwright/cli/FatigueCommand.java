@@ -1,6 +1,13 @@
 package barwright.cli;
 
 import barwright.io.BarFatigueReader;
+import barwright.io.DynamicsInputReader;
+import barwright.io.LapLogReader;
+import barwright.io.VehicleFileException;
+import barwright.model.BarFatigueInputs;
+import barwright.model.DynamicsInputs;
+import barwright.model.LapLog;
+import barwright.physics.fatigue.ReplayedStress;
 import barwright.io.FatigueCsv;
 import barwright.io.VehicleDocument;
 import barwright.io.csv.CsvFileException;
@@ -15,8 +22,10 @@ import barwright.report.fatigue.FatigueText;
 
 import java.io.PrintStream;
 import java.nio.file.Path;
+import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 
@@ -32,14 +41,15 @@ final class FatigueCommand implements Command {
 
     @Override
     public String synopsis() {
-        return "fatigue FILE (--spectrum SPECTRUM.csv | --stress-history STRESS.csv) [--laps-per-season N] "
-                + "[--lap-seconds 90] [--mean-stress goodman|gerber] [--json] [--units si|us]";
+        return "fatigue FILE (--log LAP.csv | --spectrum SPECTRUM.csv | --stress-history STRESS.csv) "
+                + "[--laps-per-season N] [--lap-seconds 90] [--mean-stress goodman|gerber] [--json] [--units si|us]";
     }
 
     @Override
     public String summary() {
-        return "fatigue life of each bar over one lap: a spectrum of corners (lateralAccelerationG, countPerLap) "
-                + "through the steady model, or a stress history (stressMPa) counted directly against the front "
+        return "fatigue life of each bar over one lap: a logged lap (timeS, lateralAccelerationG) replayed "
+                + "through the roll in motion (needs the roll inertia and dampers), a spectrum of corners "
+                + "(lateralAccelerationG, countPerLap) through the steady model, or a stress history (stressMPa) counted directly against the front "
                 + "bar's material; rainflow counting, S-N line, Miner damage, laps and hours to failure";
     }
 
@@ -47,14 +57,15 @@ final class FatigueCommand implements Command {
     public int run(List<String> args, PrintStream out, PrintStream err) throws Exception {
         Arguments parsed = Arguments.parse(args, Set.of("json"), Set.of("spectrum", "stress-history", "log",
                 "laps-per-season", "lap-seconds", "mean-stress", "units"));
-        if (parsed.option("log", null) != null) {
-            throw new UsageException("--log is not available yet (the logged-lap replay is still to come); "
-                    + "give the lap as --spectrum (corners by lateral acceleration) or --stress-history instead");
-        }
+        String logFile = parsed.option("log", null);
         String spectrumFile = parsed.option("spectrum", null);
         String historyFile = parsed.option("stress-history", null);
-        if ((spectrumFile == null) == (historyFile == null)) {
-            throw new UsageException("give exactly one of --spectrum SPECTRUM.csv or --stress-history STRESS.csv");
+        if ((logFile != null ? 1 : 0) + (spectrumFile != null ? 1 : 0) + (historyFile != null ? 1 : 0) != 1) {
+            throw new UsageException("give exactly one of --log LAP.csv, --spectrum SPECTRUM.csv or "
+                    + "--stress-history STRESS.csv");
+        }
+        if (logFile != null && parsed.option("lap-seconds", null) != null) {
+            throw new UsageException("--lap-seconds does not go with --log: the log's own duration is the lap time");
         }
         double lapsPerSeason = parsed.number("laps-per-season", 0);
         if (lapsPerSeason < 0 || lapsPerSeason != Math.rint(lapsPerSeason) || lapsPerSeason > 1e7) {
@@ -77,7 +88,31 @@ final class FatigueCommand implements Command {
         Map<String, FatigueResult> results = new LinkedHashMap<>();
         String source;
         try {
-            if (historyFile != null) {
+            if (logFile != null) {
+                LapLog log = LapLogReader.read(Path.of(logFile));
+                DynamicsInputs dynamics = DynamicsInputReader.read(document.tree());
+                requireDampers(dynamics);
+                Map<AxlePosition, BarFatigueInputs> inputs = new EnumMap<>(AxlePosition.class);
+                for (AxlePosition position : AxlePosition.values()) {
+                    if (document.vehicle().axle(position).bar() != null) {
+                        inputs.put(position, BarFatigueReader.read(document, position)); // refused before the replay
+                    }
+                }
+                ReplayedStress.LapStress stress = ReplayedStress.of(pipeline.analyse(), dynamics, log);
+                lapSeconds = stress.lapSeconds();
+                for (AxlePosition position : AxlePosition.values()) {
+                    if (inputs.containsKey(position) && stress.of(position).length >= 2) {
+                        results.put(position.key(), FatigueAnalysis.ofStressHistory(pipeline, position,
+                                inputs.get(position), correction, stress.of(position), lapSeconds));
+                    }
+                }
+                if (results.isEmpty()) {
+                    throw new UsageException("the car has no bar to check");
+                }
+                source = String.format(Locale.ROOT, "Log %s (%d samples, %.1f s, one lap) replayed through the roll "
+                        + "in motion (model.md 14); each bar's stress from its suspension's roll at each sample.",
+                        logFile, log.times().length, lapSeconds);
+            } else if (historyFile != null) {
                 double[] history = FatigueCsv.readStressHistory(Path.of(historyFile));
                 results.put("history", FatigueAnalysis.ofStressHistory(pipeline, AxlePosition.FRONT,
                         BarFatigueReader.read(document, AxlePosition.FRONT), correction, history, lapSeconds));
@@ -98,13 +133,29 @@ final class FatigueCommand implements Command {
                         + "rest to its peak lateral acceleration and back.";
             }
         } catch (CsvFileException refused) {
-            err.println("barwright: the " + (historyFile != null ? "stress history " + historyFile
-                    : "spectrum " + spectrumFile) + " was refused:");
+            err.println("barwright: the " + (logFile != null ? "log " + logFile : historyFile != null
+                    ? "stress history " + historyFile : "spectrum " + spectrumFile) + " was refused:");
             refused.problems().forEach(problem -> err.println("  " + problem));
             return Cli.REFUSED;
         }
+        String described = source;
+        double lapLength = lapSeconds;
         Printed.jsonOrText(out, parsed, () -> FatigueJson.of(results),
-                () -> FatigueText.of(results, units, (int) lapsPerSeason, lapSeconds, source));
+                () -> FatigueText.of(results, units, (int) lapsPerSeason, lapLength, described));
         return Cli.OK;
+    }
+
+    /**
+     * Without dampers the roll model has no damping at all: every corner would ring on for the rest of the lap and
+     * be counted as many cycles. So the replay needs both axles' damper curves.
+     */
+    private static void requireDampers(DynamicsInputs dynamics) throws VehicleFileException {
+        for (AxlePosition position : AxlePosition.values()) {
+            if (dynamics == null || dynamics.damper(position) == null) {
+                throw new VehicleFileException(position.key() + ".damper is missing: the fatigue life of a replayed "
+                        + "log needs both axles' damper curves (without them the roll rings undamped after every "
+                        + "corner); give them (file-format.md, \"Roll dynamics\"), or use --spectrum");
+            }
+        }
     }
 }

@@ -2,6 +2,7 @@ package barwright.cli;
 
 import barwright.io.AtomicFileWriter;
 import barwright.io.VehicleDocument;
+import barwright.io.VehicleFileException;
 import barwright.io.VehicleFileWriter;
 import barwright.loading.VehicleLoader;
 import barwright.model.AntiRollBar;
@@ -16,7 +17,10 @@ import barwright.report.sizing.SweepOutput;
 import barwright.report.sizing.TubeOutput;
 import barwright.sizing.BarSearch;
 import barwright.sizing.Candidate;
+import barwright.io.csv.CsvFileException;
 import barwright.sizing.Constraints;
+import barwright.sizing.FatigueLap;
+import barwright.sizing.TubeLives;
 import barwright.sizing.DiameterSweep;
 import barwright.sizing.ExactSize;
 import barwright.sizing.ExactSolution;
@@ -56,7 +60,8 @@ final class SizeCommand implements Command {
     static final Set<String> SWITCHES = Set.of("json");
     static final Set<String> OPTIONS = Set.of("axle", "target-share", "target-offset", "target-gradient",
             "min-safety", "no-lift", "max-mass", "max-diameter", "materials", "catalogues", "holes", "count",
-            "tie-band", "tube-diameter", "sweep-csv", "apply", "output", "tubes-like-solid", "units");
+            "tie-band", "tube-diameter", "sweep-csv", "apply", "output", "tubes-like-solid", "units", "min-laps",
+            "fatigue-log");
 
     @Override
     public String name() {
@@ -67,6 +72,7 @@ final class SizeCommand implements Command {
     public String synopsis() {
         return "size FILE --axle front|rear|both (--target-share S | --target-offset D) [--target-gradient DEG_PER_G]"
                 + " [--min-safety 1.5] [--no-lift none|front|rear|both] [--max-mass KG] [--max-diameter MM]"
+                + " [--min-laps N [--fatigue-log LAP.csv]]"
                 + " [--materials current|all|NAME,...] [--catalogues NAME|PATH,...] [--holes 1,2,...] [--count 10]"
                 + " [--tie-band 0.1] [--tube-diameter MM] [--sweep-csv OUT.csv] [--apply RANK --output OUT.json]"
                 + " [--tubes-like-solid current|MM] [--json] [--units si|us]";
@@ -94,7 +100,14 @@ final class SizeCommand implements Command {
             return tubesLikeSolid(parsed, document, axles, materials, sizes, units, out);
         }
         Targets targets = targets(parsed);
-        Constraints constraints = constraints(parsed);
+        Constraints constraints;
+        try {
+            constraints = constraints(parsed).withMinimumLife(MinimumLifeOption.read(parsed, document));
+        } catch (CsvFileException refused) {
+            err.println("barwright: the log " + parsed.option("fatigue-log", "") + " was refused:");
+            refused.problems().forEach(problem -> err.println("  " + problem));
+            return Cli.REFUSED;
+        }
         Map<AxlePosition, SizeChoices> choices = new EnumMap<>(AxlePosition.class);
         List<Integer> holes = holes(parsed.option("holes", null));
         for (AxlePosition axle : axles) {
@@ -163,7 +176,7 @@ final class SizeCommand implements Command {
 
     private int tubesLikeSolid(Arguments parsed, VehicleDocument document, List<AxlePosition> axles,
                                Map<AxlePosition, List<Material>> materials, List<StockSize> sizes, UnitSystem units,
-                               PrintStream out) throws UsageException {
+                               PrintStream out) throws UsageException, VehicleFileException {
         if (axles.size() != 1) {
             throw new UsageException("--tubes-like-solid matches one axle's bar: give --axle front or rear");
         }
@@ -183,8 +196,9 @@ final class SizeCommand implements Command {
         TubeEquivalents.Comparison comparison = TubeEquivalents.compare(solidBar,
                 document.vehicle().differentialWheelTravel(), sizes, materials.get(axle),
                 TubeEquivalents.DEFAULT_TOLERANCE);
-        Printed.jsonOrTextWithCaution(out, parsed, () -> TubeOutput.json(comparison),
-                () -> TubeOutput.text(comparison, units));
+        TubeLives lives = TubeLives.of(document.vehicle(), axle, comparison, FatigueLap.onDefaultLap(document));
+        Printed.jsonOrTextWithCaution(out, parsed, () -> TubeOutput.json(comparison, lives),
+                () -> TubeOutput.text(comparison, lives, units));
         return Cli.OK;
     }
 

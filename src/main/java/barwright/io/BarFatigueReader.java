@@ -49,7 +49,37 @@ public final class BarFatigueReader {
         return new BarFatigueInputs(strength, settings);
     }
 
-    /** Checks the material's optional fatigue keys; a problem for each bad one. Used by the bar reader too. */
+    /**
+     * @return the surface and K_f of the axle's bar, and its material's own fatigue strength where the file gives
+     * one (a built-in material's is not repeated here), for the sizing search's least life
+     * @throws VehicleFileException naming the key path of a bad value
+     */
+    public static Given given(VehicleDocument document, AxlePosition position) throws VehicleFileException {
+        String barPath = position.key() + "." + BAR;
+        JsonNode barNode = document.tree().path(position.key()).path(BAR);
+        NodeReader reader = new NodeReader();
+        JsonNode material = barNode.path(MATERIAL);
+        FatigueStrength strength = material.isObject() && (!NodeReader.isAbsent(material, ULTIMATE_STRENGTH_MPA)
+                || !NodeReader.isAbsent(material, ENDURANCE_LIMIT_MPA))
+                ? given(material, barPath + "." + MATERIAL, reader) : null;
+        BarFatigueSettings settings = barNode.isObject() ? settings(barNode, barPath, reader)
+                : BarFatigueSettings.DEFAULT;
+        if (reader.hasProblems()) {
+            throw new VehicleFileException(reader.problems());
+        }
+        return new Given(strength, settings);
+    }
+
+    /**
+     * What a bar's keys give for fatigue.
+     *
+     * @param ownStrength the material's own strengths, or null where the file gives none
+     * @param settings    surface and K_f
+     */
+    public record Given(FatigueStrength ownStrength, BarFatigueSettings settings) {
+    }
+
+    /** @return the bar material's fatigue strength (its own keys, or the built-in one's); a problem for each bad key */
     static FatigueStrength strength(JsonNode barNode, String barPath, AntiRollBar bar, NodeReader reader) {
         String path = barPath + "." + MATERIAL;
         JsonNode material = barNode.path(MATERIAL);
@@ -65,6 +95,36 @@ public final class BarFatigueReader {
             }
             return builtIn.orElse(null);
         }
+        return given(material, path, reader);
+    }
+
+    /**
+     * Checks every bar's optional fatigue keys as the vehicle file is read, so that a custom material whose
+     * endurance limit is not below its ultimate strength (or a bad surface or K_f) refuses the file with its key
+     * path, not only the fatigue command. A custom material without fatigue data is still accepted here: only
+     * the fatigue check needs it.
+     */
+    static void check(JsonNode tree, NodeReader reader) {
+        for (AxlePosition position : AxlePosition.values()) {
+            String barPath = position.key() + "." + BAR;
+            JsonNode barNode = tree.path(position.key()).path(BAR);
+            if (!barNode.isObject()) {
+                continue;
+            }
+            JsonNode material = barNode.path(MATERIAL);
+            if (material.isObject() && (!NodeReader.isAbsent(material, ULTIMATE_STRENGTH_MPA)
+                    || !NodeReader.isAbsent(material, ENDURANCE_LIMIT_MPA))) {
+                given(material, barPath + "." + MATERIAL, reader);
+            }
+            settings(barNode, barPath, reader);
+        }
+    }
+
+    /** @return the strengths given in the material object (both required once either is), or null with problems */
+    private static FatigueStrength given(JsonNode material, String path, NodeReader reader) {
+        int before = reader.problems().size();
+        boolean hasUltimate = !NodeReader.isAbsent(material, ULTIMATE_STRENGTH_MPA);
+        boolean hasEndurance = !NodeReader.isAbsent(material, ENDURANCE_LIMIT_MPA);
         double ultimate = reader.number(material, path, ULTIMATE_STRENGTH_MPA, Range.between(10, 5000, "MPa"));
         double endurance = reader.number(material, path, ENDURANCE_LIMIT_MPA, Range.between(1, 3000, "MPa"));
         if (hasUltimate && hasEndurance && endurance >= ultimate) {
@@ -73,7 +133,7 @@ public final class BarFatigueReader {
                     + " MPa (an endurance limit is a fraction of it, about half for steels)");
             return null;
         }
-        if (reader.hasProblems()) {
+        if (reader.problems().size() > before) {
             return null;
         }
         return new FatigueStrength(ultimate * 1e6, endurance * 1e6, FatigueStrength.STEEL_KNEE_CYCLES);

@@ -81,6 +81,7 @@ public final class VehicleFileReader {
         }
         Vehicle vehicle = readVehicle(tree, reader);
         DynamicsInputReader.read(tree, reader); // dampers and roll inertia: a bad one refuses the file too
+        BarFatigueReader.check(tree, reader); // fatigue strengths, surface and K_f: likewise
         if (reader.hasProblems() || vehicle == null) {
             throw new VehicleFileException(reader.problems());
         }

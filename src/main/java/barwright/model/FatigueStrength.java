@@ -1,7 +1,7 @@
 package barwright.model;
 
 /**
- * What a material's fatigue life is drawn from (docs/model.md 11).
+ * What a material's fatigue life is drawn from (docs/model.md 13).
  *
  * @param ultimateStrength tensile ultimate strength S_ut (Pa)
  * @param enduranceLimit   the rotating-beam endurance limit S'_e of a polished test piece (Pa), before the

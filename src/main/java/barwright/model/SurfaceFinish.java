@@ -5,8 +5,8 @@ import java.util.Optional;
 
 /**
  * The bar's surface, for the Marin surface factor k_a = a S_ut^b (S_ut in MPa). Coefficients: Shigley's
- * Mechanical Engineering Design, table of surface-factor parameters (ground a = 1.58, b = -0.085; machined or
- * cold-drawn 4.51, -0.265; as-forged 272, -0.995), from memory. Shot-peening has no row in that table; its
+ * Mechanical Engineering Design, 9th ed., Table 6-2 (ground a = 1.58, b = -0.085; machined or cold-drawn 4.51,
+ * -0.265; as-forged 272, -0.995), read on a web copy of the book (docs/validation.md, Fatigue, [R3]). Shot-peening has no row in that table; its
  * compressive skin helps, but no credit is taken for it here: a shot-peened bar is given the ground factor
  * (common practice, on the safe side).
  */

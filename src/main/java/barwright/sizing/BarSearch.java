@@ -16,6 +16,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.stream.IntStream;
 
@@ -234,7 +235,26 @@ public final class BarSearch {
                     return new Outcome(figures, axle == AxlePosition.FRONT ? Rejection.FRONT_LIFT : Rejection.REAR_LIFT);
                 }
             }
+            FatigueLimit limit = constraints.minimumLife();
+            if (limit != null) {
+                RollBalance balance = evaluator.balance(front, rear);
+                for (AxlePosition axle : request.axles()) {
+                    Rejection shortfall = fatigue(axle == AxlePosition.FRONT ? front : rear, balance, limit);
+                    if (shortfall != null) {
+                        return new Outcome(figures, shortfall);
+                    }
+                }
+            }
             return new Outcome(figures, null);
+        }
+
+        /** @return why the sized bar falls short of the least life, or null where it lasts */
+        private Rejection fatigue(AxleState state, RollBalance balance, FatigueLimit limit) {
+            OptionalDouble laps = limit.lap().lapsToFailure(evaluator.vehicle(), state, balance);
+            if (laps.isEmpty()) {
+                return Rejection.NO_FATIGUE_DATA;
+            }
+            return laps.getAsDouble() < limit.minLaps() ? Rejection.FATIGUE_LIFE : null;
         }
 
         private Candidate candidate(List<BarChoice> bars, SetupFigures figures) {

@@ -12,9 +12,16 @@ import java.util.Set;
  * @param mustNotLiftBeforeLimit axles whose inside wheel must stay down up to the limit (either turn)
  * @param maxBarMass             heaviest bar allowed (kg), or null for no limit
  * @param maxOuterDiameter       largest outside diameter allowed (m), or null for no limit
+ * @param minimumLife            the least fatigue life of each sized bar, or null for no limit
  */
 public record Constraints(double minSafetyFactor, Set<AxlePosition> mustNotLiftBeforeLimit, Double maxBarMass,
-                          Double maxOuterDiameter) {
+                          Double maxOuterDiameter, FatigueLimit minimumLife) {
+    /** No fatigue limit. */
+    public Constraints(double minSafetyFactor, Set<AxlePosition> mustNotLiftBeforeLimit, Double maxBarMass,
+                       Double maxOuterDiameter) {
+        this(minSafetyFactor, mustNotLiftBeforeLimit, maxBarMass, maxOuterDiameter, null);
+    }
+
     public Constraints {
         if (!(minSafetyFactor >= 0 && Double.isFinite(minSafetyFactor))) {
             throw new IllegalArgumentException("the least safety factor must be zero or more, was " + minSafetyFactor);
@@ -27,6 +34,11 @@ public record Constraints(double minSafetyFactor, Set<AxlePosition> mustNotLiftB
         if (maxOuterDiameter != null && !(maxOuterDiameter > 0)) {
             throw new IllegalArgumentException("the largest outside diameter must be positive, was " + maxOuterDiameter);
         }
+    }
+
+    /** @return these constraints with a least fatigue life (null for none) */
+    public Constraints withMinimumLife(FatigueLimit limit) {
+        return new Constraints(minSafetyFactor, mustNotLiftBeforeLimit, maxBarMass, maxOuterDiameter, limit);
     }
 
     /** @return only a safety factor, nothing else */

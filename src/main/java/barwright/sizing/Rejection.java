@@ -7,7 +7,9 @@ public enum Rejection {
     SAFETY_FACTOR("safety factor below the limit at the check travel"),
     NO_STABLE_ROLL("no stable roll position"),
     FRONT_LIFT("inside front wheel lifts before the limit"),
-    REAR_LIFT("inside rear wheel lifts before the limit");
+    REAR_LIFT("inside rear wheel lifts before the limit"),
+    FATIGUE_LIFE("fatigue life shorter than the least laps"),
+    NO_FATIGUE_DATA("no fatigue data for the material (give ultimateStrengthMPa and enduranceLimitMPa)");
 
     private final String words;
 

@@ -83,6 +83,28 @@ class FatigueCommandTest {
                         + "\"enduranceLimitMPa\": 700}"));
         assertThat(run(2, "fatigue", custom, "--spectrum", spectrum)[1])
                 .contains("front.bar.material.enduranceLimitMPa", "700", "ultimate strength 600");
-        assertThat(run(2, "fatigue", HATCHBACK, "--log", "lap.csv")[1]).contains("not available yet", "--spectrum");
+        String lap = Path.of("sample-vehicles", "laps", "invented-circuit-lap.csv").toString();
+        assertThat(run(2, "fatigue", HATCHBACK, "--log", lap)[1]).contains("front.damper", "--spectrum");
+        assertThat(run(2, "fatigue", HATCHBACK, "--log", lap, "--spectrum", spectrum)[1]).contains("exactly one");
+    }
+
+    /** The invented lap replayed on the invented damped hatchback: both bars, the lap's own duration for hours. */
+    @Test
+    void aLoggedLapIsReplayedForBothBars() throws Exception {
+        String car = Path.of("sample-vehicles", "club-hatchback-dampers.json").toString();
+        String lap = Path.of("sample-vehicles", "laps", "invented-circuit-lap.csv").toString();
+        String[] outcome = run(0, "fatigue", car, "--log", lap, "--json");
+        JsonNode json = new ObjectMapper().readTree(outcome[0]);
+        for (String axle : new String[]{"front", "rear"}) {
+            JsonNode bar = json.path(axle);
+            assertThat(bar.path("cycles").size()).as(axle).isGreaterThan(10);
+            double damage = bar.path("damagePerLap").asDouble();
+            if (damage > 0) {
+                // the log runs from 0.00 s to 60.28 s: that is the lap time of the hours
+                assertThat(bar.path("hoursToFailure").asDouble() / bar.path("lapsToFailure").asDouble())
+                        .isCloseTo(60.28 / 3600, within(1e-6));
+            }
+        }
+        assertThat(outcome[0]).doesNotContain("Infinity", "NaN");
     }
 }

@@ -1,5 +1,6 @@
 package barwright.physics;
 
+import barwright.loading.VehicleLoader;
 import barwright.io.VehicleFileReader;
 import barwright.model.Axle;
 import barwright.model.AxlePosition;
@@ -23,7 +24,7 @@ class LinkageCamberGripTest {
     private static final TyreCamber TERMS = new TyreCamber(-2 * DEG, 0.004 / (DEG * DEG), 0.01 / DEG);
 
     private static Vehicle roadsterWithCamberTerms() throws Exception {
-        Vehicle roadster = VehicleFileReader.read(Path.of("sample-vehicles", "sprint-roadster.json")).vehicle();
+        Vehicle roadster = VehicleLoader.read(Path.of("sample-vehicles", "sprint-roadster.json")).vehicle();
         return roadster.withFront(withCamberTerms(roadster.front())).withRear(withCamberTerms(roadster.rear()));
     }
 
@@ -86,7 +87,7 @@ class LinkageCamberGripTest {
         // at the limit the capacity equals the force the axle must give, m a_y share (model.md 8)
         assertThat(result.masses().mass() * share * accel).isCloseTo(expected, within(1e-6 * expected));
         // and the cambers cost grip: without camber terms the same car goes faster
-        Vehicle plain = VehicleFileReader.read(Path.of("sample-vehicles", "sprint-roadster.json")).vehicle();
+        Vehicle plain = VehicleLoader.read(Path.of("sample-vehicles", "sprint-roadster.json")).vehicle();
         assertThat(VehicleAnalysis.analyse(plain).leftTurn().limit()).isGreaterThan(limit);
         assertThat(limit / STANDARD_GRAVITY).isBetween(0.8, 1.6);
     }

@@ -1,5 +1,6 @@
 package barwright.physics;
 
+import barwright.loading.VehicleLoader;
 import barwright.io.VehicleFileReader;
 import barwright.model.DoubleWishbone;
 import barwright.model.FrontViewPoint;
@@ -18,7 +19,7 @@ import static org.assertj.core.api.Assertions.assertThat;
  */
 class LinkageWarningsTest {
     private static Vehicle saloon() throws Exception {
-        return VehicleFileReader.read(Path.of("sample-vehicles", "road-saloon.json")).vehicle();
+        return VehicleLoader.read(Path.of("sample-vehicles", "road-saloon.json")).vehicle();
     }
 
     @Test

@@ -1,5 +1,6 @@
 package barwright.physics;
 
+import barwright.loading.VehicleLoader;
 import barwright.io.VehicleFileReader;
 import barwright.model.Axle;
 import barwright.model.AxlePosition;
@@ -31,7 +32,7 @@ class RollCentreMigrationTest {
     private static final double SAME = 1e-9;
 
     private static Vehicle sample(String name) throws Exception {
-        return VehicleFileReader.read(Path.of("sample-vehicles", name + ".json")).vehicle();
+        return VehicleLoader.read(Path.of("sample-vehicles", name + ".json")).vehicle();
     }
 
     /** The same car with a linkage on one axle replaced by its constant roll-centre height typed in. */

@@ -4,6 +4,7 @@ import barwright.model.SpectrumLevel;
 
 import barwright.model.AntiRollBar;
 import barwright.model.AxlePosition;
+import barwright.model.Vehicle;
 import barwright.physics.AnalysisPipeline;
 import barwright.physics.AxleStiffness;
 import barwright.physics.BarAnalysis;
@@ -11,8 +12,6 @@ import barwright.physics.RollBalance;
 import barwright.physics.bar.BarResult;
 
 import java.util.List;
-
-import static barwright.units.Constants.STANDARD_GRAVITY;
 
 /**
  * A bar's stress from the quasi-static steady model (docs/model.md 13): at a_y the body end rolls phi = a_y
@@ -22,6 +21,9 @@ import static barwright.units.Constants.STANDARD_GRAVITY;
  * a_y, signed with a_y. The linear stage ignores a lifted inside wheel.
  */
 public final class BarStressHistory {
+    /** Travel at which a bar is analysed where the vehicle gives no check travel (m): any size would do. */
+    private static final double REFERENCE_TRAVEL = 0.05;
+
     private BarStressHistory() {
     }
 
@@ -40,15 +42,36 @@ public final class BarStressHistory {
         AxleStiffness front = pipeline.axleStiffness(AxlePosition.FRONT, frontBar, pipeline.barResult(frontBar));
         AxleStiffness rear = pipeline.axleStiffness(AxlePosition.REAR, rearBar, pipeline.barResult(rearBar));
         RollBalance balance = pipeline.balance(front, rear);
-        AxleStiffness axle = position == AxlePosition.FRONT ? front : rear;
+        return stressPerAcceleration(pipeline.vehicle(), position, bar, pipeline.barResult(bar),
+                position == AxlePosition.FRONT ? front : rear, balance);
+    }
+
+    /**
+     * The same for a bar fitted in a sizing search: the axle's stiffness with that bar and the car's balance with
+     * both candidate bars.
+     *
+     * @param atCheckTravel the bar's result at the vehicle's check travel
+     * @return the bar's largest von Mises stress per unit a_y (Pa s^2/m)
+     */
+    public static double stressPerAcceleration(Vehicle vehicle, AxlePosition position, AntiRollBar bar,
+                                               BarResult atCheckTravel, AxleStiffness axle, RollBalance balance) {
         double rollPerAcceleration = position == AxlePosition.FRONT ? balance.roll().frontRollPerAccel()
                 : balance.roll().rearRollPerAccel();
         double suspensionShare = axle.rollStiffness() / axle.suspensionRollStiffness();
-        double travelPerAcceleration = pipeline.vehicle().axle(position).track() * suspensionShare
-                * rollPerAcceleration;
-        // evaluate at 1 g of travel and scale back: the bar models are linear in the travel
-        BarResult atOneG = BarAnalysis.analyse(bar, travelPerAcceleration * STANDARD_GRAVITY);
-        return atOneG.maxVonMisesStress() / STANDARD_GRAVITY;
+        double travelPerAcceleration = vehicle.axle(position).track() * suspensionShare * rollPerAcceleration;
+        return stressPerTravel(vehicle, bar, atCheckTravel) * travelPerAcceleration;
+    }
+
+    /**
+     * @return the bar's largest von Mises stress per metre of differential wheel travel (Pa/m): the bar models
+     * are linear in the travel, so the check travel's result scales
+     */
+    public static double stressPerTravel(Vehicle vehicle, AntiRollBar bar, BarResult atCheckTravel) {
+        double travel = vehicle.differentialWheelTravel();
+        if (atCheckTravel != null && travel > 0) {
+            return atCheckTravel.maxVonMisesStress() / travel;
+        }
+        return BarAnalysis.analyse(bar, REFERENCE_TRAVEL).maxVonMisesStress() / REFERENCE_TRAVEL;
     }
 
     /**

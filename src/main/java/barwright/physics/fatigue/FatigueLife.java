@@ -35,6 +35,28 @@ public final class FatigueLife {
         return new FatigueResult(damage, laps, laps * lapSeconds / 3600, safety, merged(cycles), curve);
     }
 
+    /**
+     * The Miner damage of cycles counted on a history that is to be scaled: cycles of a lap's a_y, say, times a
+     * bar's stress per a_y. Scaling a history by a constant scales each rainflow cycle's range and mean and keeps
+     * its count, so a search counts the lap once and scales for each bar.
+     *
+     * @param cycles the counted cycles of the unscaled history
+     * @param scale  the factor that turns them into nominal stresses (Pa per unit of the history)
+     * @return the damage sum of one lap
+     */
+    public static double damage(List<StressCycle> cycles, double scale, SnCurve curve, double stressConcentration,
+                                MeanStressCorrection correction) {
+        double size = Math.abs(scale);
+        double damage = 0;
+        for (StressCycle cycle : cycles) {
+            double amplitude = stressConcentration * size * cycle.amplitude();
+            double mean = stressConcentration * size * Math.abs(cycle.mean());
+            damage += cycle.count() / curve.cyclesToFailure(correction.equivalentAmplitude(amplitude, mean,
+                    curve.ultimateStrength()));
+        }
+        return damage;
+    }
+
     /** @return the cycles that one cycle of that kind lasts */
     static double cyclesToFailure(StressCycle cycle, SnCurve curve, double stressConcentration,
                                   MeanStressCorrection correction) {

@@ -5,8 +5,9 @@ import java.util.List;
 
 /**
  * Rainflow counting as the three-point procedure of ASTM E1049-85, "Standard Practices for Cycle Counting in
- * Fatigue Analysis", section 5.4.4 (the procedure recalled from memory; its worked example's table was not read
- * here, see RainflowTest). Cycles still open at the end of the history are counted as half cycles.
+ * Fatigue Analysis", section 5.4.4 (the procedure recalled from memory; the standard was not read, its example
+ * history and counts were read as two pages reproduce them, see RainflowTest and docs/validation.md). Cycles still
+ * open at the end of the history are counted as half cycles.
  */
 public final class Rainflow {
     private Rainflow() {

@@ -8,8 +8,9 @@ import barwright.model.FatigueStrength;
  * The S-N line of a bar in Basquin's form S_f = a N^b through (10^3, f S_ut) and (N_e, S_e), with S_e the
  * Marin-modified endurance limit S_e = k_a k_b S'_e (Shigley's Mechanical Engineering Design, fatigue chapter:
  * the 10^3-cycle strength f S_ut, a = (f S_ut)^2 / S_e and b = -log(f S_ut / S_e) / 3 for N_e = 10^6, the Marin
- * equation, the size factor k_b = 1.24 d^-0.107 for 2.79 to 51 mm and 1.51 d^-0.157 for 51 to 254 mm; all from
- * memory). The load factor k_c is 1 because the stresses are von Mises equivalents (same treatment); the
+ * equation, the size factor k_b = 1.24 d^-0.107 for 2.79 to 51 mm and 1.51 d^-0.157 for 51 to 254 mm, Eq. 6-20 of
+ * the 9th ed.; the size factor and the worked example 6-2 of the line read on a web copy of the book,
+ * docs/validation.md [R3]; f's fit from memory). The load factor k_c is 1 because the stresses are von Mises equivalents (same treatment); the
  * temperature and reliability factors are 1 (room temperature, 50 % reliability). A tube takes its outside
  * diameter for k_b (common practice). Below S_e the life is infinite.
  *

@@ -13,7 +13,7 @@ public final class FatigueText {
     /** The caution printed under every fatigue result. */
     public static final String CAUTION = "Caution: a fatigue life is an estimate with a wide scatter (a factor of "
             + "several on life is usual); it comes from handbook material data, the surface and notch factors "
-            + "given, and a steady-state model of the stress. Inspect bars, ends and links for cracks, replace on "
+            + "given, and a model of the stress (the steady model for a spectrum, the roll in motion for a log). Inspect bars, ends and links for cracks, replace on "
             + "the maker's schedule, and follow the car maker's data and your event's rules.";
 
     private FatigueText() {

@@ -106,6 +106,10 @@ public final class SizingText {
             parts.add("outside diameter at most " + TextTable.figure(constraints.maxOuterDiameter(), Quantity.LENGTH,
                     units, units == UnitSystem.US ? 3 : 1));
         }
+        if (constraints.minimumLife() != null) {
+            parts.add(String.format(Locale.ROOT, "fatigue life at least %.0f laps of %s",
+                    constraints.minimumLife().minLaps(), constraints.minimumLife().lap().description()));
+        }
         return String.join("; ", parts);
     }
 

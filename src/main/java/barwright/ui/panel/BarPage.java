@@ -5,6 +5,7 @@ import barwright.model.AxlePosition;
 import barwright.model.Material;
 import barwright.model.MaterialLibrary;
 import barwright.ui.document.OpenDocument;
+import barwright.ui.fatigue.BarLifeView;
 import barwright.ui.field.FieldCatalogue;
 import barwright.ui.field.NumberText;
 import barwright.ui.field.ViewSettings;
@@ -45,11 +46,13 @@ final class BarPage extends EditorPage {
     private final AxlePosition axle;
     private final String bar;
     private JsonNode removedBar;
+    private final BarLifeView life;
 
     BarPage(OpenDocument document, ViewSettings view, AxlePosition axle) {
         super(document, view);
         this.axle = axle;
         this.bar = axle.key() + ".bar";
+        this.life = new BarLifeView(document, view, axle);
         rebuild();
     }
 
@@ -92,6 +95,8 @@ final class BarPage extends EditorPage {
         form.field(new NumberField(document, view, KeyPath.of(bar).child("linkMotionRatio"),
                 FieldCatalogue.LINK_RATIO));
         selectedHole(form);
+        form.group("Fatigue life");
+        form.note(life);
     }
 
     private void material(Form form) {

@@ -7,7 +7,11 @@ import barwright.model.SolidSection;
 import barwright.model.Vehicle;
 import barwright.physics.bar.BarResult;
 import barwright.sizing.BarChoice;
+import barwright.io.VehicleFileException;
+import barwright.report.sizing.TubeOutput;
+import barwright.sizing.FatigueLap;
 import barwright.sizing.TubeEquivalents;
+import barwright.sizing.TubeLives;
 import barwright.sizing.TubeMatch;
 import barwright.ui.document.DocumentEvent;
 import barwright.ui.panel.FigureFormat;
@@ -29,16 +33,20 @@ import java.util.List;
 
 /**
  * Tube or solid: for the car's solid bar (or a solid bar of a given diameter in its place) the catalogue tubes
- * within 2 % of its rate, lightest first, with the mass saved and both bars' stress at the check travel; the
+ * within 2 % of its rate, lightest first, with the mass saved, both bars' stress at the check travel and their
+ * fatigue life on the default lap; the
  * chosen tube can be put in the car as one undoable edit. Event thread.
  */
 final class TubeView extends JPanel {
     static final String[] COLUMNS = {"Tube", "Material", "Link rate", "Rate vs solid", "Mass", "Mass saved",
-        "Largest stress", "Stress vs solid", "Safety factor"};
+        "Largest stress", "Fatigue life", "Stress vs solid", "Safety factor"};
     static final String[] HELP = {"The tube as the catalogue names it", "The tube's material",
         "Force per unit of relative link travel at the same hole", "The tube's rate over the solid bar's, less one",
         "The tube's mass", "The solid bar's mass less the tube's, and as a share of the solid's",
-        "Largest von Mises stress at the check travel", "The tube's largest stress over the solid bar's, less one",
+        "Largest von Mises stress at the check travel",
+        "Laps to failure on the default lap (invented: 12 corners up to 1.2 g), the tube in the car; "
+                + "\"no damage\": no cycle reaches the endurance limit",
+        "The tube's largest stress over the solid bar's, less one",
         "Static safety factor against yield at the check travel"};
     private final SizingContext context;
     private final FigureFormat format;
@@ -59,7 +67,8 @@ final class TubeView extends JPanel {
     private Found shown;
 
     /** A finished match, with where it was made. */
-    private record Found(Vehicle vehicle, AxlePosition axle, TubeEquivalents.Comparison comparison) {
+    private record Found(Vehicle vehicle, AxlePosition axle, TubeEquivalents.Comparison comparison,
+                         TubeLives lives) {
     }
 
     TubeView(SizingContext context) {
@@ -79,7 +88,7 @@ final class TubeView extends JPanel {
         ButtonGroup which = new ButtonGroup();
         which.add(own);
         which.add(given);
-        table = new FigureTable("tubes.results", model, HELP, new int[]{195, 140, 95, 95, 70, 115, 100, 105, 95});
+        table = new FigureTable("tubes.results", model, HELP, new int[]{195, 140, 95, 95, 70, 115, 100, 105, 95, 110});
         table.getSelectionModel().addListSelectionListener(event -> refreshApply());
         find.addActionListener(event -> find());
         apply.setToolTipText("Writes the chosen tube and its material into the open car (same hole); Edit > Undo "
@@ -166,9 +175,11 @@ final class TubeView extends JPanel {
         AntiRollBar solidBar;
         List<String> names;
         List<Material> tried;
+        FatigueLap lap;
         AxlePosition position = chosenAxle();
         try {
             vehicle = context.currentCar().vehicle();
+            lap = FatigueLap.onDefaultLap(context.currentCar());
             AntiRollBar bar = vehicle.axle(position).bar();
             if (bar == null) {
                 throw new IllegalArgumentException("The " + position.key() + " axle has no bar to match: give it one "
@@ -182,14 +193,16 @@ final class TubeView extends JPanel {
             tried = SearchPlan.materials(materials.ownTicked(), materials.libraryTicked(), bar);
             names = catalogues.chosen();
             SearchPlan.sizes(names);
-        } catch (IllegalArgumentException | IllegalStateException refused) {
+        } catch (IllegalArgumentException | IllegalStateException | VehicleFileException refused) {
             work.say(refused.getMessage(), true);
             return;
         }
         AntiRollBar matched = solidBar;
-        work.run("Trying the tubes", "tubes", "The tubes could not be tried", progress -> new Found(vehicle, position,
-                TubeEquivalents.compare(matched, vehicle.differentialWheelTravel(), SearchPlan.sizes(names), tried,
-                        TubeEquivalents.DEFAULT_TOLERANCE)), found -> {
+        work.run("Trying the tubes", "tubes", "The tubes could not be tried", progress -> {
+            TubeEquivalents.Comparison comparison = TubeEquivalents.compare(matched, vehicle.differentialWheelTravel(),
+                    SearchPlan.sizes(names), tried, TubeEquivalents.DEFAULT_TOLERANCE);
+            return new Found(vehicle, position, comparison, TubeLives.of(vehicle, position, comparison, lap));
+        }, found -> {
             shown = found;
             model.fireTableDataChanged();
             if (model.getRowCount() > 0) {
@@ -212,7 +225,8 @@ final class TubeView extends JPanel {
                 + ": link rate " + format.text(result.linkRate(), Quantity.LINEAR_RATE) + ", mass "
                 + format.text(result.mass(), Quantity.MASS) + ", largest stress "
                 + format.text(result.maxVonMisesStress(), Quantity.STRESS) + ", safety factor "
-                + format.factor(result.safetyFactor()) + ". "
+                + format.factor(result.safetyFactor()) + "; fatigue life on the default lap (invented): "
+                + TubeOutput.lifeText(shown.lives().solid()) + ". "
                 + (shown.comparison().matches().isEmpty() ? "No tube tried comes within 2 % of its rate."
                 : shown.comparison().matches().size() + " tubes come within 2 % of its rate, lightest first.");
         if (!stillApplies()) {
@@ -280,7 +294,8 @@ final class TubeView extends JPanel {
                 case 5 -> format.text(match.massSaved(), Quantity.MASS)
                         + String.format(locale, " (%.0f %%)", 100 * match.massSaved() / solidBar.mass());
                 case 6 -> format.text(match.maxStress(), Quantity.STRESS);
-                case 7 -> String.format(locale, "%+.0f %%", 100 * (match.maxStress() / solidBar.maxVonMisesStress() - 1));
+                case 7 -> TubeOutput.lifeText(shown.lives().tubes().get(row));
+                case 8 -> String.format(locale, "%+.0f %%", 100 * (match.maxStress() / solidBar.maxVonMisesStress() - 1));
                 default -> format.factor(match.safetyFactor());
             };
         }

@@ -2,6 +2,8 @@ package barwright.physics.fatigue;
 
 import org.junit.jupiter.api.Test;
 
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -19,17 +21,33 @@ class RainflowTest {
     }
 
     /**
-     * The history -2, 1, -3, 5, -1, 3, -4, 4, -2 is the one we recall (from memory) as the rainflow example of
-     * ASTM E1049-85 section 5.4.4; its published table was NOT read here (the search found only the standard's
-     * first pages). The expected counts are an independent hand count done for this test with the three-point
-     * rule, written out in docs/validation.md, section Fatigue: ranges 3: 0.5, 4: 1.5, 6: 0.5, 8: 1.0, 9: 0.5.
-     * Exact: counting involves no rounding.
+     * The history -2, 1, -3, 5, -1, 3, -4, 4, -2 quoted as ASTM E1049-85's rainflow example and its counts by range
+     * (docs/validation.md, Fatigue, [R2], a GitHub issue quoting the standard) and its table of count, range and mean
+     * as a reference library prints it ([R1], MathWorks' rainflow page, which says it follows E1049). The standard
+     * itself was not read. Exact: counting involves no rounding.
      */
     @Test
-    void handCountOfTheRecalledExampleHistory() {
+    void countsOfThePublishedExample() {
         double[] history = {-2, 1, -3, 5, -1, 3, -4, 4, -2};
         Map<Double, Double> expected = new TreeMap<>(Map.of(3.0, 0.5, 4.0, 1.5, 6.0, 0.5, 8.0, 1.0, 9.0, 0.5));
         assertEquals(expected, byRange(Rainflow.count(history)));
+    }
+
+    /** [R1]'s table, row by row (count, range, mean), compared as a set of rows. */
+    @Test
+    void rowsOfThePublishedTable() {
+        List<List<Double>> expected = new ArrayList<>(List.of(List.of(0.5, 3.0, -0.5), List.of(0.5, 4.0, -1.0),
+                List.of(1.0, 4.0, 1.0), List.of(0.5, 8.0, 1.0), List.of(0.5, 9.0, 0.5), List.of(0.5, 8.0, 0.0),
+                List.of(0.5, 6.0, 1.0)));
+        List<List<Double>> counted = new ArrayList<>();
+        for (StressCycle cycle : Rainflow.count(new double[]{-2, 1, -3, 5, -1, 3, -4, 4, -2})) {
+            counted.add(List.of(cycle.count(), cycle.range(), cycle.mean() + 0.0));
+        }
+        Comparator<List<Double>> rows = Comparator.comparing((List<Double> row) -> row.get(0))
+                .thenComparing(row -> row.get(1)).thenComparing(row -> row.get(2));
+        expected.sort(rows);
+        counted.sort(rows);
+        assertEquals(expected, counted);
     }
 
     /** Hand count (same rule): the one full cycle is the -1 to 3 pair, mean +1; the half cycles' means too. */

@@ -8,7 +8,12 @@ import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
 import barwright.io.BarNodes;
 import barwright.loading.VehicleLoader;
+import barwright.io.VehicleFileException;
+import barwright.ui.document.Samples;
+import barwright.report.sizing.TubeOutput;
+import barwright.sizing.FatigueLap;
 import barwright.sizing.TubeEquivalents;
+import barwright.sizing.TubeLives;
 import barwright.sizing.TubeMatch;
 import barwright.sizing.catalogue.Catalogues;
 import barwright.sizing.catalogue.StockSize;
@@ -66,6 +71,14 @@ class SizingStudiesWindowTest {
         throw new AssertionError("no row " + first);
     }
 
+    private static FatigueLap defaultLap() {
+        try {
+            return FatigueLap.onDefaultLap(Samples.load(Samples.CLUB_HATCHBACK));
+        } catch (VehicleFileException refused) {
+            throw new AssertionError(refused);
+        }
+    }
+
     @Test
     void the_tubes_of_the_front_bars_rate_are_the_cores_and_the_chosen_one_goes_into_the_car() {
         JsonNode before = fixture.tree();
@@ -82,6 +95,11 @@ class SizingStudiesWindowTest {
                 tubes, List.of(car.front().bar().material(), MaterialLibrary.CHROMOLY_4130), 0.02);
         JTableFixture table = sizing.table("tubes.results");
         assertThat(table.rowCount()).isEqualTo(core.matches().size());
+        // each tube's fatigue life on the default lap, as the core gives it (sizing.TubeLivesTest checks the core)
+        TubeLives lives = TubeLives.of(car, AxlePosition.FRONT, core, defaultLap());
+        for (int row = 0; row < core.matches().size(); row++) {
+            assertThat(table.valueAt(TableCell.row(row).column(7))).isEqualTo(TubeOutput.lifeText(lives.tubes().get(row)));
+        }
         for (int row = 0; row < core.matches().size(); row++) {
             TubeMatch match = core.matches().get(row);
             assertThat(table.valueAt(TableCell.row(row).column(0))).isEqualTo(match.size().label());

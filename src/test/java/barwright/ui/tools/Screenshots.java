@@ -58,6 +58,15 @@ public final class Screenshots {
         settle(window);
         write(window.getRootPane(), folder.resolve("main-front-bar" + suffix + ".png"));
 
+        // the front bar's fatigue life on the default lap, scrolled into view (worked out off the event thread)
+        SwingUtilities.invokeAndWait(() -> {
+            JComponent life = (JComponent) find(window, "front.bar.life");
+            life.scrollRectToVisible(new java.awt.Rectangle(0, life.getHeight() - 1, life.getWidth(), 1));
+        });
+        Thread.sleep(2000);
+        settle(window);
+        write(window.getRootPane(), folder.resolve("bar-fatigue-life" + suffix + ".png"));
+
         // the working behind the front share, as an instructor opens it
         SwingUtilities.invokeAndWait(() -> ((javax.swing.AbstractButton) find(window, "figure.frontShare")).doClick());
         settle(window);
@@ -72,6 +81,23 @@ public final class Screenshots {
         write(window.getRootPane(), folder.resolve("refused-value" + suffix + ".png"));
         SwingUtilities.invokeAndWait(() -> window.document().undo());
         settle(window);
+
+        // tube or solid: each tube's fatigue life beside its mass and stress
+        SwingUtilities.invokeAndWait(() -> menuItem(window.getJMenuBar(), "Tube or solid bar of the same rate…").doClick());
+        settle(window);
+        SwingUtilities.invokeAndWait(() -> ((javax.swing.AbstractButton) find(dialog("sizing.window"), "tubes.find")).doClick());
+        for (int i = 0; i < 300; i++) {
+            boolean[] found = new boolean[1];
+            SwingUtilities.invokeAndWait(() -> found[0] = ((javax.swing.JTable) find(dialog("sizing.window"),
+                    "tubes.results")).getRowCount() > 0);
+            if (found[0]) {
+                break;
+            }
+            Thread.sleep(100);
+        }
+        Thread.sleep(300);
+        write(dialog("sizing.window"), folder.resolve("tube-or-solid-life" + suffix + ".png"));
+        SwingUtilities.invokeAndWait(() -> SwingUtilities.getWindowAncestor(dialog("sizing.window")).setVisible(false));
 
         // US customary units and a larger text for a projector
         SwingUtilities.invokeAndWait(() -> {
@@ -104,6 +130,18 @@ public final class Screenshots {
             }
         }
         return null;
+    }
+
+    private static javax.swing.JMenuItem menuItem(javax.swing.JMenuBar bar, String text) {
+        for (int i = 0; i < bar.getMenuCount(); i++) {
+            javax.swing.JMenu menu = bar.getMenu(i);
+            for (int j = 0; j < menu.getItemCount(); j++) {
+                if (menu.getItem(j) != null && text.equals(menu.getItem(j).getText())) {
+                    return menu.getItem(j);
+                }
+            }
+        }
+        throw new IllegalStateException("no menu item " + text);
     }
 
     private static JComponent dialog(String name) {
