@@ -257,7 +257,7 @@ final class FrontViewPainter {
     }
 
     private void construction(Graphics2D g, Figure figure, float size) {
-        Color construction = colour("Barwright.constructionColor", new Color(0x6A, 0x3D, 0x9A));
+        Color construction = constructionColour();
         RollCentre centre = figure.state().rollCentre();
         FrontViewPoint rc = centre == null ? null : new FrontViewPoint(centre.offset(), centre.height());
         for (Side side : List.of(figure.left(), figure.right())) {
@@ -334,7 +334,7 @@ final class FrontViewPainter {
         Font big = style.font().deriveFont(Font.BOLD, size * 1.15f);
         g.setFont(big);
         FontMetrics metrics = g.getFontMetrics();
-        Color red = colour("Barwright.rollCentreColor", new Color(0xC6, 0x28, 0x28));
+        Color red = onBackground(new Color(0xC6, 0x28, 0x28), new Color(0xFF, 0x7A, 0x7A));
         if (centre == null) {
             String words = "No roll centre: the lines are parallel";
             Point2D.Double mid = mapping.toPixels(new FrontViewPoint(0, 0.25));
@@ -415,7 +415,7 @@ final class FrontViewPainter {
             g.drawLine(x, y - metrics.getAscent() / 2, x + sample, y - metrics.getAscent() / 2);
             x += sample + 6;
             x = write(g, "arm lines to each side's instant centre (IC)", x, y, text) + 18;
-            g.setColor(colour("Barwright.constructionColor", new Color(0x6A, 0x3D, 0x9A)));
+            g.setColor(constructionColour());
             g.setStroke(dashed(Math.max(2f, size * 0.16f), size * 0.9f));
             g.drawLine(x, y - metrics.getAscent() / 2, x + sample, y - metrics.getAscent() / 2);
             x += sample + 6;
@@ -484,6 +484,18 @@ final class FrontViewPainter {
     /** Millimetres whole; inches to two places. */
     private static int decimals(Quantity quantity, Style style, int siDecimals) {
         return quantity == Quantity.LENGTH && style.units() == UnitSystem.US ? 2 : siDecimals;
+    }
+
+    /** @return the colour of the lines from the contact points through the instant centres */
+    private static Color constructionColour() {
+        return onBackground(new Color(0x6A, 0x3D, 0x9A), new Color(0xC3, 0xA6, 0xF0));
+    }
+
+    /** @return the first colour on a light background, the second (lighter) on a dark one, such as a projector's */
+    private static Color onBackground(Color onLight, Color onDark) {
+        Color background = colour("Panel.background", Color.WHITE);
+        double luminance = 0.299 * background.getRed() + 0.587 * background.getGreen() + 0.114 * background.getBlue();
+        return luminance < 128 ? onDark : onLight;
     }
 
     static Color colour(String key, Color fallback) {

@@ -62,6 +62,7 @@ public final class LinkagePage extends JPanel {
     private final PointTableModel points;
     private final JTable table;
     private final JScrollPane tableScroll;
+    private final JScrollPane scroller;
     private final FrontViewDrawing drawing;
     private final JTextArea noLinkage = new JTextArea();
     private final JPanel cards = new JPanel(new CardLayout());
@@ -95,6 +96,7 @@ public final class LinkagePage extends JPanel {
         noLinkage.setLineWrap(true);
         noLinkage.setWrapStyleWord(true);
         noLinkage.setOpaque(false);
+        neverScrollTo(noLinkage);
         noLinkage.setBorder(BorderFactory.createEmptyBorder(16, 16, 16, 16));
         cards.add(drawing, DRAWING);
         cards.add(new JScrollPane(noLinkage), NONE);
@@ -116,7 +118,7 @@ public final class LinkagePage extends JPanel {
         };
         body.add(split, BorderLayout.CENTER);
         body.add(footer(), BorderLayout.SOUTH);
-        JScrollPane scroller = new JScrollPane(body, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
+        scroller = new JScrollPane(body, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
                 JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         scroller.setBorder(BorderFactory.createEmptyBorder());
         add(scroller, BorderLayout.CENTER);
@@ -129,6 +131,9 @@ public final class LinkagePage extends JPanel {
                 failure -> message.setText("The drawing could not be made: " + failure));
         context.document().addListener(event -> {
             releaseNote = null;
+            if (event.kind() == barwright.ui.document.DocumentEvent.Kind.REPLACED) {
+                toTop();
+            }
             points.reload();
             refresh();
         });
@@ -170,10 +175,13 @@ public final class LinkagePage extends JPanel {
         axleRow.add(front);
         axleRow.add(rear);
         axleRow.add(turn);
-        axleRow.add(label);
-        JPanel controls = new JPanel(new BorderLayout(6, 0));
-        controls.add(axleRow, BorderLayout.WEST);
-        controls.add(slider, BorderLayout.CENTER);
+        // the slider on a row of its own, so that a narrow window or a large text never pushes it out of sight
+        JPanel sliderRow = new JPanel(new BorderLayout(6, 0));
+        sliderRow.add(label, BorderLayout.WEST);
+        sliderRow.add(slider, BorderLayout.CENTER);
+        JPanel controls = new JPanel(new BorderLayout(6, 2));
+        controls.add(axleRow, BorderLayout.NORTH);
+        controls.add(sliderRow, BorderLayout.CENTER);
         return controls;
     }
 
@@ -195,8 +203,16 @@ public final class LinkagePage extends JPanel {
         WrappingText caution = new WrappingText("Moving a pickup point changes how the car behaves at speed: check "
                 + "clearances, bump steer and the maker's data, and have a qualified mechanic check the car.");
         caution.setForeground(Palette.muted());
+        neverScrollTo(caution);
         footer.add(caution, BorderLayout.SOUTH);
         return footer;
+    }
+
+    /** A text set by the program must not scroll the page to its caret. */
+    private static void neverScrollTo(javax.swing.JTextArea text) {
+        if (text.getCaret() instanceof javax.swing.text.DefaultCaret caret) {
+            caret.setUpdatePolicy(javax.swing.text.DefaultCaret.NEVER_UPDATE);
+        }
     }
 
     /** The table as tall as its rows (at least one), so the drawing keeps the rest. */
@@ -213,7 +229,13 @@ public final class LinkagePage extends JPanel {
     public void showAxle(AxlePosition axle) {
         (axle == AxlePosition.FRONT ? front : rear).setSelected(true);
         points.setAxle(axle);
+        toTop();
         refresh();
+    }
+
+    /** Shows the top of the page: the drawing, once its layout is done. */
+    private void toTop() {
+        javax.swing.SwingUtilities.invokeLater(() -> scroller.getViewport().setViewPosition(new java.awt.Point(0, 0)));
     }
 
     /** @return the axle shown */
@@ -418,6 +440,11 @@ public final class LinkagePage extends JPanel {
     /** @return the text shown for an axle without a linkage */
     JTextArea noLinkageText() {
         return noLinkage;
+    }
+
+    /** @return the number of the newest drawing request (the speed harness waits for its scene) */
+    long revision() {
+        return revision;
     }
 
     /** @return true while solves are waiting or running */
