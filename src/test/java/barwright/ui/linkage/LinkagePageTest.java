@@ -228,6 +228,26 @@ class LinkagePageTest {
     }
 
     @Test
+    void theDrawingExportsAsPngAndSvgInTheUnitsShown(@org.junit.jupiter.api.io.TempDir Path folder) throws Exception {
+        open("sprint-roadster");
+        GuiActionRunner.execute(() -> view.setUnits(UnitSystem.US));
+        settle();
+        Path png = folder.resolve("front-linkage.png");
+        Path svg = folder.resolve("front-linkage.svg");
+        GuiActionRunner.execute(() -> {
+            page.exportTo(png);
+            page.exportTo(svg);
+            return null;
+        });
+        java.awt.image.BufferedImage image = javax.imageio.ImageIO.read(png.toFile());
+        assertThat(image.getWidth()).isEqualTo(1200); // the charts' export size (ChartExport)
+        assertThat(image.getHeight()).isEqualTo(800);
+        String text = java.nio.file.Files.readString(svg);
+        assertThat(text).startsWith("<?xml").contains("Roll centre").contains(" in above the ground")
+                .contains("double wishbones");
+    }
+
+    @Test
     void theUnitSwitchChangesTheTableAtOnce() throws Exception {
         open("sprint-roadster");
         assertThat(column(1).get(0)).isEqualTo("330");

@@ -58,6 +58,16 @@ public final class LinkageScreenshots {
         shoot(window, page, "road-saloon", AxlePosition.FRONT, folder.resolve("linkage-strut" + suffix + ".png"));
         shoot(window, page, "road-saloon", AxlePosition.REAR, folder.resolve("linkage-semi-trailing" + suffix + ".png"));
         shoot(window, page, "sprint-roadster", AxlePosition.FRONT, folder.resolve("linkage-wishbones" + suffix + ".png"));
+        // the drawing as File > Export writes it (1200x800)
+        Path exported = folder.resolve("linkage-export-wishbones-" + theme + ".png");
+        SwingUtilities.invokeAndWait(() -> {
+            try {
+                page.exportTo(exported);
+            } catch (barwright.io.FileWriteException failed) {
+                throw new IllegalStateException(failed);
+            }
+        });
+        System.out.println("wrote " + exported);
         shoot(window, page, "estate-dropped-rear-bar", AxlePosition.REAR, folder.resolve("linkage-panhard" + suffix + ".png"));
         shoot(window, page, "estate-dropped-rear-bar", AxlePosition.FRONT, folder.resolve("linkage-none" + suffix + ".png"));
         SwingUtilities.invokeAndWait(window::dispose);
