@@ -22,6 +22,11 @@ public final class HelpDialog {
             grip limit; the picture shows each wheel's load at that point.
             - "Bar sweep" shows how the front share of load transfer and the roll gradient move as one bar's \
             diameter, wall or arm hole changes.
+            - "Linkage" draws each axle's suspension seen from behind, to scale, at the slider's lateral \
+            acceleration: the arm lines to each side's instant centre, the lines from the tyres through them, the \
+            roll centre where those meet, and each wheel's camber to the road. Type a pickup point in its table or \
+            drag its circle; Edit > Undo takes the change back. An axle without a linkage uses its typed \
+            roll-centre height, and the page says how to add one.
             - View > Units switches every field, figure, chart and export between SI and US customary units. \
             Numbers are read and written the way your computer's language settings write them.
             - Keyboard: Tab moves between fields, Ctrl+Page Up / Page Down between pages, Alt with the \

@@ -102,6 +102,11 @@ public final class ResultsTabs extends JTabbedPane {
         slider.setToolTipText("Lateral acceleration, from driving straight (left end) to the grip limit (right end)");
         slider.getAccessibleContext().setAccessibleName("Lateral acceleration, share of the grip limit");
         slider.addChangeListener(event -> probe.setFractionOfLimit(slider.getValue() / 100.0));
+        // the linkage page moves the same probe with a slider of its own: follow it
+        probe.addListener(() -> {
+            slider.setValue((int) Math.round(probe.fractionOfLimit() * 100));
+            turn.setSelectedIndex(probe.turn() == TurnDirection.LEFT ? 0 : 1);
+        });
         JLabel label = new JLabel("Lateral acceleration:");
         label.setLabelFor(slider);
         label.setDisplayedMnemonic('L');

@@ -51,6 +51,11 @@ public final class Screenshots {
             settle(window);
             write(window.getRootPane(), folder.resolve("main-" + names[tab] + suffix + ".png"));
         }
+        // the linkage page on the built-in sample's strut front (ui.linkage)
+        SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedComponent(
+                window.contribution(barwright.ui.linkage.LinkageViews.class).page()));
+        settle(window);
+        write(window.getRootPane(), folder.resolve("main-linkage" + suffix + ".png"));
         SwingUtilities.invokeAndWait(() -> {
             window.tabs().setSelectedIndex(0);
             window.editor().setSelectedIndex(2);

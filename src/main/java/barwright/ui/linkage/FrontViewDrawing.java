@@ -1,0 +1,187 @@
+package barwright.ui.linkage;
+
+import barwright.model.FrontViewPoint;
+import barwright.physics.linkage.FrontViewFigure.Pickup;
+import barwright.ui.field.ViewSettings;
+
+import javax.swing.JComponent;
+import java.awt.Cursor;
+import java.awt.Dimension;
+import java.awt.Font;
+import java.awt.Graphics;
+import java.awt.Graphics2D;
+import java.awt.event.MouseAdapter;
+import java.awt.event.MouseEvent;
+import java.util.List;
+import java.util.function.Function;
+
+/**
+ * The front-view drawing on screen: paints the scene with {@link FrontViewPainter} and lets a person drag a
+ * measured point with the mouse. The drag is reported as road points (m) under the mouse; the page turns them
+ * into the file's values. Event thread.
+ */
+final class FrontViewDrawing extends JComponent {
+    /** What the page does with a drag. */
+    interface DragListener {
+        /** The mouse moved with a point held: from where it was pressed to where it is now (road axes, m). */
+        void dragged(Pickup pickup, FrontViewPoint pressed, FrontViewPoint now);
+
+        /** The mouse let go of the point. */
+        void released(Pickup pickup, FrontViewPoint pressed, FrontViewPoint now);
+    }
+
+    private final FrontViewPainter painter = new FrontViewPainter();
+    private final ViewSettings view;
+    private final Function<Pickup, String> pointName;
+    private DragListener dragListener;
+    private LinkageScene scene;
+    private Pickup hovered;
+    private Pickup held;
+    private FrontViewPoint pressedAt;
+    private long paintedRevision = -1;
+
+    /** @param pointName the name of a pickup, for its tooltip */
+    FrontViewDrawing(ViewSettings view, Function<Pickup, String> pointName) {
+        this.view = view;
+        this.pointName = pointName;
+        setName("linkage.drawing");
+        setFocusable(false);
+        MouseAdapter mouse = new MouseAdapter() {
+            @Override
+            public void mouseMoved(MouseEvent event) {
+                hover(event);
+            }
+
+            @Override
+            public void mousePressed(MouseEvent event) {
+                Pickup under = under(event.getX(), event.getY());
+                if (under != null && painter.mapping() != null) {
+                    held = under;
+                    pressedAt = painter.mapping().toRoad(event.getX(), event.getY());
+                }
+            }
+
+            @Override
+            public void mouseDragged(MouseEvent event) {
+                if (held != null && dragListener != null) {
+                    dragListener.dragged(held, pressedAt, painter.mapping().toRoad(event.getX(), event.getY()));
+                }
+            }
+
+            @Override
+            public void mouseReleased(MouseEvent event) {
+                if (held != null && dragListener != null) {
+                    Pickup let = held;
+                    held = null;
+                    dragListener.released(let, pressedAt, painter.mapping().toRoad(event.getX(), event.getY()));
+                }
+                held = null;
+            }
+        };
+        addMouseListener(mouse);
+        addMouseMotionListener(mouse);
+        view.addListener(this::repaint);
+    }
+
+    /**
+     * @return as wide as a chart, and tall enough for the picture to read at the current text size: the four lines
+     *         of heading and key, the roll centre's label under the ground, and some fourteen lines of picture
+     */
+    @Override
+    public Dimension getPreferredSize() {
+        int line = getFontMetrics(font()).getHeight();
+        return new Dimension(Math.max(420, line * 26), Math.max(300, line * 20));
+    }
+
+    @Override
+    public Dimension getMinimumSize() {
+        return new Dimension(240, getPreferredSize().height);
+    }
+
+    void setDragListener(DragListener listener) {
+        this.dragListener = listener;
+    }
+
+    void show(LinkageScene newScene) {
+        scene = newScene;
+        repaint();
+    }
+
+    LinkageScene scene() {
+        return scene;
+    }
+
+    /** @return the revision of the scene last painted, for the speed harness */
+    long paintedRevision() {
+        return paintedRevision;
+    }
+
+    /** @return the texts written at the last paint */
+    List<String> drawnText() {
+        return painter.drawnText();
+    }
+
+    /** @return the pickups and where they were drawn at the last paint (pixels) */
+    List<FrontViewPainter.Handle> handles() {
+        return painter.handles();
+    }
+
+    /** @return the last paint's pixels per metre */
+    double mappingScale() {
+        return painter.mapping().scale();
+    }
+
+    boolean isDragging() {
+        return held != null;
+    }
+
+    private void hover(MouseEvent event) {
+        Pickup under = under(event.getX(), event.getY());
+        if (!java.util.Objects.equals(under, hovered)) {
+            hovered = under;
+            setCursor(Cursor.getPredefinedCursor(under == null ? Cursor.DEFAULT_CURSOR : Cursor.HAND_CURSOR));
+            setToolTipText(under == null ? null : pointName.apply(under) + ": drag to move it (one undo step)");
+            repaint();
+        }
+    }
+
+    /** @return the pickup within reach of a pixel (the nearest), or null */
+    private Pickup under(int x, int y) {
+        double reach = Math.max(10, font().getSize2D() * 0.9);
+        Pickup nearest = null;
+        double best = reach;
+        for (FrontViewPainter.Handle handle : painter.handles()) {
+            double distance = handle.at().distance(x, y);
+            if (distance <= best) {
+                best = distance;
+                nearest = handle.pickup();
+            }
+        }
+        return nearest;
+    }
+
+    private Font font() {
+        Font font = getFont();
+        return font != null ? font : new Font(Font.SANS_SERIF, Font.PLAIN, 13);
+    }
+
+    @Override
+    protected void paintComponent(Graphics graphics) {
+        Graphics2D g = (Graphics2D) graphics.create();
+        try {
+            painter.paint(g, getWidth(), getHeight(), scene,
+                    new FrontViewPainter.Style(font(), view.units(), view.locale(), held != null ? held : hovered));
+        } finally {
+            g.dispose();
+        }
+        if (scene != null) {
+            paintedRevision = scene.revision();
+        }
+    }
+
+    /** Paints the scene as it is on screen into an export's graphics, at the charts' export size. */
+    void paintExport(Graphics2D g, Font font) {
+        new FrontViewPainter().paint(g, barwright.ui.chart.ChartExport.WIDTH, barwright.ui.chart.ChartExport.HEIGHT,
+                scene, new FrontViewPainter.Style(font, view.units(), view.locale(), null));
+    }
+}
