@@ -20,6 +20,7 @@ import barwright.ui.panel.VehicleEditor;
 import barwright.ui.panel.WarningsPanel;
 import barwright.ui.panel.WorkDialog;
 import barwright.ui.sizing.SizingViews;
+import barwright.ui.tyre.TyreViews;
 import barwright.ui.workshop.WorkshopViews;
 import barwright.ui.task.AnalysisController;
 import barwright.ui.task.CorneringProbe;
@@ -85,7 +86,8 @@ public final class MainWindow extends JFrame {
         figures = new FiguresPanel(results, format, this::showWork);
         tabs = new ResultsTabs(results, probe, format, analysis, files::exportChart);
         WindowContext shared = new WindowContext(this, document, view, files.dialogs(), results);
-        contributions = List.of(new InsightViews(shared), new SizingViews(shared), new WorkshopViews(shared));
+        contributions = List.of(new InsightViews(shared), new SizingViews(shared), new WorkshopViews(shared),
+                new TyreViews(shared));
         for (WindowContribution contribution : contributions) {
             for (WindowContribution.Page page : contribution.pages()) {
                 tabs.addTab(page.title(), page.view());
