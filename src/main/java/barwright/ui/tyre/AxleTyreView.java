@@ -53,6 +53,8 @@ final class AxleTyreView extends PagePanel {
     private final TyreCamberChart camberChart;
     private final JComponent camberPanel;
     private final WrappingText noCamber = new WrappingText("");
+    /** The three charts' panels, sized to the text. */
+    private final List<JComponent> chartPanels = new java.util.ArrayList<>();
 
     AxleTyreView(AxlePosition axle, ViewSettings view) {
         super(null);
@@ -89,7 +91,8 @@ final class AxleTyreView extends PagePanel {
         return text;
     }
 
-    private static JComponent chart(JComponent panel) {
+    private JComponent chart(JComponent panel) {
+        chartPanels.add(panel);
         panel.setAlignmentX(LEFT_ALIGNMENT);
         sizeChart(panel);
         return panel;
@@ -172,11 +175,7 @@ final class AxleTyreView extends PagePanel {
 
     /** Sets the charts' renderers and colours again, as after a change of theme. */
     void restyle() {
-        for (java.awt.Component child : getComponents()) {
-            if (child instanceof org.jfree.chart.ChartPanel) {
-                sizeChart((JComponent) child);
-            }
-        }
+        chartPanels.forEach(AxleTyreView::sizeChart);
         loadChart.style();
         slipChart.style();
         camberChart.style();

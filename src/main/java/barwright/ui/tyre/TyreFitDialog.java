@@ -56,6 +56,8 @@ final class TyreFitDialog extends JDialog {
     private final JButton applyRear = new JButton("Apply to rear tyre");
     private final Runnable relabel = this::relabel;
     private BackgroundWork<Void, FitOutcome> work;
+    /** Counts the fits started: news of a fit that a newer one replaced is dropped. */
+    private long fitsStarted;
     private FitOutcome outcome;
     private String status = "";
 
@@ -170,34 +172,43 @@ final class TyreFitDialog extends JDialog {
         progress.setVisible(true);
         cancel.setVisible(true);
         showOutcome();
+        long fit = ++fitsStarted;
         work = BackgroundWork.start(running -> FitOutcome.of(file, running), new BackgroundWork.Listener<>() {
             @Override
             public void progress(long done, long total) {
-                progress.setIndeterminate(false);
-                progress.setMaximum((int) total);
-                progress.setValue((int) done);
-                progress.setString("curve " + done + " of " + total);
+                if (fit == fitsStarted) {
+                    progress.setIndeterminate(false);
+                    progress.setMaximum((int) total);
+                    progress.setValue((int) done);
+                    progress.setString("curve " + done + " of " + total);
+                }
             }
 
             @Override
             public void finished(Void input, FitOutcome result) {
-                ended(file);
-                outcome = result;
-                showOutcome();
+                if (fit == fitsStarted) {
+                    ended(file);
+                    outcome = result;
+                    showOutcome();
+                }
             }
 
             @Override
             public void failed(Void input, String message) {
-                ended(file);
-                status = "The fit failed: " + message + ". Nothing in the car was changed.";
-                showOutcome();
+                if (fit == fitsStarted) {
+                    ended(file);
+                    status = "The fit failed: " + message + ". Nothing in the car was changed. ";
+                    showOutcome();
+                }
             }
 
             @Override
             public void cancelled(Void input) {
-                ended(file);
-                status = "The fit was cancelled. Nothing in the car was changed.";
-                showOutcome();
+                if (fit == fitsStarted) {
+                    ended(file);
+                    status = "The fit was cancelled. Nothing in the car was changed. ";
+                    showOutcome();
+                }
             }
         });
     }
@@ -216,9 +227,9 @@ final class TyreFitDialog extends JDialog {
         }
     }
 
-    /** @return true while no fit runs */
+    /** @return true while no fit runs, nor waits for its news to reach the event thread */
     boolean isIdle() {
-        return work == null || work.isIdle();
+        return work == null;
     }
 
     private void showOutcome() {

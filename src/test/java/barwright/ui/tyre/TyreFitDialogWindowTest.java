@@ -106,6 +106,21 @@ class TyreFitDialogWindowTest {
     }
 
     @Test
+    void aSecondFileStartedWhileTheFirstRunsReplacesItWithoutItsNews() throws Exception {
+        Opened opened = open();
+        TyreFitDialog dialog = opened.dialog();
+        GuiActionRunner.execute(() -> {
+            dialog.fit(TyreScreens.SAMPLE_DATA);
+            dialog.fit(TyreScreens.SAMPLE_DATA);
+        });
+        waitUntilIdle(dialog);
+        // the first fit is cancelled by the second; its "cancelled" must not land on the second's result
+        assertThat(GuiActionRunner.execute(dialog::messagesText)).contains("7 curves fitted")
+                .doesNotContain("cancelled");
+        assertThat(GuiActionRunner.execute(() -> dialog.applyButton(AxlePosition.FRONT).isEnabled())).isTrue();
+    }
+
+    @Test
     void aNotANumberRowIsRefusedWithItsLineAndChangesNothing() throws Exception {
         Opened opened = open();
         TyreFitDialog dialog = opened.dialog();
