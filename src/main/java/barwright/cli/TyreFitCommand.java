@@ -2,13 +2,10 @@ package barwright.cli;
 
 import barwright.io.AtomicFileWriter;
 import barwright.io.Problem;
+import barwright.io.TyreTestCsv;
 import barwright.io.TyreWriter;
 import barwright.io.VehicleFileWriter;
 import barwright.io.csv.CsvFileException;
-import barwright.io.csv.CsvReader;
-import barwright.io.csv.CsvRow;
-import barwright.io.csv.CsvSchema;
-import barwright.io.csv.CsvTable;
 import barwright.report.tyre.TyreFitJson;
 import barwright.report.tyre.TyreFitText;
 import barwright.tyrefit.TyreFit;
@@ -20,18 +17,11 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.io.PrintStream;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
-import static barwright.units.Constants.RADIANS_PER_DEGREE;
-
 /** {@code tyre-fit DATA.csv}: a tyre for the vehicle file from measured lateral force curves (model.md 8.3). */
 final class TyreFitCommand implements Command {
-    /** The columns of a tyre test file (file-format.md, "Tyre test data"). */
-    static final CsvSchema SCHEMA = new CsvSchema(List.of("loadN", "slipAngleDeg", "lateralForceN"),
-            List.of("camberDeg"));
-
     @Override
     public String name() {
         return "tyre-fit";
@@ -52,15 +42,14 @@ final class TyreFitCommand implements Command {
     public int run(List<String> args, PrintStream out, PrintStream err) throws Exception {
         Arguments parsed = Arguments.parse(args, Set.of("json"), Set.of("output", "plot"));
         String file = parsed.onlyPositional("tyre data file (CSV)");
-        CsvTable table;
+        List<TyreMeasurement> data;
         try {
-            table = CsvReader.read(Path.of(file), SCHEMA);
+            data = TyreTestCsv.read(Path.of(file));
         } catch (CsvFileException refused) {
             err.println("barwright: the tyre data was refused (" + file + "):");
             refused.problems().forEach(problem -> err.println("  " + problem));
             return Cli.REFUSED;
         }
-        List<TyreMeasurement> data = measurements(table);
         TyreFit fit;
         try {
             fit = TyreFitter.fit(data);
@@ -94,15 +83,5 @@ final class TyreFitCommand implements Command {
             }
         }
         return Cli.OK;
-    }
-
-    private static List<TyreMeasurement> measurements(CsvTable table) {
-        List<TyreMeasurement> rows = new ArrayList<>(table.rows().size());
-        for (CsvRow row : table.rows()) {
-            rows.add(new TyreMeasurement(row.line(), row.number("loadN"),
-                    row.number("slipAngleDeg") * RADIANS_PER_DEGREE, row.number("lateralForceN"),
-                    row.optionalNumber("camberDeg").orElse(0) * RADIANS_PER_DEGREE));
-        }
-        return rows;
     }
 }

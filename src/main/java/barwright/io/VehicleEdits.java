@@ -32,11 +32,13 @@ import static barwright.io.VehicleKeys.SELECTED_ARM;
 /**
  * The one place that changes a vehicle file's tree: a chosen bar put in place (the window, the sizing views,
  * {@code size --apply} and {@code map --candidates} all go through {@link #putBar}), the workshop's measurements
- * put in place ({@code measure ... --apply}), and key-path edits
- * ({@code compare --variant}, the window's compare view). Changes are made on a copy and validated as a whole,
- * so a change keeps every unknown key and a bad value is refused with its key path like a bad file.
+ * put in place ({@code measure ... --apply}), a fitted tyre put on an axle ({@link #putTyre}), and key-path
+ * edits ({@code compare --variant}, the window's compare view). Changes are made on a copy and validated as a
+ * whole, so a change keeps every unknown key and a bad value is refused with its key path like a bad file.
  */
 public final class VehicleEdits {
+    private static final String TYRE = "tyre";
+
     private VehicleEdits() {
     }
 
@@ -122,6 +124,20 @@ public final class VehicleEdits {
         // the mass and front share follow from the corners (file-format.md)
         vehicle.remove(MASS_KG);
         vehicle.remove(FRONT_MASS_FRACTION);
+    }
+
+    /**
+     * Puts a tyre object (as {@link TyreWriter#toJson} writes it) on an axle in place of the one there, and raises
+     * an older file to the current version: the tyre's points and camber keys are keys of version 2, and the
+     * upgrade changes the meaning of nothing else ({@link FileVersion}).
+     */
+    public static void putTyre(ObjectNode tree, AxlePosition axle, ObjectNode tyre) {
+        if (tree.path("version").asInt(FileVersion.CURRENT) < FileVersion.CURRENT) {
+            tree.put("version", FileVersion.CURRENT);
+        }
+        JsonNode axleNode = tree.get(axle.key());
+        ObjectNode axleObject = axleNode instanceof ObjectNode object ? object : tree.putObject(axle.key());
+        axleObject.set(TYRE, tyre.deepCopy());
     }
 
     /**

@@ -4,6 +4,7 @@ import barwright.model.LoadPoint;
 import barwright.model.LoadTable;
 import barwright.model.TyreCamber;
 import barwright.solver.LeastSquares;
+import barwright.solver.Progress;
 import org.apache.commons.math3.fitting.PolynomialCurveFitter;
 import org.apache.commons.math3.fitting.WeightedObservedPoints;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
@@ -47,6 +48,14 @@ public final class TyreFitter {
     }
 
     public static TyreFit fit(List<TyreMeasurement> data) throws TyreFitException {
+        return fit(data, Progress.NONE);
+    }
+
+    /**
+     * @param progress told of each curve fitted (done and total in curves); checked for a cancel between curves
+     * @throws java.util.concurrent.CancellationException where the caller cancels
+     */
+    public static TyreFit fit(List<TyreMeasurement> data, Progress progress) throws TyreFitException {
         List<String> problems = new ArrayList<>();
         checkRows(data, problems);
         if (!problems.isEmpty()) {
@@ -65,9 +74,13 @@ public final class TyreFitter {
             throw new TyreFitException(problems);
         }
         List<CurveFit> fits = new ArrayList<>();
+        long total = curves.values().stream().mapToLong(TreeMap::size).sum();
+        long done = 0;
         for (TreeMap<Double, List<TyreMeasurement>> byCamber : curves.values()) {
             for (List<TyreMeasurement> curve : byCamber.values()) {
+                progress.checkCancelled();
                 fitCurve(curve, problems).ifPresent(fits::add);
+                progress.update(++done, total);
             }
         }
         if (!problems.isEmpty()) {

@@ -10,6 +10,17 @@ public interface Dialogs {
     Path chooseFileToOpen();
 
     /**
+     * @param title       what the chooser asks for, e.g. "Open tyre test data"
+     * @param description the files' kind, e.g. "Tyre test data (*.csv)"
+     * @param extension   e.g. "csv"
+     * @return a data file to open, or null when the person cancels; by default answered as
+     *     {@link #chooseFileToOpen()} (scripted dialogs answer both from one list)
+     */
+    default Path chooseDataFileToOpen(String title, String description, String extension) {
+        return chooseFileToOpen();
+    }
+
+    /**
      * @param suggested a file name to start from
      * @param extension "json", "png" or "svg"
      * @return where to save, or null when the person cancels

@@ -22,6 +22,7 @@ import barwright.ui.panel.WarningsPanel;
 import barwright.ui.panel.WorkDialog;
 import barwright.ui.present.PresentationViews;
 import barwright.ui.sizing.SizingViews;
+import barwright.ui.tyre.TyreViews;
 import barwright.ui.workshop.WorkshopViews;
 import barwright.ui.task.AnalysisController;
 import barwright.ui.task.CorneringProbe;
@@ -88,7 +89,7 @@ public final class MainWindow extends JFrame {
         tabs = new ResultsTabs(results, probe, format, analysis, files::exportChart);
         WindowContext shared = new WindowContext(this, document, view, files.dialogs(), results);
         contributions = List.of(new InsightViews(shared), new SizingViews(shared), new WorkshopViews(shared),
-                new PresentationViews(shared), new LinkageViews(shared, probe));
+                new PresentationViews(shared), new LinkageViews(shared, probe), new TyreViews(shared));
         for (WindowContribution contribution : contributions) {
             for (WindowContribution.Page page : contribution.pages()) {
                 tabs.addTab(page.title(), page.view());

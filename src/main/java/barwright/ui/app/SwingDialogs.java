@@ -31,6 +31,17 @@ final class SwingDialogs implements Dialogs {
     }
 
     @Override
+    public Path chooseDataFileToOpen(String title, String description, String extension) {
+        JFileChooser chooser = chooser(title);
+        chooser.setFileFilter(new FileNameExtensionFilter(description, extension));
+        if (chooser.showOpenDialog(owner) != JFileChooser.APPROVE_OPTION) {
+            return null;
+        }
+        folder = chooser.getCurrentDirectory();
+        return chooser.getSelectedFile().toPath();
+    }
+
+    @Override
     public Path chooseFileToSave(String suggested, String extension) {
         JFileChooser chooser = chooser("Save as");
         chooser.setFileFilter(new FileNameExtensionFilter(extension.toUpperCase(java.util.Locale.ROOT) + " files (*."

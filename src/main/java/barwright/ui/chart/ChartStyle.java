@@ -35,6 +35,21 @@ public final class ChartStyle {
         return fallback[index % fallback.length];
     }
 
+    /**
+     * @return a colour for the index-th of many lines: the six theme colours, then the same colours set further
+     *     from the background (darker on a light theme, lighter on a dark one), so no two lines look alike and
+     *     none sinks into the background
+     */
+    public static Color distinct(int index) {
+        Color colour = series(index % 6);
+        if (index < 6) {
+            return colour;
+        }
+        Color background = colour("Panel.background", Color.WHITE);
+        boolean dark = 0.299 * background.getRed() + 0.587 * background.getGreen() + 0.114 * background.getBlue() < 128;
+        return dark ? colour.brighter().brighter() : colour.darker().darker();
+    }
+
     public static void apply(JFreeChart chart) {
         Color background = colour("Panel.background", Color.WHITE);
         Color text = colour("Label.foreground", Color.BLACK);
@@ -107,6 +122,13 @@ public final class ChartStyle {
         panel.setMaximumDrawWidth(4000);
         panel.setMaximumDrawHeight(3000);
         return panel;
+    }
+
+    /** @return the font for marker and annotation labels: the theme's text size, a little smaller */
+    public static Font labelFont() {
+        Font base = UIManager.getFont("defaultFont") != null ? UIManager.getFont("defaultFont")
+                : UIManager.getFont("Label.font");
+        return new Font(Font.SANS_SERIF, Font.PLAIN, Math.round((base == null ? 13f : base.getSize2D()) * 0.85f));
     }
 
     public static Color text() {

@@ -4,6 +4,9 @@ import barwright.io.FileWriteException;
 import barwright.tyrefit.CurveFit;
 import barwright.tyrefit.TyreFit;
 import barwright.tyrefit.TyreMeasurement;
+import barwright.units.DisplayUnit;
+import barwright.units.Quantity;
+import barwright.units.UnitSystem;
 import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.plot.PlotOrientation;
@@ -31,29 +34,33 @@ public final class TyreFitChart {
 
     /** @return the chart: the fitted curves as lines (in the legend), the measurements as dots of their colour */
     public static JFreeChart of(TyreFit fit, List<TyreMeasurement> data) {
+        return of(fit, data, Quantity.FORCE.unit(UnitSystem.SI));
+    }
+
+    /** @return the same chart with the forces (and the curves' names) in a display unit, N or lbf */
+    public static JFreeChart of(TyreFit fit, List<TyreMeasurement> data, DisplayUnit force) {
         XYSeriesCollection series = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer();
         int index = 0;
         for (CurveFit curve : fit.curves()) {
-            String name = String.format(Locale.ROOT, "%.0f N, camber %.1f°", curve.load(),
-                    curve.camber() / RADIANS_PER_DEGREE);
+            String name = String.format(Locale.ROOT, "%.0f %s, camber %.1f°", force.fromSi(curve.load()),
+                    force.symbol(), curve.camber() / RADIANS_PER_DEGREE);
             XYSeries line = new XYSeries(name + " fit", false);
             XYSeries dots = new XYSeries(name + " measured", false);
             double widest = 0;
             for (TyreMeasurement row : data) {
                 if (row.load() == curve.load() && row.camber() == curve.camber()) {
-                    dots.add(row.slipAngle() / RADIANS_PER_DEGREE, row.lateralForce());
+                    dots.add(row.slipAngle() / RADIANS_PER_DEGREE, force.fromSi(row.lateralForce()));
                     widest = Math.max(widest, Math.abs(row.slipAngle()));
                 }
             }
             for (int k = -100; k <= 100; k++) {
                 double slip = widest * k / 100;
-                line.add(slip / RADIANS_PER_DEGREE, curve.formula().force(slip));
+                line.add(slip / RADIANS_PER_DEGREE, force.fromSi(curve.formula().force(slip)));
             }
             series.addSeries(line);
             series.addSeries(dots);
-            // six theme colours; past them the same colours darker, so no two curves look alike
-            java.awt.Color colour = index < 6 ? ChartStyle.series(index) : ChartStyle.series(index).darker().darker();
+            java.awt.Color colour = ChartStyle.distinct(index);
             renderer.setSeriesPaint(2 * index, colour);
             renderer.setSeriesPaint(2 * index + 1, colour);
             renderer.setSeriesLinesVisible(2 * index, true);
@@ -66,7 +73,7 @@ public final class TyreFitChart {
             index++;
         }
         JFreeChart chart = ChartFactory.createXYLineChart("Tyre fit: lateral force against slip angle",
-                "Slip angle (deg)", "Lateral force (N)", series, PlotOrientation.VERTICAL, true, false, false);
+                "Slip angle (deg)", "Lateral force (" + force.symbol() + ")", series, PlotOrientation.VERTICAL, true, false, false);
         XYPlot plot = chart.getXYPlot();
         plot.setRenderer(renderer);
         double worst = fit.curves().stream().mapToDouble(CurveFit::worstShareOfPeak).max().orElse(0);

@@ -112,6 +112,11 @@ public final class Screenshots {
         });
         settle(window);
         write(window.getRootPane(), folder.resolve("us-units" + suffix + ".png"));
+        SwingUtilities.invokeAndWait(() -> window.setUnits(barwright.units.UnitSystem.SI));
+        settle(window);
+
+        // the tyre page (law tyre, then the fitted tyre on both axles) and the fit dialog on the shipped data
+        barwright.ui.tyre.TyreScreens.shoot(window, folder, suffix, Screenshots::write);
         SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
     }
