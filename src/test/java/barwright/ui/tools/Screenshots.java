@@ -81,6 +81,10 @@ public final class Screenshots {
         });
         settle(window);
         write(window.getRootPane(), folder.resolve("us-units" + suffix + ".png"));
+
+        // the roll in motion: dampers, turn-in and lap on the dampers sample (this replaces the open car, so last)
+        SwingUtilities.invokeAndWait(() -> window.setUnits(barwright.units.UnitSystem.SI));
+        barwright.ui.dynamics.DynamicsScreenshots.capture(window, folder, suffix);
         SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
     }
@@ -128,7 +132,7 @@ public final class Screenshots {
         Thread.sleep(200);
     }
 
-    static void write(JComponent component, Path file) throws Exception {
+    public static void write(JComponent component, Path file) throws Exception {
         AtomicReference<BufferedImage> image = new AtomicReference<>();
         SwingUtilities.invokeAndWait(() -> {
             BufferedImage picture = new BufferedImage(component.getWidth(), component.getHeight(),
