@@ -9,6 +9,7 @@ import barwright.ui.action.WindowContext;
 import barwright.ui.action.WindowContribution;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.dynamics.DynamicsViews;
 import barwright.ui.insight.InsightViews;
 import barwright.ui.linkage.LinkageViews;
 import barwright.ui.panel.CautionNote;
@@ -89,7 +90,8 @@ public final class MainWindow extends JFrame {
         tabs = new ResultsTabs(results, probe, format, analysis, files::exportChart);
         WindowContext shared = new WindowContext(this, document, view, files.dialogs(), results);
         contributions = List.of(new InsightViews(shared), new SizingViews(shared), new WorkshopViews(shared),
-                new PresentationViews(shared), new LinkageViews(shared, probe), new TyreViews(shared));
+                new PresentationViews(shared), new LinkageViews(shared, probe), new TyreViews(shared),
+                new DynamicsViews(shared));
         for (WindowContribution contribution : contributions) {
             for (WindowContribution.Page page : contribution.pages()) {
                 tabs.addTab(page.title(), page.view());

@@ -21,7 +21,8 @@ public final class Samples {
             new Sample("road-saloon.json", "Road saloon"),
             new Sample("sprint-roadster.json", "Sprint roadster"),
             new Sample("estate-dropped-rear-bar.json", "Estate, dropped rear bar (shaped)"),
-            new Sample("hillclimb-special-swept-bar.json", "Hill-climb special, swept front bar (shaped)"));
+            new Sample("hillclimb-special-swept-bar.json", "Hill-climb special, swept front bar (shaped)"),
+            new Sample("club-hatchback-dampers.json", "Club hatchback with dampers (roll in motion)"));
 
     private static final String FOLDER = "/barwright/samples/";
 

@@ -8,12 +8,12 @@ import java.awt.event.HierarchyEvent;
  * closed) is remembered and the update runs when the view is shown again, so hidden views cost an edit nothing.
  * Event thread.
  */
-final class WhileShown {
+public final class WhileShown {
     private final JComponent view;
     private final Runnable update;
     private boolean pending;
 
-    WhileShown(JComponent view, Runnable update) {
+    public WhileShown(JComponent view, Runnable update) {
         this.view = view;
         this.update = update;
         view.addHierarchyListener(event -> {
@@ -25,7 +25,7 @@ final class WhileShown {
     }
 
     /** Updates now where the view is on screen, else when it is next shown. */
-    void request() {
+    public void request() {
         if (view.isShowing()) {
             pending = false;
             update.run();

@@ -117,6 +117,10 @@ public final class Screenshots {
 
         // the tyre page (law tyre, then the fitted tyre on both axles) and the fit dialog on the shipped data
         barwright.ui.tyre.TyreScreens.shoot(window, folder, suffix, Screenshots::write);
+
+        // the roll in motion: dampers, turn-in and lap on the dampers sample (this replaces the open car, so last)
+        SwingUtilities.invokeAndWait(() -> window.setUnits(barwright.units.UnitSystem.SI));
+        barwright.ui.dynamics.DynamicsScreenshots.capture(window, folder, suffix);
         SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
     }
@@ -176,7 +180,7 @@ public final class Screenshots {
         Thread.sleep(200);
     }
 
-    static void write(JComponent component, Path file) throws Exception {
+    public static void write(JComponent component, Path file) throws Exception {
         AtomicReference<BufferedImage> image = new AtomicReference<>();
         SwingUtilities.invokeAndWait(() -> {
             BufferedImage picture = new BufferedImage(component.getWidth(), component.getHeight(),
