@@ -91,52 +91,31 @@ final class Form extends PagePanel {
     }
 
     /**
-     * @return the width the form needs with each label beside its field (pixels): the grid's columns, each as
-     * wide as its widest label, field or unit (a field with no unit spans the field and unit columns)
+     * @return the width the form needs with each label beside its field (pixels): the grid's own least width
+     * with the labels beside their fields, worked out with those constraints if the form is stacked now
      */
     private int besideWidth() {
-        int labels = 0;
-        int fields = 0;
-        int units = 0;
-        int spanning = 0;
-        for (JComponent[] labelled : rows) {
-            labels = Math.max(labels, labelled[0].getPreferredSize().width + 8);
-            int field = labelled[1].getMinimumSize().width + 4;
-            if (labelled[2] == null) {
-                spanning = Math.max(spanning, field);
-            } else {
-                fields = Math.max(fields, field);
-                units = Math.max(units, labelled[2].getPreferredSize().width);
-            }
+        if (!stacked) {
+            return super.getMinimumSize().width;
         }
-        return Math.max(labels + Math.max(fields + units, spanning) + getInsets().left + getInsets().right,
-                acrossWidth());
-    }
-
-    /** @return the least width of the lines across the form (headings, notes), as the grid lays them out */
-    private int acrossWidth() {
-        GridBagLayout layout = (GridBagLayout) getLayout();
-        int widest = 0;
-        for (java.awt.Component child : getComponents()) {
-            GridBagConstraints at = layout.getConstraints(child);
-            if (at.gridwidth >= 3) {
-                widest = Math.max(widest, child.getMinimumSize().width + at.insets.left + at.insets.right);
-            }
-        }
-        return widest + getInsets().left + getInsets().right;
+        place(false);
+        int width = super.getMinimumSize().width;
+        place(true);
+        return width;
     }
 
     /**
-     * @return the narrowest the form can be: each label above its field (a large text on a small screen),
-     * the widest label, or field and unit
+     * @return the narrowest the form can be: each label above its field (a large text on a small screen), the
+     * grid's own least width with those constraints
      */
     private int stackedWidth() {
-        int widest = 0;
-        for (JComponent[] labelled : rows) {
-            widest = Math.max(widest, Math.max(labelled[0].getPreferredSize().width, labelled[1].getMinimumSize().width
-                    + 4 + (labelled[2] == null ? 0 : labelled[2].getPreferredSize().width)));
+        if (stacked) {
+            return super.getMinimumSize().width;
         }
-        return widest + getInsets().left + getInsets().right;
+        place(true);
+        int width = super.getMinimumSize().width;
+        place(false);
+        return width;
     }
 
     @Override
@@ -151,22 +130,27 @@ final class Form extends PagePanel {
         boolean narrow = getWidth() < besideWidth();
         if (narrow != stacked) {
             stacked = narrow;
-            GridBagLayout layout = (GridBagLayout) getLayout();
-            for (JComponent[] labelled : rows) {
-                GridBagConstraints labelAt = layout.getConstraints(labelled[0]);
-                GridBagConstraints fieldAt = layout.getConstraints(labelled[1]);
-                boolean hasUnit = labelled[2] != null;
-                labelAt.gridy = stacked ? fieldAt.gridy - 1 : fieldAt.gridy;
-                labelAt.gridwidth = stacked ? 3 : 1;
-                labelAt.insets = stacked ? new Insets(4, 0, 0, 0) : new Insets(2, 0, 2, 8);
-                fieldAt.gridx = stacked ? 0 : 1;
-                fieldAt.gridwidth = (stacked ? 1 : 0) + (hasUnit ? 1 : 2);
-                layout.setConstraints(labelled[0], labelAt);
-                layout.setConstraints(labelled[1], fieldAt);
-            }
+            place(stacked);
             revalidate(); // the form's height changes: the scroll pane asks again
         }
         super.doLayout();
+    }
+
+    /** Sets every labelled row's constraints: each label above its field (stacked) or beside it. */
+    private void place(boolean stackedLayout) {
+        GridBagLayout layout = (GridBagLayout) getLayout();
+        for (JComponent[] labelled : rows) {
+            GridBagConstraints labelAt = layout.getConstraints(labelled[0]);
+            GridBagConstraints fieldAt = layout.getConstraints(labelled[1]);
+            boolean hasUnit = labelled[2] != null;
+            labelAt.gridy = stackedLayout ? fieldAt.gridy - 1 : fieldAt.gridy;
+            labelAt.gridwidth = stackedLayout ? 3 : 1;
+            labelAt.insets = stackedLayout ? new Insets(4, 0, 0, 0) : new Insets(2, 0, 2, 8);
+            fieldAt.gridx = stackedLayout ? 0 : 1;
+            fieldAt.gridwidth = (stackedLayout ? 1 : 0) + (hasUnit ? 1 : 2);
+            layout.setConstraints(labelled[0], labelAt);
+            layout.setConstraints(labelled[1], fieldAt);
+        }
     }
 
     /** Makes the component's least width its preferred width at its present font (96 px at the least). */
