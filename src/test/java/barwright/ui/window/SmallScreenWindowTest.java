@@ -112,9 +112,14 @@ class SmallScreenWindowTest {
             // a unit label with no text (a ratio) is given no width, and has nothing to cut
             boolean empty = child instanceof javax.swing.JLabel label && (label.getText() == null
                     || label.getText().isEmpty());
-            if (number && !empty && child.isVisible() && child.getWidth() < child.getPreferredSize().width) {
+            // a label's need is its text's own width: the form pads unit labels to 64 px only to line them up
+            int needed = child instanceof javax.swing.JLabel label && !empty
+                    ? label.getFontMetrics(label.getFont()).stringWidth(label.getText()) + label.getInsets().left
+                    + label.getInsets().right
+                    : child.getPreferredSize().width;
+            if (number && !empty && child.isVisible() && child.getWidth() < needed) {
                 into.add(where + ": " + child.getClass().getSimpleName() + " " + child.getName() + " shown "
-                        + child.getWidth() + " px of " + child.getPreferredSize().width);
+                        + child.getWidth() + " px of " + needed);
             } else if (child instanceof Container container) {
                 collectCut(container, where, into);
             }
