@@ -100,6 +100,24 @@ final class BalanceWork {
                         + "toward understeer; below it, toward oversteer.");
     }
 
+    static Derivation staticFrontWeight(AnalysisResult result) {
+        MassProperties.StaticWheelLoads loads = result.masses().staticLoads();
+        double front = loads.leftFront() + loads.rightFront();
+        double rear = loads.leftRear() + loads.rightRear();
+        return new Derivation("Static front weight", "share = W_f / (W_f + W_r)",
+                List.of(new WorkValue("W_lf", "left front wheel load, standing", loads.leftFront(), Quantity.FORCE),
+                        new WorkValue("W_rf", "right front wheel load, standing", loads.rightFront(), Quantity.FORCE),
+                        new WorkValue("W_lr", "left rear wheel load, standing", loads.leftRear(), Quantity.FORCE),
+                        new WorkValue("W_rr", "right rear wheel load, standing", loads.rightRear(), Quantity.FORCE)),
+                List.of(new Step("W_f = W_lf + W_rf", new WorkValue("W_f", "front axle load", front, Quantity.FORCE)),
+                        new Step("W_r = W_lr + W_rr", new WorkValue("W_r", "rear axle load", rear, Quantity.FORCE))),
+                new WorkValue("share", "static front weight", result.masses().frontMassFraction(), Quantity.SHARE),
+                "model.md section 1 (masses): the wheel loads from the scales, or the total and the front share "
+                        + "as the file gives them",
+                "The yardstick for the front share of load transfer: a share above it loads the front tyres "
+                        + "harder in a corner than standing, and leans the car toward understeer.");
+    }
+
     static Derivation understeer(AnalysisResult result) {
         MassProperties.StaticWheelLoads loads = result.masses().staticLoads();
         double frontStiffness = result.front().corneringStiffness();

@@ -127,6 +127,33 @@ final class BarWork {
         return new Derivation(title, "SF = σ_y / σ_max", inputs, steps, factor, STRESS_SOURCE, note);
     }
 
+    static Derivation bushingLoad(AnalysisResult result, AxlePosition axle) {
+        AntiRollBar bar = result.vehicle().axle(axle).bar();
+        BarResult barResult = result.axle(axle).bar();
+        String title = StiffnessWork.capital(axle) + " bar bushing load";
+        double largest = barResult.bushingLoads().stream().mapToDouble(Double::doubleValue).max().orElse(0);
+        WorkValue load = new WorkValue("R", "radial load on the more loaded bushing at the check travel", largest,
+                Quantity.FORCE);
+        List<WorkValue> inputs = new ArrayList<>();
+        inputs.add(new WorkValue("k_link", "bar link rate", barResult.linkRate(), Quantity.LINEAR_RATE));
+        inputs.add(new WorkValue("Δ", "relative travel of the link ends at the check travel",
+                barResult.relativeLinkTravel(), Quantity.LENGTH));
+        List<Step> steps = new ArrayList<>();
+        steps.add(new Step("F = k_link Δ", new WorkValue("F", "link force", barResult.linkForce(), Quantity.FORCE)));
+        String note = "What the bushing brackets and their bolts must carry at the check travel, before any "
+                + "bump or kerb strike on top.";
+        if (barResult.model() == BarModel.BEAM) {
+            return new Derivation(title, "R = the largest bushing reaction of the frame", inputs, steps, load,
+                    BEAM_SOURCE, note);
+        }
+        inputs.add(new WorkValue("L", "torsion length, between the link points", bar.dimensions().torsionLength(),
+                Quantity.LENGTH));
+        inputs.add(new WorkValue("s", "bushing span", bar.dimensions().bushingSpan(), Quantity.LENGTH));
+        return new Derivation(title, "R = F L / s", inputs, steps, load,
+                "model.md section 2: the two link forces form a couple F L about the car's length axis, held by "
+                        + "the two bushings as a couple R s", note);
+    }
+
     private static List<WorkValue> sectionInputs(AntiRollBar bar) {
         List<WorkValue> inputs = new ArrayList<>();
         inputs.add(new WorkValue("D", "outside diameter", bar.section().outerDiameter(), Quantity.LENGTH));

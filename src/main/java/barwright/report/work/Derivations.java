@@ -20,7 +20,10 @@ public final class Derivations {
             case AXLE_ROLL_STIFFNESS -> StiffnessWork.axle(result, figure.axle());
             case ROLL_GRADIENT -> BalanceWork.rollGradient(result);
             case FRONT_LOAD_TRANSFER_SHARE -> BalanceWork.frontShare(result);
+            case STATIC_FRONT_WEIGHT -> BalanceWork.staticFrontWeight(result);
             case UNDERSTEER_GRADIENT -> BalanceWork.understeer(result);
+            case BALANCE -> TurnWork.balance(result, figure.turn());
+            case BAR_BUSHING_LOAD -> BarWork.bushingLoad(result, requireBar(result, figure));
             case LIMIT -> TurnWork.limit(result, figure.turn());
             case INSIDE_LIFT -> TurnWork.lift(result, figure.axle(), figure.turn());
             case BAR_LINK_RATE -> BarWork.linkRate(result, requireBar(result, figure));

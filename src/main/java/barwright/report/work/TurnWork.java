@@ -3,6 +3,7 @@ package barwright.report.work;
 import barwright.model.AxlePosition;
 import barwright.model.TurnDirection;
 import barwright.physics.AnalysisResult;
+import barwright.physics.Balance;
 import barwright.physics.MassProperties;
 import barwright.physics.SteadyCornering;
 import barwright.physics.TurnResult;
@@ -25,6 +26,26 @@ final class TurnWork {
             + "section 5 (Milliken & Milliken, Race Car Vehicle Dynamics, ch. 18)";
 
     private TurnWork() {
+    }
+
+    static Derivation balance(AnalysisResult result, TurnDirection direction) {
+        TurnResult turn = result.turn(direction);
+        double difference = turn.rearLimit() - turn.frontLimit();
+        return new Derivation("Balance at the limit in a " + direction.word() + " turn",
+                "a_r − a_f: above +0.01 g understeer, below −0.01 g oversteer, between neutral",
+                List.of(new WorkValue("a_f", "lateral acceleration at which the front axle reaches its grip",
+                                turn.frontLimit(), Quantity.ACCELERATION),
+                        new WorkValue("a_r", "lateral acceleration at which the rear axle reaches its grip",
+                                turn.rearLimit(), Quantity.ACCELERATION),
+                        new WorkValue("band", "neutral band", Balance.NEUTRAL_BAND, Quantity.ACCELERATION)),
+                List.of(new Step("a_r − a_f", new WorkValue("a_r − a_f", "how much later the rear lets go",
+                        difference, Quantity.ACCELERATION))),
+                new WorkValue("limit", "grip limit, the lower of the two: " + turn.balance().key(), turn.limit(),
+                        Quantity.ACCELERATION),
+                "model.md section 8: each axle's limit from its tyres' grip at their loads in the turn",
+                "The axle that reaches its grip first decides: the front first is understeer (the car runs wide), "
+                        + "the rear first is oversteer. A stiffer front bar moves load transfer to the front and "
+                        + "the front limit down.");
     }
 
     static Derivation limit(AnalysisResult result, TurnDirection direction) {

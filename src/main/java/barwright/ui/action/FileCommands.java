@@ -128,6 +128,25 @@ public final class FileCommands {
     }
 
     /**
+     * Asks where to write a picture of the program's own (the car from behind) and writes it.
+     *
+     * @param stem the file name offered, without its ending
+     * @param type "png" or "svg"
+     */
+    public void exportPicture(String stem, ChartExport.Picture picture, String type) {
+        Path target = dialogs.chooseFileToSave(stem + "." + type, type);
+        if (target == null) {
+            return;
+        }
+        try {
+            ChartExport.write(picture, withExtension(target, type));
+        } catch (FileWriteException failed) {
+            dialogs.showError("Picture not exported", "The picture could not be written: " + failed.getMessage()
+                    + ".");
+        }
+    }
+
+    /**
      * Asks about unsaved changes before they would be lost.
      *
      * @return true where it is fine to go on (saved, discarded, or nothing to lose)

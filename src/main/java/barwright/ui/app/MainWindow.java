@@ -53,6 +53,11 @@ import java.util.Locale;
 public final class MainWindow extends JFrame {
     /** The key figures column's width at the system text size (pixels): room for "1417 N·m/deg" twice. */
     static final int FIGURES_WIDTH = 390;
+    /**
+     * The least width the results keep beside the editor (pixels): the car picture's least width, 400, with
+     * the scroll bar and the borders.
+     */
+    static final int RESULTS_LEAST_WIDTH = 440;
     private final OpenDocument document;
     private final Settings settings;
     private final ViewSettings view;
@@ -67,6 +72,7 @@ public final class MainWindow extends JFrame {
     private final List<Runnable> firstPaint = new ArrayList<>();
     private final Runnable onClosed;
     private ResultsLayout resultsLayout;
+    private JScrollPane warningsArea;
     private JSplitPane mainSplit;
     private boolean painted;
 
@@ -87,7 +93,8 @@ public final class MainWindow extends JFrame {
         FigureFormat format = new FigureFormat(view);
         editor = new VehicleEditor(document, view);
         figures = new FiguresPanel(results, format, this::showWork);
-        tabs = new ResultsTabs(results, probe, format, analysis, files::exportChart);
+        tabs = new ResultsTabs(results, probe, format, analysis, files::exportChart,
+                (picture, type) -> files.exportPicture("car-from-behind", picture, type));
         WindowContext shared = new WindowContext(this, document, view, files.dialogs(), results);
         contributions = List.of(new InsightViews(shared), new SizingViews(shared), new WorkshopViews(shared),
                 new PresentationViews(shared), new LinkageViews(shared, probe), new TyreViews(shared),
@@ -130,10 +137,16 @@ public final class MainWindow extends JFrame {
         centre.setPreferredSize(new Dimension(520, 500));
         centre.setMinimumSize(new Dimension(360, 300));
         centre.add(tabs, BorderLayout.CENTER);
-        JScrollPane warnings = new JScrollPane(new WarningsPanel(results));
+        JScrollPane warnings = new JScrollPane(new WarningsPanel(results)) {
+            @Override
+            public Dimension getPreferredSize() {
+                // two and a half lines of warning at any text size, never less than the 78 px of old
+                return new Dimension(400, Math.max(78, lineHeight() * 5 / 2 + 8));
+            }
+        };
         warnings.setBorder(BorderFactory.createMatteBorder(1, 0, 0, 0,
                 UIManager.getColor("Component.borderColor")));
-        warnings.setPreferredSize(new Dimension(400, 78));
+        warningsArea = warnings;
         centre.add(warnings, BorderLayout.SOUTH);
 
         JPanel right = new PagePanel(new BorderLayout());
@@ -144,8 +157,11 @@ public final class MainWindow extends JFrame {
             @Override
             public Dimension getPreferredSize() {
                 // as wide as the figures need at the current text size, never narrower than the column
-                int needed = right.getPreferredSize().width + getVerticalScrollBar().getPreferredSize().width + 6;
-                return new Dimension(Math.max(needed, FIGURES_WIDTH * textScale() / 100), 500);
+                // (the figures decide it: the caution under them wraps to whatever width it is given)
+                int needed = figures.getPreferredSize().width + getVerticalScrollBar().getPreferredSize().width + 6;
+                // as high as all the figures, so that below the charts they can be shown whole
+                int high = right.getPreferredSize().height + getHorizontalScrollBar().getPreferredSize().height + 6;
+                return new Dimension(Math.max(needed, FIGURES_WIDTH * textScale() / 100), high);
             }
         };
         rightScroll.setBorder(BorderFactory.createMatteBorder(1, 1, 0, 0,
@@ -155,14 +171,18 @@ public final class MainWindow extends JFrame {
         rightScroll.getVerticalScrollBar().setUnitIncrement(16);
         rightScroll.getHorizontalScrollBar().setUnitIncrement(16);
         rightScroll.setName("figures.scroll");
-        JPanel resultsSplit = new JPanel();
-        resultsLayout = new ResultsLayout(centre, rightScroll);
+        ResultsPanel resultsSplit = new ResultsPanel();
+        resultsLayout = new ResultsLayout(centre, rightScroll, this::chartsMinimumHeight, this::lineHeight);
         resultsSplit.setLayout(resultsLayout);
         resultsSplit.add(centre);
         resultsSplit.add(rightScroll);
+        JScrollPane resultsScroll = new JScrollPane(resultsSplit, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
+                JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
+        resultsScroll.setBorder(null);
+        resultsScroll.setName("results.scroll");
         JPanel resultsArea = new JPanel(new BorderLayout());
         resultsArea.add(new StaleBanner(results), BorderLayout.NORTH);
-        resultsArea.add(resultsSplit, BorderLayout.CENTER);
+        resultsArea.add(resultsScroll, BorderLayout.CENTER);
 
         JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, editor, resultsArea);
         main.setResizeWeight(0);
@@ -172,6 +192,20 @@ public final class MainWindow extends JFrame {
         main.setName("main.split");
         mainSplit = main;
         getContentPane().add(main, BorderLayout.CENTER);
+    }
+
+    /**
+     * @return the least height of the charts column (pixels): the tab strip, the car picture at its least
+     * size with its slider, and the warnings, at the present text size
+     */
+    private int chartsMinimumHeight() {
+        return tabs.pictureOverhead() + tabs.car().getMinimumSize().height
+                + warningsArea.getPreferredSize().height;
+    }
+
+    /** @return the height of a line of text at the present text size (pixels) */
+    private int lineHeight() {
+        return getFontMetrics(UIManager.getFont("Label.font")).getHeight();
     }
 
     private void showWork(KeyFigure figure) {
@@ -210,12 +244,12 @@ public final class MainWindow extends JFrame {
     }
 
     /**
-     * Gives the editor room for its labels and fields at the current text size, but never more than 40 % of
-     * the window, so that the charts keep their room on a small screen.
+     * Gives the editor room for its labels and fields whole at the current text size, but never so much that
+     * the results get less than {@link #RESULTS_LEAST_WIDTH}: past that the editor scrolls sideways.
      */
     void fitEditor() {
-        int wanted = VehicleEditor.WIDTH * textScale() / 100;
-        int allowed = Math.max(VehicleEditor.WIDTH, getWidth() * 40 / 100);
+        int wanted = Math.max(VehicleEditor.WIDTH * textScale() / 100, editor.neededWidth());
+        int allowed = Math.max(VehicleEditor.WIDTH, getWidth() - RESULTS_LEAST_WIDTH);
         mainSplit.setDividerLocation(Math.min(wanted, allowed));
         mainSplit.revalidate();
     }

@@ -65,11 +65,30 @@ final class Menus {
                 KeyStroke.getKeyStroke(KeyEvent.VK_E, shortcut | InputEvent.SHIFT_DOWN_MASK), KeyEvent.VK_V,
                 () -> export("svg"), () -> window.tabs().selectedChart() != null);
         help = new CommandAction("Help and cautions", "How to use Barwright, what it leaves out, and cautions",
-                KeyStroke.getKeyStroke(KeyEvent.VK_F1, 0), KeyEvent.VK_H, () -> HelpDialog.show(window));
+                KeyStroke.getKeyStroke(KeyEvent.VK_F1, 0), KeyEvent.VK_H, () -> HelpDialog.show(window, helpIndex()));
         stateful = List.of(undo, redo, exportPng, exportSvg);
         document.addListener(event -> refresh());
         window.tabs().addChangeListener(event -> refresh());
         refresh();
+    }
+
+    /**
+     * @return a line for every page and command the contributions add, with its own description, so that
+     * Help names every view and tool of this window, those added later included
+     */
+    List<String> helpIndex() {
+        List<String> lines = new java.util.ArrayList<>();
+        for (WindowContribution contribution : contributions) {
+            for (WindowContribution.Page page : contribution.pages()) {
+                lines.add("Tab \"" + page.title() + "\": " + page.tooltip());
+            }
+            for (WindowContribution.Command command : contribution.commands()) {
+                Object name = command.action().getValue(javax.swing.Action.NAME);
+                Object about = command.action().getValue(javax.swing.Action.SHORT_DESCRIPTION);
+                lines.add("\"" + String.valueOf(name).replace("…", "") + "\"" + (about != null ? ": " + about : ""));
+            }
+        }
+        return lines;
     }
 
     private KeyStroke key(int code) {

@@ -5,33 +5,52 @@ import java.awt.Container;
 import java.awt.Dimension;
 import java.awt.Insets;
 import java.awt.LayoutManager;
+import java.util.function.IntSupplier;
 
 /**
  * Puts the key figures beside the charts when both fit, and below them when they do not (a projector at
  * 1024x768, a shop laptop, a large text size), so that the car picture never shrinks to a sliver. The
- * figures keep their preferred width when beside; below, they take the full width and scroll if they must.
+ * figures keep their preferred width when beside; below, they take the full width. The charts never get
+ * less than the height their picture needs (the supplier's figure); where the window is lower than that and
+ * a few rows of figures, the whole results area scrolls up and down (it sits in a scroll pane,
+ * {@link ResultsPanel}) rather than squeeze the picture or cut a number.
  */
 final class ResultsLayout implements LayoutManager {
-    /** The narrowest the charts and the car picture may get before the figures move below (pixels). */
-    static final int CHARTS_MIN_WIDTH = 480;
+    /** The narrowest the charts and the car picture may get before the figures move below (pixels): the car
+     * picture's least width, 400, and its borders. */
+    static final int CHARTS_MIN_WIDTH = 440;
     /** The share of the height the figures take at most when below the charts. */
     private static final double FIGURES_BELOW_SHARE = 0.42;
-    /** The height the charts keep, with their tab strip, controls and the warnings, when the figures are below. */
-    static final int CHARTS_MIN_HEIGHT = 440;
-    /** The least height of the figures when below: a few rows, the rest scrolls (pixels). */
-    private static final int FIGURES_MIN_HEIGHT = 120;
+    /** The least height of the figures when below, in lines of text: a few rows, the rest scrolls. */
+    private static final int FIGURES_MIN_LINES = 6;
     private final Component charts;
     private final Component figures;
+    private final IntSupplier chartsMinHeight;
+    private final IntSupplier lineHeight;
     private boolean beside = true;
 
-    ResultsLayout(Component charts, Component figures) {
+    /**
+     * @param chartsMinHeight the least height of the charts column at the present text size (pixels)
+     * @param lineHeight      the height of a line of text at the present text size (pixels)
+     */
+    ResultsLayout(Component charts, Component figures, IntSupplier chartsMinHeight, IntSupplier lineHeight) {
         this.charts = charts;
         this.figures = figures;
+        this.chartsMinHeight = chartsMinHeight;
+        this.lineHeight = lineHeight;
     }
 
     /** @return whether the last layout put the figures beside the charts (false: below) */
     boolean beside() {
         return beside;
+    }
+
+    private boolean besideAt(int width) {
+        return width - Math.min(figures.getPreferredSize().width, width) >= CHARTS_MIN_WIDTH;
+    }
+
+    private int figuresMinHeight() {
+        return FIGURES_MIN_LINES * lineHeight.getAsInt();
     }
 
     @Override
@@ -42,32 +61,53 @@ final class ResultsLayout implements LayoutManager {
         int width = Math.max(0, parent.getWidth() - insets.left - insets.right);
         int height = Math.max(0, parent.getHeight() - insets.top - insets.bottom);
         int figuresWidth = Math.min(figures.getPreferredSize().width, width);
-        beside = width - figuresWidth >= CHARTS_MIN_WIDTH;
+        beside = besideAt(width);
+        int chartsLeast = chartsMinHeight.getAsInt();
         if (beside) {
             charts.setBounds(x, y, width - figuresWidth, height);
             figures.setBounds(x + width - figuresWidth, y, figuresWidth, height);
-        } else {
-            int below = Math.max(FIGURES_MIN_HEIGHT,
-                    Math.min((int) Math.round(height * FIGURES_BELOW_SHARE), height - CHARTS_MIN_HEIGHT));
-            below = Math.min(below, height);
+        } else if (visibleHeight(parent) >= chartsLeast + figuresMinHeight()) {
+            int below = Math.max(figuresMinHeight(),
+                    Math.min((int) Math.round(height * FIGURES_BELOW_SHARE), height - chartsLeast));
+            below = Math.max(0, Math.min(below, height - chartsLeast));
             charts.setBounds(x, y, width, height - below);
             figures.setBounds(x, y + height - below, width, below);
+        } else {
+            // too low for both: the charts fill the view (never less than their least), the figures follow
+            int chartsHeight = scrolledChartsHeight(parent);
+            charts.setBounds(x, y, width, chartsHeight);
+            figures.setBounds(x, y + chartsHeight, width, Math.max(0, height - chartsHeight));
         }
+    }
+
+    /** @return the height on screen: the scroll pane's view, or the container's own */
+    private static int visibleHeight(Container parent) {
+        return parent.getParent() instanceof javax.swing.JViewport viewport ? viewport.getHeight()
+                : parent.getHeight();
+    }
+
+    /** @return the charts' height when the area scrolls: the view less two lines (a cue that more follows) */
+    private int scrolledChartsHeight(Container parent) {
+        return Math.max(chartsMinHeight.getAsInt(), visibleHeight(parent) - 2 * lineHeight.getAsInt());
     }
 
     @Override
     public Dimension preferredLayoutSize(Container parent) {
-        Dimension chartsSize = charts.getPreferredSize();
-        Dimension figuresSize = figures.getPreferredSize();
         Insets insets = parent.getInsets();
-        return new Dimension(chartsSize.width + figuresSize.width + insets.left + insets.right,
-                Math.max(chartsSize.height, figuresSize.height) + insets.top + insets.bottom);
+        int width = parent.getWidth() - insets.left - insets.right;
+        int height = besideAt(width) ? chartsMinHeight.getAsInt()
+                : scrolledChartsHeight(parent) + figures.getPreferredSize().height;
+        return new Dimension(charts.getPreferredSize().width + figures.getPreferredSize().width + insets.left
+                + insets.right, height + insets.top + insets.bottom);
     }
 
+    /** The least size: the charts at their least height, and a few rows of figures below them if they go there. */
     @Override
     public Dimension minimumLayoutSize(Container parent) {
         Insets insets = parent.getInsets();
-        return new Dimension(CHARTS_MIN_WIDTH / 2 + insets.left + insets.right, 300 + insets.top + insets.bottom);
+        int width = parent.getWidth() - insets.left - insets.right;
+        int height = chartsMinHeight.getAsInt() + (besideAt(width) ? 0 : figuresMinHeight());
+        return new Dimension(CHARTS_MIN_WIDTH / 2 + insets.left + insets.right, height + insets.top + insets.bottom);
     }
 
     @Override

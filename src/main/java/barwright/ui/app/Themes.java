@@ -55,6 +55,11 @@ public final class Themes {
         }
     }
 
+    /** @return every text size offered (points), smallest first */
+    public static int[] offeredTextSizes() {
+        return TEXT_SIZES.clone();
+    }
+
     /** @return the largest text size offered (points) */
     public static int largestTextSize() {
         return TEXT_SIZES[TEXT_SIZES.length - 1];

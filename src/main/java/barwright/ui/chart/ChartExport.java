@@ -38,6 +38,35 @@ public final class ChartExport {
         }
     }
 
+    /** A picture drawn by the program itself (not a chart) that can be written at any size. */
+    @FunctionalInterface
+    public interface Picture {
+        /** Draws the picture into the graphics, filling width x height (pixels, or SVG user units). */
+        void paint(java.awt.Graphics2D graphics, int width, int height);
+    }
+
+    /**
+     * Writes a picture as PNG or SVG by the file name's ending (.svg: SVG; anything else: PNG), at the size
+     * charts are exported at, atomically.
+     */
+    public static void write(Picture picture, Path target) throws FileWriteException {
+        if (target.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".svg")) {
+            SVGGraphics2D graphics = new SVGGraphics2D(WIDTH, HEIGHT);
+            picture.paint(graphics, WIDTH, HEIGHT);
+            AtomicFileWriter.writeText(target, graphics.getSVGDocument());
+        } else {
+            java.awt.image.BufferedImage image = new java.awt.image.BufferedImage(WIDTH, HEIGHT,
+                    java.awt.image.BufferedImage.TYPE_INT_RGB);
+            java.awt.Graphics2D graphics = image.createGraphics();
+            try {
+                picture.paint(graphics, WIDTH, HEIGHT);
+            } finally {
+                graphics.dispose();
+            }
+            AtomicFileWriter.write(target, out -> javax.imageio.ImageIO.write(image, "png", out));
+        }
+    }
+
     /** Writes one of the window's charts as PNG or SVG by the file name's ending, as {@link #write(JFreeChart, Path)}. */
     public static void write(ResultChart chart, Path target) throws FileWriteException {
         write(chart.chart(), target);

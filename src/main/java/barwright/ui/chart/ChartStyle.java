@@ -81,20 +81,32 @@ public final class ChartStyle {
         Font axisFont = new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size));
         Font tickFont = new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size * 0.9f));
         if (plot instanceof XYPlot xy) {
-            xy.setDomainGridlinePaint(grid);
-            xy.setRangeGridlinePaint(grid);
-            xy.setDomainGridlineStroke(new BasicStroke(0.6f));
-            xy.setRangeGridlineStroke(new BasicStroke(0.6f));
-            for (int i = 0; i < xy.getDomainAxisCount(); i++) {
-                axis(xy.getDomainAxis(i), text, axisFont, tickFont);
-            }
-            for (int i = 0; i < xy.getRangeAxisCount(); i++) {
-                axis(xy.getRangeAxis(i), text, axisFont, tickFont);
+            xyPlot(xy, grid, text, axisFont, tickFont);
+            if (plot instanceof org.jfree.chart.plot.CombinedDomainXYPlot combined) {
+                // stacked plots sharing one x axis: each has its own background, grid and value axis
+                for (XYPlot part : combined.getSubplots()) {
+                    part.setBackgroundPaint(colour("Barwright.chart.plotBackground", background));
+                    part.setOutlinePaint(grid);
+                    xyPlot(part, grid, text, axisFont, tickFont);
+                }
             }
         } else if (plot instanceof CategoryPlot category) {
             category.setRangeGridlinePaint(grid);
             axis(category.getDomainAxis(), text, axisFont, tickFont);
             axis(category.getRangeAxis(), text, axisFont, tickFont);
+        }
+    }
+
+    private static void xyPlot(XYPlot xy, Color grid, Color text, Font axisFont, Font tickFont) {
+        xy.setDomainGridlinePaint(grid);
+        xy.setRangeGridlinePaint(grid);
+        xy.setDomainGridlineStroke(new BasicStroke(0.6f));
+        xy.setRangeGridlineStroke(new BasicStroke(0.6f));
+        for (int i = 0; i < xy.getDomainAxisCount(); i++) {
+            axis(xy.getDomainAxis(i), text, axisFont, tickFont);
+        }
+        for (int i = 0; i < xy.getRangeAxisCount(); i++) {
+            axis(xy.getRangeAxis(i), text, axisFont, tickFont);
         }
     }
 

@@ -31,6 +31,9 @@ import java.util.List;
 public final class CarBehindView extends JComponent {
     /** Body roll is a degree or two: it is drawn this many times larger so that it can be seen. */
     static final double ROLL_DRAWN_LARGER = 5;
+    /** The least height of the drawing itself, car and columns (pixels): judged from screenshots at 1024x768. */
+    static final int DRAWING_LEAST_HEIGHT = 240;
+    private static final String LEGEND_KEY = "columns: the load each tyre puts on the road";
     private final ResultsModel results;
     private final CorneringProbe probe;
     private final FigureFormat format;
@@ -46,6 +49,42 @@ public final class CarBehindView extends JComponent {
         results.addListener(this::repaint);
         probe.addListener(this::repaint);
         format.view().addListener(this::repaint); // the SI/US switch redraws at once, not at the next slider move
+    }
+
+    /**
+     * The least size that still shows the car, its wheels, the load columns with their figures, the heading
+     * and the legend whole: the lines of words as they wrap at the present width, two lines of load figures
+     * and {@link #DRAWING_LEAST_HEIGHT} of drawing.
+     */
+    @Override
+    public Dimension getMinimumSize() {
+        if (isMinimumSizeSet()) {
+            return super.getMinimumSize();
+        }
+        Font font = getFont() != null ? getFont() : new Font(Font.SANS_SERIF, Font.PLAIN, 13);
+        var metrics = getFontMetrics(font);
+        var bold = getFontMetrics(font.deriveFont(Font.BOLD));
+        int width = Math.max(getWidth(), 400) - 24;
+        AnalysisResult result = result();
+        int lines = 6; // heading, roll and legend once each, and the column key, before there is a result
+        if (result != null) {
+            List<String> words = words(result);
+            lines = PictureText.lines(bold, words.get(0), width) + PictureText.lines(metrics, words.get(1), width)
+                    + 1 + PictureText.lines(metrics, LEGEND_KEY, width);
+        }
+        return new Dimension(400, (lines + 2) * metrics.getHeight() + DRAWING_LEAST_HEIGHT);
+    }
+
+    /** @return the heading and the body-roll line at the slider's position */
+    private List<String> words(AnalysisResult result) {
+        TurnResult turnResult = result.turn(probe.turn());
+        double accel = acceleration();
+        String heading = String.format(format.view().locale(), "%s turn at %s (%.0f %% of the %s grip limit)",
+                probe.turn() == TurnDirection.LEFT ? "Left" : "Right", format.text(accel, Quantity.ACCELERATION),
+                probe.fractionOfLimit() * 100, format.text(turnResult.limit(), Quantity.ACCELERATION));
+        String rollText = "Body roll " + format.text(turnResult.cornering().rollAngle(accel), Quantity.ANGLE)
+                + " (drawn " + (int) ROLL_DRAWN_LARGER + "\u00D7 larger), seen from behind.";
+        return List.of(heading, rollText);
     }
 
     /** @return the figures (heading, body roll, wheel loads) written at the last paint */
@@ -66,23 +105,34 @@ public final class CarBehindView extends JComponent {
 
     @Override
     protected void paintComponent(Graphics graphics) {
-        AnalysisResult result = result();
-        drawnFigures.clear();
         Graphics2D g = (Graphics2D) graphics.create();
         try {
-            g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-            g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-            g.setColor(Palette.colour("Panel.background", Color.WHITE));
-            g.fillRect(0, 0, getWidth(), getHeight());
-            if (result != null) {
-                paintCar(g, result);
-            }
+            paintPicture(g, getWidth(), getHeight(), getFont());
         } finally {
             g.dispose();
         }
     }
 
-    private void paintCar(Graphics2D g, AnalysisResult result) {
+    /**
+     * Draws the picture into any graphics at any size (the screen, or a PNG or SVG export).
+     *
+     * @param width  pixels (or SVG user units)
+     * @param height pixels (or SVG user units)
+     * @param font   the text font; null for a 13-point sans-serif
+     */
+    public void paintPicture(Graphics2D g, int width, int height, Font font) {
+        AnalysisResult result = result();
+        drawnFigures.clear();
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setColor(Palette.colour("Panel.background", Color.WHITE));
+        g.fillRect(0, 0, width, height);
+        if (result != null) {
+            paintCar(g, result, width, height, font != null ? font : new Font(Font.SANS_SERIF, Font.PLAIN, 13));
+        }
+    }
+
+    private void paintCar(Graphics2D g, AnalysisResult result, int width, int height, Font font) {
         TurnDirection turn = probe.turn();
         TurnResult turnResult = result.turn(turn);
         SteadyCornering cornering = turnResult.cornering();
@@ -91,18 +141,26 @@ public final class CarBehindView extends JComponent {
         WheelLoads atLimit = cornering.wheelLoads(turnResult.limit());
         double roll = cornering.rollAngle(accel);
         Color text = Palette.colour("Label.foreground", Color.BLACK);
-        Font font = getFont() != null ? getFont() : new Font(Font.SANS_SERIF, Font.PLAIN, 13);
         int line = g.getFontMetrics(font).getHeight();
+        boolean left = turn == TurnDirection.LEFT;
 
-        int width = getWidth();
-        int top = line * 2 + 12;
-        int bottom = getHeight() - line - 8;
+        // the words first, wrapped at the picture's width so that no figure runs off its edge
+        g.setColor(text);
+        List<String> words = words(result);
+        String heading = words.get(0);
+        String rollText = words.get(1);
+        drawnFigures.add(heading);
+        drawnFigures.add(rollText);
+        int y = PictureText.wrapped(g, font.deriveFont(Font.BOLD), heading, 12, line, width - 24);
+        y = PictureText.wrapped(g, font, rollText, 12, y + line, width - 24);
+        y = legend(g, y + line, width - 24, font, text);
+        int top = y + line / 2;
+        int bottom = height - 8;
         // the car takes the upper part; the road's push on each tyre hangs below the ground line as columns
-        int ground = top + (int) ((bottom - top) * 0.58);
+        int ground = top + (int) ((bottom - top) * 0.62);
         double track = Math.max(result.vehicle().front().track(), result.vehicle().rear().track());
         double scale = Math.min(width * 0.66 / (track + 0.3), (ground - top) / 1.45); // px per metre
         double centre = width / 2.0;
-        boolean left = turn == TurnDirection.LEFT;
         // seen from behind the car's left is on the left; the outside of a left turn is on the right
         double leftLoadFront = left ? loads.frontInside() : loads.frontOutside();
         double rightLoadFront = left ? loads.frontOutside() : loads.frontInside();
@@ -143,74 +201,93 @@ public final class CarBehindView extends JComponent {
         double cgY = ground - result.masses().sprungCgHeight() * scale;
         g.fillOval((int) centre - 5, (int) cgY - 5, 10, 10);
         g.setTransform(saved);
+        Font small = font.deriveFont(font.getSize2D() * 0.85f);
+        g.setFont(small);
         g.setColor(Palette.muted());
         g.fillOval((int) centre - 3, (int) rollCentre - 3, 6, 6);
+        // the roll centre's name on the side away from the arrow, so that the two never overlap
+        String rollCentreName = "rear roll centre";
+        int nameWidth = g.getFontMetrics().stringWidth(rollCentreName);
+        int nameX = (int) (left ? centre - 8 - nameWidth : centre + 8);
+        int nameY = (int) rollCentre + g.getFontMetrics().getAscent() / 2;
+        // on a light box, so that it reads over a tyre or the body on a small picture
+        g.setColor(Palette.colour("Panel.background", Color.WHITE));
+        g.fillRect(nameX - 2, nameY - g.getFontMetrics().getAscent(), nameWidth + 4, g.getFontMetrics().getHeight());
+        g.setColor(Palette.muted());
+        g.drawString(rollCentreName, nameX, nameY);
 
         arrow(g, centre, cgY, (left ? 1 : -1) * bodyHalf * (0.3 + 0.5 * probe.fractionOfLimit()), text);
         g.setFont(font);
         g.setColor(text);
-        String force = "m·a_y";
-        g.drawString(force, (int) (centre + (left ? 12 : -12 - g.getFontMetrics().stringWidth(force))),
-                (int) cgY - 8);
+        // D'Alembert's inertial force on the sprung mass, pointing to the outside of the turn
+        String force = "m·a_y, inertial force";
+        int forceWidth = g.getFontMetrics().stringWidth(force);
+        double forceX = left ? centre + 12 : centre - 12 - forceWidth;
+        forceX = Math.max(4, Math.min(forceX, width - 4 - forceWidth));
+        g.drawString(force, (int) forceX, (int) cgY - 8);
 
         double maxLoad = Math.max(Math.max(atLimit.frontOutside(), atLimit.rearOutside()), 1);
-        double columnHeight = bottom - ground - line * 1.6;
-        columns(g, centre - halfTrack, new double[]{leftLoadFront, leftLoadRear}, maxLoad, columnHeight, ground,
-                font);
-        columns(g, centre + halfTrack, new double[]{rightLoadFront, rightLoadRear}, maxLoad, columnHeight, ground,
-                font);
-
-        g.setColor(text);
-        g.setFont(font.deriveFont(Font.BOLD));
-        String heading = String.format(format.view().locale(), "%s turn at %s (%.0f %% of the %s grip limit)",
-                left ? "Left" : "Right", format.text(accel, Quantity.ACCELERATION), probe.fractionOfLimit() * 100,
-                format.text(turnResult.limit(), Quantity.ACCELERATION));
-        g.drawString(heading, 12, line + 2);
-        g.setFont(font);
-        String rollText = "Body roll " + format.text(roll, Quantity.ANGLE) + " (drawn " + (int) ROLL_DRAWN_LARGER
-                + "\u00D7 larger), seen from behind.";
-        g.drawString(rollText, 12, line * 2 + 4);
-        drawnFigures.add(heading);
-        drawnFigures.add(rollText);
-        legend(g, getHeight() - 8, font, text);
+        double columnHeight = bottom - ground - line * 2.2;
+        // each side's figures stay clear of the other side's, however small the car is drawn
+        g.setFont(font.deriveFont(font.getSize2D() * 0.9f));
+        double spread = Math.max(halfTrack, g.getFontMetrics().stringWidth("00000 lbf") * 0.6);
+        columns(g, centre - spread, new double[]{leftLoadFront, leftLoadRear}, maxLoad, columnHeight, ground,
+                font, width);
+        columns(g, centre + spread, new double[]{rightLoadFront, rightLoadRear}, maxLoad, columnHeight, ground,
+                font, width);
     }
 
     /**
      * Draws, under a tyre, the road's push on the front and the rear wheel of that side as two columns hanging
-     * below the ground line: values[0] front, values[1] rear (N).
+     * below the ground line: values[0] front, values[1] rear (N). The figures sit under the column area on two
+     * lines, front above rear, each in its column's colour, kept inside the picture, so that no figure
+     * overlaps another or runs off the edge however small the picture.
      */
     private void columns(Graphics2D g, double tyreX, double[] values, double maxLoad, double height, int ground,
-                         Font font) {
+                         Font font, int width) {
         Font small = font.deriveFont(font.getSize2D() * 0.9f);
         g.setFont(small);
-        int barWidth = Math.max(16, g.getFontMetrics().stringWidth("0000") / 2 + 8);
-        int gap = g.getFontMetrics().stringWidth("00000 lbf") - barWidth + 6;
+        var metrics = g.getFontMetrics();
+        int barWidth = Math.max(12, metrics.stringWidth("00") + 4);
         Color[] colours = {Palette.front(), Palette.rear()};
         for (int i = 0; i < 2; i++) {
-            double x = tyreX + (i == 0 ? -gap / 2.0 - barWidth : gap / 2.0);
+            double x = tyreX + (i == 0 ? -barWidth - 2 : 2);
             int barHeight = (int) Math.round(height * Math.max(0, values[i]) / maxLoad);
             g.setColor(colours[i]);
             g.fillRect((int) x, ground + 2, barWidth, barHeight);
             String label = values[i] <= 0 ? "lifted" : format.text(values[i], Quantity.FORCE);
             drawnFigures.add(label);
-            int labelWidth = g.getFontMetrics().stringWidth(label);
-            g.drawString(label, (int) (x + barWidth / 2.0 - labelWidth / 2.0),
-                    ground + 2 + barHeight + g.getFontMetrics().getAscent() + 2);
+            int labelWidth = metrics.stringWidth(label);
+            int labelX = (int) Math.round(tyreX - labelWidth / 2.0);
+            labelX = Math.max(4, Math.min(labelX, width - 4 - labelWidth));
+            g.drawString(label, labelX, (int) (ground + 4 + height + metrics.getAscent() + i * metrics.getHeight()));
         }
     }
 
-    private void legend(Graphics2D g, int y, Font font, Color text) {
+    /**
+     * Writes what the columns are, wrapping at the width; returns the baseline of its last line.
+     */
+    private static int legend(Graphics2D g, int y, int width, Font font, Color text) {
         g.setFont(font);
+        var metrics = g.getFontMetrics();
+        int box = metrics.getAscent() * 3 / 4;
+        String[] names = {"front wheel", "rear wheel"};
+        Color[] colours = {Palette.front(), Palette.rear()};
         int x = 12;
-        g.setColor(Palette.front());
-        g.fillRect(x, y - 10, 12, 12);
-        g.setColor(text);
-        g.drawString("front wheel", x + 18, y);
-        x += 36 + g.getFontMetrics().stringWidth("front wheel");
-        g.setColor(Palette.rear());
-        g.fillRect(x, y - 10, 12, 12);
-        g.setColor(text);
-        g.drawString("rear wheel: the load each tyre puts on the road", x + 18, y);
+        for (int i = 0; i < 2; i++) {
+            int itemWidth = box + 6 + metrics.stringWidth(names[i]);
+            if (x > 12 && x + itemWidth > 12 + width) {
+                x = 12;
+                y += metrics.getHeight();
+            }
+            g.setColor(colours[i]);
+            g.fillRect(x, y - box, box, box);
+            g.setColor(text);
+            g.drawString(names[i], x + box + 6, y);
+            x += itemWidth + 18;
+        }
+        return PictureText.wrapped(g, font, LEGEND_KEY, 12,
+                y + metrics.getHeight(), width);
     }
 
     private static void tyre(Graphics2D g, double centreX, double bottom, double width, double height, Color text) {

@@ -77,7 +77,7 @@ public final class FiguresPanel extends JPanel {
                 + "quote. Its working is the same formula with the tyres left out.");
         single("Front share of load transfer", "figure.frontShare", KeyFigure.of(Kind.FRONT_LOAD_TRANSFER_SHARE),
                 result -> format.text(result.frontLoadTransferShare(), Quantity.SHARE));
-        single("Static front weight", "figure.staticFront", null,
+        single("Static front weight", "figure.staticFront", KeyFigure.of(Kind.STATIC_FRONT_WEIGHT),
                 result -> format.text(result.masses().frontMassFraction(), Quantity.SHARE));
         single("Understeer gradient, static", "figure.understeer", KeyFigure.of(Kind.UNDERSTEER_GRADIENT),
                 result -> format.text(result.understeerGradient(), Quantity.ROLL_GRADIENT));
@@ -86,7 +86,7 @@ public final class FiguresPanel extends JPanel {
         heading("In a steady turn", "Left turn", "Right turn");
         turns("Grip limit", "figure.limit", turn -> KeyFigure.of(Kind.LIMIT, turn),
                 (result, turn) -> format.text(result.turn(turn).limit(), Quantity.ACCELERATION));
-        turns("Balance at the limit", "figure.balance", turn -> null,
+        turns("Balance at the limit", "figure.balance", turn -> KeyFigure.of(Kind.BALANCE, turn),
                 (result, turn) -> result.turn(turn).balance().key());
         for (AxlePosition axle : AxlePosition.values()) {
             // why a bar moves the balance: the axle that transfers more load loses more of its grip (model.md 8.1)
@@ -110,7 +110,7 @@ public final class FiguresPanel extends JPanel {
                 (result, axle) -> bar(result, axle, b -> format.text(b.maxVonMisesStress(), Quantity.STRESS)));
         pair("Safety factor", "figure.bar.safetyFactor", axle -> KeyFigure.of(Kind.BAR_SAFETY_FACTOR, axle),
                 (result, axle) -> bar(result, axle, b -> format.factor(b.safetyFactor())));
-        pair("Each bushing carries", "figure.bar.bushing", axle -> null,
+        pair("Each bushing carries", "figure.bar.bushing", axle -> KeyFigure.of(Kind.BAR_BUSHING_LOAD, axle),
                 (result, axle) -> bar(result, axle, b -> b.bushingLoads().isEmpty() ? "-"
                         : format.text(b.bushingLoads().stream().mapToDouble(Double::doubleValue).max().orElse(0),
                         Quantity.FORCE)));

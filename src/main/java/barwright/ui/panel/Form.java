@@ -19,6 +19,9 @@ import java.util.List;
  */
 final class Form extends PagePanel {
     private final List<Runnable> detachers = new ArrayList<>();
+    /** Each labelled row: the label, the field, the unit (or null). */
+    private final List<JComponent[]> rows = new ArrayList<>();
+    private boolean stacked;
     private int row;
 
     Form() {
@@ -50,14 +53,18 @@ final class Form extends PagePanel {
         } else if (component instanceof TextValueField text) {
             detachers.add(text::detach);
         }
-        if (component instanceof javax.swing.JTextField) {
-            // a number field never shrinks below what shows "1234.567" whole
-            component.setMinimumSize(new java.awt.Dimension(Math.max(component.getPreferredSize().width, 96),
-                    component.getPreferredSize().height));
+        // (a free-text field, a name or a note, may show part of its text and scroll: it holds no figure)
+        if (component instanceof NumberField || component instanceof javax.swing.JComboBox) {
+            // a field never shrinks below what shows "1234.567" or its longest choice whole (the page scrolls
+            // sideways instead); worked out at the text size in use when it is laid out
+            keepWhole(component);
+            component.addPropertyChangeListener("font", event -> keepWhole(component));
         }
         JLabel name = new JLabel(label);
         name.setLabelFor(component);
         name.setToolTipText(component.getToolTipText());
+        // two grid rows a field: the upper one stays empty until a narrow form puts the label there
+        row++;
         GridBagConstraints labelAt = at(0, row, 1);
         labelAt.weightx = 0;
         labelAt.insets = new Insets(2, 0, 2, 8);
@@ -73,6 +80,7 @@ final class Form extends PagePanel {
             unit.setPreferredSize(new java.awt.Dimension(Math.max(unit.getPreferredSize().width, 64),
                     unit.getPreferredSize().height));
         }
+        rows.add(new JComponent[]{name, component, unit});
         row++;
         if (problem != null) {
             GridBagConstraints problemAt = at(0, row++, 3);
@@ -80,6 +88,76 @@ final class Form extends PagePanel {
             add(problem, problemAt);
         }
         return component;
+    }
+
+    /**
+     * @return the width the form needs with each label beside its field (pixels): the grid's own least width
+     * with the labels beside their fields, worked out with those constraints if the form is stacked now
+     */
+    private int besideWidth() {
+        if (!stacked) {
+            return super.getMinimumSize().width;
+        }
+        place(false);
+        int width = super.getMinimumSize().width;
+        place(true);
+        return width;
+    }
+
+    /**
+     * @return the narrowest the form can be: each label above its field (a large text on a small screen), the
+     * grid's own least width with those constraints
+     */
+    private int stackedWidth() {
+        if (stacked) {
+            return super.getMinimumSize().width;
+        }
+        place(true);
+        int width = super.getMinimumSize().width;
+        place(false);
+        return width;
+    }
+
+    @Override
+    public java.awt.Dimension getMinimumSize() {
+        java.awt.Dimension least = super.getMinimumSize();
+        return new java.awt.Dimension(Math.min(least.width, stackedWidth()), least.height);
+    }
+
+    /** Puts each label above its field where the form is narrower than label, field and unit side by side. */
+    @Override
+    public void doLayout() {
+        boolean narrow = getWidth() < besideWidth();
+        if (narrow != stacked) {
+            stacked = narrow;
+            place(stacked);
+            revalidate(); // the form's height changes: the scroll pane asks again
+        }
+        super.doLayout();
+    }
+
+    /** Sets every labelled row's constraints: each label above its field (stacked) or beside it. */
+    private void place(boolean stackedLayout) {
+        GridBagLayout layout = (GridBagLayout) getLayout();
+        for (JComponent[] labelled : rows) {
+            GridBagConstraints labelAt = layout.getConstraints(labelled[0]);
+            GridBagConstraints fieldAt = layout.getConstraints(labelled[1]);
+            boolean hasUnit = labelled[2] != null;
+            labelAt.gridy = stackedLayout ? fieldAt.gridy - 1 : fieldAt.gridy;
+            labelAt.gridwidth = stackedLayout ? 3 : 1;
+            labelAt.insets = stackedLayout ? new Insets(4, 0, 0, 0) : new Insets(2, 0, 2, 8);
+            fieldAt.gridx = stackedLayout ? 0 : 1;
+            fieldAt.gridwidth = (stackedLayout ? 1 : 0) + (hasUnit ? 1 : 2);
+            layout.setConstraints(labelled[0], labelAt);
+            layout.setConstraints(labelled[1], fieldAt);
+        }
+    }
+
+    /** Makes the component's least width its preferred width at its present font (96 px at the least). */
+    private static void keepWhole(JComponent component) {
+        component.setMinimumSize(null);
+        java.awt.Dimension preferred = component.getPreferredSize();
+        component.setMinimumSize(new java.awt.Dimension(Math.max(preferred.width, 96), preferred.height));
     }
 
     /** Adds a line of text across the form. */

@@ -32,9 +32,11 @@ import java.util.function.Consumer;
 import javax.swing.SwingUtilities;
 
 /**
- * A text field bound to one number of the open document by its key path. Every keystroke that changes the
- * text is an edit, in the display unit of the chosen system and the user's locale; text that is not a
- * number is handed to the core as it stands, so the core's message (key, value, allowed range) marks it.
+ * A text field bound to one number of the open document by its key path, in the display unit of the chosen
+ * system and the user's locale. A value typed key by key is applied when it is complete: on Enter, when the
+ * focus leaves, or after a pause of {@link #TYPING_PAUSE_MS} (so typing 2000 never shows a 200 mm bar as the
+ * car); a paste, an arrow-key or wheel step, or text set by the program is applied at once. Text that is not
+ * a number is handed to the core as it stands, so the core's message (key, value, allowed range) marks it.
  */
 public final class NumberField extends JTextField {
     private final OpenDocument document;
@@ -48,6 +50,13 @@ public final class NumberField extends JTextField {
     private boolean reloading;
     private boolean editPending;
     private Object typingSession = new Object();
+    /** A pause this long after the last key ends the typing of a value (ms): a slow typist's gap between keys. */
+    public static final int TYPING_PAUSE_MS = 700;
+    /** How many fields hold typed text not yet applied, for the window tests (event thread only). */
+    private static int pendingFields;
+    private final javax.swing.Timer typingPause = new javax.swing.Timer(TYPING_PAUSE_MS, event -> applyTyped());
+    private boolean fromKeyboard;
+    private boolean typedPending;
 
     public NumberField(OpenDocument document, ViewSettings view, KeyPath path, FieldSpec spec) {
         super(8);
@@ -62,6 +71,25 @@ public final class NumberField extends JTextField {
         unitLabel.setName(path + ".unit");
         problemLabel.setVisible(false);
         getDocument().addDocumentListener(onChange(this::textChanged));
+        typingPause.setRepeats(false);
+        // key listeners hear a key before its binding changes the text: the change that follows is typed
+        addKeyListener(new java.awt.event.KeyAdapter() {
+            @Override
+            public void keyTyped(java.awt.event.KeyEvent event) {
+                keyboardChange();
+            }
+
+            @Override
+            public void keyPressed(java.awt.event.KeyEvent event) {
+                int code = event.getKeyCode();
+                if (code == KeyEvent.VK_BACK_SPACE || code == KeyEvent.VK_DELETE) {
+                    keyboardChange();
+                }
+                if (code == KeyEvent.VK_ENTER) {
+                    applyTyped();
+                }
+            }
+        });
         addFocusListener(new FocusAdapter() {
             @Override
             public void focusGained(FocusEvent event) {
@@ -70,6 +98,7 @@ public final class NumberField extends JTextField {
 
             @Override
             public void focusLost(FocusEvent event) {
+                applyTyped();
                 document.closeEditStep();
                 typingSession = new Object();
                 if (document.problemAt(path).isEmpty()) {
@@ -156,6 +185,11 @@ public final class NumberField extends JTextField {
 
     /** Stops listening to the document and the view settings (the field is being thrown away). */
     public void detach() {
+        if (typedPending) {
+            typingPause.stop();
+            typedPending = false;
+            pendingFields--;
+        }
         document.removeListener(documentListener);
         view.removeListener(viewListener);
     }
@@ -165,7 +199,18 @@ public final class NumberField extends JTextField {
      * replacement (which Swing reports as a removal and an insertion) is one edit, not two.
      */
     private void textChanged() {
-        if (reloading || editPending) {
+        if (reloading) {
+            return;
+        }
+        if (fromKeyboard) {
+            if (!typedPending) {
+                typedPending = true;
+                pendingFields++;
+            }
+            typingPause.restart();
+            return;
+        }
+        if (editPending) {
             return;
         }
         editPending = true;
@@ -173,6 +218,30 @@ public final class NumberField extends JTextField {
             editPending = false;
             typed();
         });
+    }
+
+    /**
+     * Marks the text changes of the key being handled as typed (a key over a selection changes the text
+     * twice: a removal and an insertion); the mark ends with the key's event.
+     */
+    private void keyboardChange() {
+        fromKeyboard = true;
+        SwingUtilities.invokeLater(() -> fromKeyboard = false);
+    }
+
+    /** Applies text typed key by key, if any is waiting (Enter, focus leaving, or the pause). */
+    private void applyTyped() {
+        typingPause.stop();
+        if (typedPending) {
+            typedPending = false;
+            pendingFields--;
+            typed();
+        }
+    }
+
+    /** @return whether any field holds typed text not yet applied (for the window tests; event thread only) */
+    public static boolean anyTypingPending() {
+        return pendingFields > 0;
     }
 
     private void typed() {

@@ -38,6 +38,7 @@ public final class ResultsTabs extends JTabbedPane {
     private final AnalysisController analysis;
     private final BiConsumer<ResultChart, String> export;
     private final CarBehindView car;
+    private final JPanel carTab = new JPanel(new BorderLayout());
     private TurnDirection shownTurn;
     private final java.util.Set<ResultChart> outOfDate = new java.util.HashSet<>();
 
@@ -45,16 +46,19 @@ public final class ResultsTabs extends JTabbedPane {
      * @param export called with a chart and "png" or "svg" when a person asks to export it
      */
     public ResultsTabs(ResultsModel results, CorneringProbe probe, FigureFormat format, AnalysisController analysis,
-                       BiConsumer<ResultChart, String> export) {
+                       BiConsumer<ResultChart, String> export,
+                       BiConsumer<barwright.ui.chart.ChartExport.Picture, String> exportPicture) {
         this.results = results;
         this.probe = probe;
         setName("results.tabs");
         setTabLayoutPolicy(SCROLL_TAB_LAYOUT);
         var view = format.view();
         car = new CarBehindView(results, probe, format);
-        JPanel carTab = new JPanel(new BorderLayout());
         carTab.add(car, BorderLayout.CENTER);
-        carTab.add(controls(), BorderLayout.SOUTH);
+        JPanel carControls = new JPanel(new BorderLayout());
+        carControls.add(controls(), BorderLayout.CENTER);
+        carControls.add(pictureExport(exportPicture), BorderLayout.SOUTH);
+        carTab.add(carControls, BorderLayout.SOUTH);
         addTab("Car from behind", carTab);
         setToolTipTextAt(0, "The car in a steady turn at the slider's lateral acceleration");
         this.view = view;
@@ -79,6 +83,22 @@ public final class ResultsTabs extends JTabbedPane {
                 + " file, in the units shown");
         button.addActionListener(event -> export.accept(chart, type));
         return button;
+    }
+
+    /** The car picture's own export buttons, as under every chart; written at the export size, 18-point text. */
+    private JPanel pictureExport(BiConsumer<barwright.ui.chart.ChartExport.Picture, String> exportPicture) {
+        JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        for (String type : new String[]{"png", "svg"}) {
+            JButton button = new JButton("Save as " + type.toUpperCase(java.util.Locale.ROOT) + "…");
+            button.setName("car-from-behind.export." + type);
+            button.setToolTipText("Write the car picture to a " + type.toUpperCase(java.util.Locale.ROOT)
+                    + " file, in the units shown");
+            button.addActionListener(event -> exportPicture.accept((graphics, width, height) -> car.paintPicture(
+                    graphics, width, height, new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 18)),
+                    type));
+            bar.add(button);
+        }
+        return bar;
     }
 
     private JPanel controls() {
@@ -217,6 +237,19 @@ public final class ResultsTabs extends JTabbedPane {
             tab.add(bar, BorderLayout.SOUTH);
         }
         return tab;
+    }
+
+    /**
+     * @return the height the tabs take beside the car picture itself (pixels): the tab strip, the turn
+     * direction and the slider, at the present text size
+     */
+    public int pictureOverhead() {
+        int controls = carTab.getPreferredSize().height - car.getPreferredSize().height;
+        java.awt.Rectangle tab = getTabCount() > 0 ? getBoundsAt(0) : null;
+        int line = getFontMetrics(getFont()).getHeight();
+        int strip = tab != null && tab.height > 0 ? tab.y + tab.height : line * 2;
+        java.awt.Insets insets = getInsets();
+        return controls + strip + insets.top + insets.bottom + 4;
     }
 
     public CarBehindView car() {

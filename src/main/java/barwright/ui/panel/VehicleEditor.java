@@ -28,11 +28,29 @@ public final class VehicleEditor extends JTabbedPane {
         setMinimumSize(new Dimension(320, 300));
     }
 
+    /**
+     * @return the width the editor needs to show every page's labels, fields and units whole at the present
+     * text size (pixels), scroll bar included
+     */
+    public int neededWidth() {
+        int needed = 0;
+        for (int i = 0; i < getTabCount(); i++) {
+            if (getComponentAt(i) instanceof JScrollPane scroll && scroll.getViewport().getView() != null) {
+                needed = Math.max(needed, scroll.getViewport().getView().getMinimumSize().width
+                        + scroll.getVerticalScrollBar().getPreferredSize().width);
+            }
+        }
+        java.awt.Insets insets = getInsets();
+        return needed + insets.left + insets.right + 4;
+    }
+
     private void page(String title, String tip, JComponent page) {
         JScrollPane scroll = new JScrollPane(page);
         scroll.setBorder(null);
         scroll.getVerticalScrollBar().setUnitIncrement(16);
-        scroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
+        // sideways only when a large text makes the form wider than the column (PagePanel)
+        scroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_AS_NEEDED);
+        scroll.getHorizontalScrollBar().setUnitIncrement(16);
         addTab(title, null, scroll, tip);
     }
 }

@@ -17,6 +17,15 @@ public class WrappingText extends JTextArea {
         setFont(UIManager.getFont("Label.font"));
     }
 
+    /** Wraps rather than widens: the least width is a few words, whatever the text's length. */
+    @Override
+    public java.awt.Dimension getMinimumSize() {
+        if (isMinimumSizeSet()) {
+            return super.getMinimumSize();
+        }
+        return new java.awt.Dimension(Math.min(super.getPreferredSize().width, 120), super.getMinimumSize().height);
+    }
+
     @Override
     public void updateUI() {
         super.updateUI();

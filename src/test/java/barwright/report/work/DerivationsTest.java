@@ -50,12 +50,14 @@ class DerivationsTest {
 
     private static List<KeyFigure> everyFigure() {
         List<KeyFigure> figures = new ArrayList<>();
-        for (Kind kind : List.of(Kind.ROLL_GRADIENT, Kind.FRONT_LOAD_TRANSFER_SHARE, Kind.UNDERSTEER_GRADIENT)) {
+        for (Kind kind : List.of(Kind.ROLL_GRADIENT, Kind.FRONT_LOAD_TRANSFER_SHARE, Kind.STATIC_FRONT_WEIGHT,
+                Kind.UNDERSTEER_GRADIENT)) {
             figures.add(KeyFigure.of(kind));
         }
         for (AxlePosition axle : AxlePosition.values()) {
             for (Kind kind : List.of(Kind.SPRING_ROLL_STIFFNESS, Kind.BAR_ROLL_STIFFNESS, Kind.TYRE_ROLL_STIFFNESS,
-                    Kind.AXLE_ROLL_STIFFNESS, Kind.BAR_LINK_RATE, Kind.BAR_MASS, Kind.BAR_SAFETY_FACTOR)) {
+                    Kind.AXLE_ROLL_STIFFNESS, Kind.BAR_LINK_RATE, Kind.BAR_MASS, Kind.BAR_SAFETY_FACTOR,
+                    Kind.BAR_BUSHING_LOAD)) {
                 figures.add(KeyFigure.of(kind, axle));
             }
             for (TurnDirection turn : TurnDirection.values()) {
@@ -64,6 +66,7 @@ class DerivationsTest {
         }
         for (TurnDirection turn : TurnDirection.values()) {
             figures.add(KeyFigure.of(Kind.LIMIT, turn));
+            figures.add(KeyFigure.of(Kind.BALANCE, turn));
         }
         return figures;
     }
@@ -86,6 +89,39 @@ class DerivationsTest {
                 .isEqualTo(result.leftTurn().limit());
         assertThat(Derivations.of(result, KeyFigure.of(Kind.BAR_SAFETY_FACTOR, AxlePosition.REAR)).result().value())
                 .isEqualTo(result.rear().bar().safetyFactor());
+    }
+
+    @Test
+    void theStaticFrontWeightIsTheSampleFilesOwnShareAndItsWheelLoadsAddUpToTheWeight() throws Exception {
+        AnalysisResult result = analyse(tree -> { });
+        Derivation work = Derivations.of(result, KeyFigure.of(Kind.STATIC_FRONT_WEIGHT));
+        // the sample file (sample-vehicles/club-hatchback.json) gives massKg 1020 and frontMassFraction 0.63
+        assertThat(work.result().value()).isCloseTo(0.63, within(CLOSED_FORM));
+        double weight = value(work, "W_lf") + value(work, "W_rf") + value(work, "W_lr") + value(work, "W_rr");
+        // conservation: the four wheels carry the car's weight, m g
+        assertThat(weight).isCloseTo(1020 * STANDARD_GRAVITY, withinPercentage(1e-9));
+    }
+
+    @Test
+    void aClosedFormBarsBushingsHoldTheLinkForcesCouple() throws Exception {
+        AnalysisResult result = analyse(tree -> { });
+        Derivation work = Derivations.of(result, KeyFigure.of(Kind.BAR_BUSHING_LOAD, AxlePosition.FRONT));
+        // moment balance about the car's length axis (statics): the bushings' couple R s equals the links' F L
+        double couple = work.step("F").value() * value(work, "L");
+        assertThat(work.result().value() * value(work, "s")).isCloseTo(couple, withinPercentage(1e-9));
+        assertThat(work.step("F").value()).isCloseTo(value(work, "k_link") * value(work, "Δ"), withinPercentage(1e-9));
+    }
+
+    @Test
+    void theBalanceIsTheAxleThatReachesItsGripFirst() throws Exception {
+        AnalysisResult result = analyse(tree -> { });
+        Derivation work = Derivations.of(result, KeyFigure.of(Kind.BALANCE, TurnDirection.LEFT));
+        double front = value(work, "a_f");
+        double rear = value(work, "a_r");
+        assertThat(work.result().value()).isEqualTo(Math.min(front, rear));
+        // the sample understeers (the key figures say so): the front lets go first, by more than the band
+        assertThat(rear - front).isGreaterThan(value(work, "band"));
+        assertThat(work.result().meaning()).contains("understeer");
     }
 
     @Test

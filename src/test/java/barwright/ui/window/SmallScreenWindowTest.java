@@ -65,6 +65,67 @@ class SmallScreenWindowTest {
         assertThat(height).isGreaterThanOrEqualTo(150);
     }
 
+    /**
+     * Walks every text size offered at 1024x768: on every editor page and in the figures, no number field,
+     * choice, label or figure is laid out narrower than its text needs (it would be cut, "3151 N" shown as
+     * "51 N"), and the car picture keeps its least size: 400 px wide and at least 350 px high, of which 240 px
+     * of drawing under its words (the least judged usable from the screenshots).
+     */
+    @Test
+    void atEveryTextSizeOnA1024By768ScreenNothingIsCutAndThePictureKeepsItsRoom() {
+        List<String> faults = new ArrayList<>();
+        for (int size : Themes.offeredTextSizes()) {
+            fixture = new WindowFixture(1024, 768, size);
+            faults.addAll(GuiActionRunner.execute(() -> cutComponents(size)));
+            JComponent picture = GuiActionRunner.execute(() ->
+                    (JComponent) fixture.robot.finder().findByName(fixture.window, "carBehind", false));
+            int width = GuiActionRunner.execute(picture::getWidth);
+            int height = GuiActionRunner.execute(picture::getHeight);
+            int least = GuiActionRunner.execute(() -> picture.getMinimumSize().height);
+            if (width < 400 || height < 350 || height < least) {
+                faults.add("text " + size + ": car picture " + width + " x " + height + " px (least " + least + ")");
+            }
+            fixture.close();
+            fixture = null;
+        }
+        assertThat(faults).isEmpty();
+    }
+
+    /** @return each number field, choice, figure or figure label narrower than its text, on every editor page */
+    private List<String> cutComponents(int size) {
+        List<String> cut = new ArrayList<>();
+        var editor = fixture.window.editor();
+        for (int page = 0; page < editor.getTabCount(); page++) {
+            editor.setSelectedIndex(page);
+            fixture.window.getRootPane().validate();
+            collectCut((Container) editor.getSelectedComponent(), "text " + size + ", page "
+                    + editor.getTitleAt(page), cut);
+        }
+        collectCut(fixture.window.figures(), "text " + size + ", figures", cut);
+        return cut;
+    }
+
+    private static void collectCut(Container root, String where, List<String> into) {
+        for (Component child : root.getComponents()) {
+            boolean number = child instanceof barwright.ui.panel.NumberField || child instanceof javax.swing.JComboBox
+                    || child instanceof AbstractButton || child instanceof javax.swing.JLabel;
+            // a unit label with no text (a ratio) is given no width, and has nothing to cut
+            boolean empty = child instanceof javax.swing.JLabel label && (label.getText() == null
+                    || label.getText().isEmpty());
+            // a label's need is its text's own width: the form pads unit labels to 64 px only to line them up
+            int needed = child instanceof javax.swing.JLabel label && !empty
+                    ? label.getFontMetrics(label.getFont()).stringWidth(label.getText()) + label.getInsets().left
+                    + label.getInsets().right
+                    : child.getPreferredSize().width;
+            if (number && !empty && child.isVisible() && child.getWidth() < needed) {
+                into.add(where + ": " + child.getClass().getSimpleName() + " " + child.getName() + " shown "
+                        + child.getWidth() + " px of " + needed);
+            } else if (child instanceof Container container) {
+                collectCut(container, where, into);
+            }
+        }
+    }
+
     @Test
     void onAWideScreenAtTheSystemTextTheFiguresStayBesideTheCharts() {
         fixture = new WindowFixture(1280, 880, 0);

@@ -60,7 +60,8 @@ public final class WindowFixture implements AutoCloseable {
         Pause.pause(new Condition("the analysis to settle") {
             @Override
             public boolean test() {
-                return GuiActionRunner.execute(() -> window.analysis().isIdle() && window.results().shown() != null);
+                return GuiActionRunner.execute(() -> !barwright.ui.panel.NumberField.anyTypingPending()
+                        && window.analysis().isIdle() && window.results().shown() != null);
             }
         }, Timeout.timeout(20_000));
         robot.waitForIdle();
