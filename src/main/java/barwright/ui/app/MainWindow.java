@@ -250,6 +250,12 @@ public final class MainWindow extends JFrame {
     void fitEditor() {
         int wanted = Math.max(VehicleEditor.WIDTH * textScale() / 100, editor.neededWidth());
         int allowed = Math.max(VehicleEditor.WIDTH, getWidth() - RESULTS_LEAST_WIDTH);
+        // where the editor at its usual width still leaves room for the figures beside the charts, keep them
+        // there: the editor's labels then go above their fields (Form) rather than push the figures below
+        int besideLeaves = getWidth() - resultsLayout.widthForBeside() - mainSplit.getDividerSize() - 4;
+        if (besideLeaves >= VehicleEditor.WIDTH) {
+            allowed = Math.min(allowed, besideLeaves);
+        }
         mainSplit.setDividerLocation(Math.min(wanted, allowed));
         mainSplit.revalidate();
     }

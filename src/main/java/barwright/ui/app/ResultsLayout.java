@@ -45,6 +45,11 @@ final class ResultsLayout implements LayoutManager {
         return beside;
     }
 
+    /** @return the least width of the results that keeps the figures beside the charts (pixels) */
+    int widthForBeside() {
+        return CHARTS_MIN_WIDTH + figures.getPreferredSize().width;
+    }
+
     private boolean besideAt(int width) {
         return width - Math.min(figures.getPreferredSize().width, width) >= CHARTS_MIN_WIDTH;
     }

@@ -22,6 +22,7 @@ import barwright.units.Quantity;
 import javax.swing.JPanel;
 import javax.swing.JTextArea;
 import java.awt.BorderLayout;
+import java.awt.Dimension;
 import java.util.Locale;
 import java.util.function.Consumer;
 
@@ -31,6 +32,8 @@ import java.util.function.Consumer;
  * logged lap the text points to the {@code fatigue --log} command.
  */
 public final class BarLifeView extends JPanel {
+    /** The life view's least width (pixels): the damage chart still reads at this width. */
+    private static final int LEAST_WIDTH = 240;
     /** The short caution under the life (the command line prints the full one). */
     static final String CAUTION = "An estimate with a wide scatter: inspect the bar and its ends for cracks, and "
             + "follow the maker's schedule and your event's rules.";
@@ -68,12 +71,16 @@ public final class BarLifeView extends JPanel {
         }, message -> summary.setText("The fatigue life could not be worked out: " + message));
     }
 
-    /** Never squashed below the chart's own least height plus a few lines of text. */
+    /**
+     * Never squashed below the chart's own least height plus a few lines of text; no wider than the editor's
+     * column needs (the column takes its least width from its pages, and a wider one would push the key
+     * figures below the charts on a 1280 px screen).
+     */
     @Override
-    public java.awt.Dimension getMinimumSize() {
-        java.awt.Dimension text = summary.getPreferredSize();
-        java.awt.Dimension plot = chart.component().getMinimumSize();
-        return new java.awt.Dimension(plot.width, text.height + 4 + plot.height);
+    public Dimension getMinimumSize() {
+        Dimension text = summary.getPreferredSize();
+        Dimension plot = chart.component().getMinimumSize();
+        return new Dimension(Math.min(plot.width, LEAST_WIDTH), text.height + 4 + plot.height);
     }
 
     @Override
