@@ -252,8 +252,9 @@ public final class MainWindow extends JFrame {
         int allowed = Math.max(VehicleEditor.WIDTH, getWidth() - RESULTS_LEAST_WIDTH);
         // where the editor at its usual width still leaves room for the figures beside the charts, keep them
         // there: the editor's labels then go above their fields (Form) rather than push the figures below
+        // (at the system text size only: with larger text the figures go below on any screen this fits)
         int besideLeaves = getWidth() - resultsLayout.widthForBeside() - mainSplit.getDividerSize() - 4;
-        if (besideLeaves >= VehicleEditor.WIDTH) {
+        if (textScale() == 100 && besideLeaves >= VehicleEditor.WIDTH) {
             allowed = Math.min(allowed, besideLeaves);
         }
         mainSplit.setDividerLocation(Math.min(wanted, allowed));

@@ -54,7 +54,10 @@ class SmallScreenWindowTest {
     @Test
     void onASmallScreenTheFiguresMoveBelowAndTheCarPictureKeepsItsRoom() {
         fixture = new WindowFixture(1024, 768, Themes.largestTextSize());
-        boolean beside = GuiActionRunner.execute(() -> fixture.window.figuresBeside());
+        boolean beside = GuiActionRunner.execute(() -> {
+            fixture.window.validate(); // the layout of the settled results, not one still pending
+            return fixture.window.figuresBeside();
+        });
         JComponent picture = GuiActionRunner.execute(() ->
                 (JComponent) fixture.robot.finder().findByName(fixture.window, "carBehind", false));
         int width = GuiActionRunner.execute(picture::getWidth);
@@ -129,7 +132,10 @@ class SmallScreenWindowTest {
     @Test
     void onAWideScreenAtTheSystemTextTheFiguresStayBesideTheCharts() {
         fixture = new WindowFixture(1280, 880, 0);
-        assertThat(GuiActionRunner.execute(() -> fixture.window.figuresBeside())).isTrue();
+        assertThat(GuiActionRunner.execute(() -> {
+            fixture.window.validate();
+            return fixture.window.figuresBeside();
+        })).isTrue();
     }
 
     private static void collectFigures(Container root, List<AbstractButton> into) {
