@@ -150,11 +150,11 @@ final class MeasureCommand implements Command {
         }
         double raisedFront = required(parsed, "raised-front-axle-kg");
         double raise = required(parsed, "raise-mm") * 1e-3;
-        double defaultCentre = (car.front().unsprungCgHeight() + car.rear().unsprungCgHeight()) / 2;
+        double defaultCentre = TiltTest.assumedWheelCentreHeight(car);
         double wheelCentre = parsed.number("wheel-centre-height-mm", defaultCentre * 1e3) * 1e-3;
-        TiltTest test = new TiltTest(car.mass(), car.mass() * car.frontMassFraction(),
-                "front".equals(raised) ? AxlePosition.FRONT : AxlePosition.REAR, raise, raisedFront, car.wheelbase(),
-                wheelCentre, parsed.number("scale-resolution-kg", 0.5), parsed.number("raise-resolution-mm", 1) * 1e-3);
+        TiltTest test = TiltTest.on(car, "front".equals(raised) ? AxlePosition.FRONT : AxlePosition.REAR, raise,
+                raisedFront, wheelCentre, parsed.number("scale-resolution-kg", 0.5),
+                parsed.number("raise-resolution-mm", 1) * 1e-3);
         CentreOfMassHeight height = TiltMethod.height(test);
         String text = MeasureText.centreOfMass(height, parsed.units());
         if (parsed.option("wheel-centre-height-mm", null) == null) {

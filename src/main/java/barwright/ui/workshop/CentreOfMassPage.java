@@ -146,7 +146,7 @@ public final class CentreOfMassPage extends JPanel {
             return;
         }
         Vehicle vehicle = car.vehicle();
-        double defaultCentre = (vehicle.front().unsprungCgHeight() + vehicle.rear().unsprungCgHeight()) / 2;
+        double defaultCentre = TiltTest.assumedWheelCentreHeight(vehicle);
         fromCar.setText(String.format("<html>Level readings from the car file: mass %s, front axle %s, wheelbase %s."
                         + "</html>",
                 Figures.format(vehicle.mass(), Quantity.MASS, view.units(), 1, view.locale()),
@@ -154,9 +154,9 @@ public final class CentreOfMassPage extends JPanel {
                         view.locale()),
                 Figures.format(vehicle.wheelbase(), Quantity.LENGTH, view.units(), 0, view.locale())));
         try {
-            TiltTest test = new TiltTest(vehicle.mass(), vehicle.mass() * vehicle.frontMassFraction(),
+            TiltTest test = TiltTest.on(vehicle,
                     "front".equals(raised.getSelectedItem()) ? AxlePosition.FRONT : AxlePosition.REAR, raise.si(),
-                    tiltedFront.si(), vehicle.wheelbase(), wheelCentre.isBlank() ? defaultCentre : wheelCentre.si(),
+                    tiltedFront.si(), wheelCentre.isBlank() ? defaultCentre : wheelCentre.si(),
                     scaleResolution.si(), raiseResolution.si());
             current = TiltMethod.height(test);
             String text = MeasureText.centreOfMass(current, view.units());
