@@ -12,9 +12,9 @@ import static org.assertj.core.api.Assertions.within;
 /**
  * The tilt method against an independent forward model: a car of known centre of mass is rotated about the
  * lower axle's wheel centre with a rotation matrix, and the scale reading under the lower axle follows from
- * the moment balance about the raised axle's wheel centre. No published worked example with numbers was
- * found in the time given (docs/validation.md, "Workshop measurements", says so); the formula's derivation was checked against the
- * pages cited in TiltMethod.
+ * the moment balance about the raised axle's wheel centre; and against a van maker's published procedure,
+ * which takes another route to the same height. No published worked example with numbers was found
+ * (docs/validation.md, "Workshop measurements", says so).
  */
 class TiltMethodTest {
     private static final double WHEELBASE = 2.5;       // m, an invented car
@@ -138,5 +138,35 @@ class TiltMethodTest {
                 110 * inch, 0.3, 0.5, 1e-3));
         assertThat(Math.tan(height.tiltAngle())).isCloseTo(0.1659, within(5e-5));
         assertThat(Math.tan(height.tiltAngle())).isNotCloseTo(18.0 / 110, within(1e-3));
+    }
+
+    @Test
+    void aVanMakersPublishedProcedureGivesTheSameHeightFromTheSameReadings() throws MeasurementException {
+        // The procedure of the Volkswagen Commercial Vehicles body builder guidelines, Crafter, section 3.5.1
+        // "Centre of gravity calculation" (vwn-aufbaurichtlinien.de, read as far as its equations (1) to (9)):
+        // the front axle raised by a, horizontal distances of the centre of gravity from the rear axle level
+        // (Xh1) and raised (Xh2), the shortened wheelbase RS2, then Z = tan(beta) y. A different route from
+        // TiltMethod's load-change formula (no dW, no tan theta of the raise), so agreement is a real check.
+        // The page gives no numbers: the readings are invented for a laden van on a weighbridge, with the
+        // page's recommended 500 mm raise and one of its listed wheelbases (3665 mm).
+        double rs1 = 3.665;
+        double a = 0.500;
+        double gv1 = 1650;
+        double gh1 = 1350;
+        double gv2 = 1540;
+        double gh2 = gv1 + gh1 - gv2;
+        double xh1 = gv1 * rs1 / (gv1 + gh1);                     // (2)
+        double rs2 = Math.sqrt(rs1 * rs1 - a * a);                // (3)
+        double xh2 = gv2 * rs2 / (gv2 + gh2);                     // (4)
+        double beta = Math.acos(a / rs1);                         // (7)
+        double u = a * xh2 / rs2;                                 // (9)
+        double y = xh1 - Math.sqrt(u * u + xh2 * xh2);            // (8)
+        double z = Math.tan(beta) * y;                            // (5), above the axles' centre line
+
+        CentreOfMassHeight found = TiltMethod.height(new TiltTest(gv1 + gh1, gv1, AxlePosition.FRONT, a, gv2, rs1,
+                0.35, 0.5, 1e-3));
+        // both are exact for a rigid car; 1e-9 m allows for rounding only
+        assertThat(found.aboveWheelCentres()).isCloseTo(z, within(1e-9));
+        assertThat(z).as("a plausible laden van: about a metre above the wheel centres").isBetween(0.9, 1.1);
     }
 }
