@@ -31,8 +31,8 @@ final class SheetCommand implements Command {
 
     @Override
     public String summary() {
-        return "write the setup sheet as PDF: the car, both bars drawn, key figures, the adjustment map, charts, "
-                + "the date and the cautions";
+        return "write the setup sheet as PDF: the car, both bars drawn, key figures, a block for the crew, the "
+                + "adjustment map, charts, the date and the cautions";
     }
 
     @Override

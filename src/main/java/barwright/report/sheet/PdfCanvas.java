@@ -6,11 +6,14 @@ import org.apache.pdfbox.pdmodel.font.Standard14Fonts;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 
 /**
  * Drawing on one PDF page in points (1/72 in) from the bottom-left corner, with the standard Helvetica fonts
- * (no font files needed). Text is transliterated to what those fonts' WinAnsi encoding holds.
+ * (no font files needed). Text is transliterated to what those fonts' WinAnsi encoding holds. The canvas
+ * keeps the vertical extent of everything drawn ({@link #marks()}), so a test can see how a page is filled.
  */
 final class PdfCanvas {
     static final PDType1Font REGULAR = new PDType1Font(Standard14Fonts.FontName.HELVETICA);
@@ -22,9 +25,28 @@ final class PdfCanvas {
     private static final float CIRCLE_HANDLE = 0.5523f;
 
     private final PDPageContentStream stream;
+    private final List<Extent> marks = new ArrayList<>();
 
     PdfCanvas(PDPageContentStream stream) {
         this.stream = stream;
+    }
+
+    /**
+     * The vertical extent of one thing drawn, in points from the page's foot.
+     *
+     * @param low  its lowest point
+     * @param high its highest point
+     */
+    record Extent(float low, float high) {
+    }
+
+    /** @return the vertical extent of every text, line and shape drawn so far, in drawing order */
+    List<Extent> marks() {
+        return List.copyOf(marks);
+    }
+
+    private void mark(float a, float b) {
+        marks.add(new Extent(Math.min(a, b), Math.max(a, b)));
     }
 
     /** @return the text with every character the font cannot show replaced */
@@ -68,6 +90,8 @@ final class PdfCanvas {
         stream.newLineAtOffset(x, y);
         stream.showText(printable(text, font));
         stream.endText();
+        // a line of text reaches from its descenders to its capitals
+        mark(y - 0.22f * size, y + 0.72f * size);
     }
 
     void textRight(String text, float right, float y, PDType1Font font, float size) throws IOException {
@@ -125,6 +149,7 @@ final class PdfCanvas {
     }
 
     void line(float x1, float y1, float x2, float y2) throws IOException {
+        mark(y1, y2);
         stream.moveTo(x1, y1);
         stream.lineTo(x2, y2);
         stream.stroke();
@@ -134,6 +159,9 @@ final class PdfCanvas {
         if (x.length < 2) {
             return;
         }
+        for (float point : y) {
+            mark(point, point);
+        }
         stream.moveTo(x[0], y[0]);
         for (int i = 1; i < x.length; i++) {
             stream.lineTo(x[i], y[i]);
@@ -142,26 +170,50 @@ final class PdfCanvas {
     }
 
     void rectangle(float x, float y, float width, float height) throws IOException {
+        mark(y, y + height);
         stream.addRect(x, y, width, height);
         stream.stroke();
     }
 
     void filledRectangle(float x, float y, float width, float height) throws IOException {
+        mark(y, y + height);
         stream.addRect(x, y, width, height);
         stream.fill();
     }
 
     void circle(float centreX, float centreY, float radius, boolean filled) throws IOException {
+        circlePath(centreX, centreY, radius);
+        if (filled) {
+            stream.fill();
+        } else {
+            stream.stroke();
+        }
+    }
+
+    /** A filled triangle, e.g. a marker pointing at a row or column. */
+    void filledTriangle(float x1, float y1, float x2, float y2, float x3, float y3) throws IOException {
+        mark(Math.min(y1, Math.min(y2, y3)), Math.max(y1, Math.max(y2, y3)));
+        stream.moveTo(x1, y1);
+        stream.lineTo(x2, y2);
+        stream.lineTo(x3, y3);
+        stream.closePath();
+        stream.fill();
+    }
+
+    /** A circle filled with the fill colour and outlined in the stroke colour. */
+    void outlinedCircle(float centreX, float centreY, float radius) throws IOException {
+        circlePath(centreX, centreY, radius);
+        stream.closePath();
+        stream.fillAndStroke();
+    }
+
+    private void circlePath(float centreX, float centreY, float radius) throws IOException {
+        mark(centreY - radius, centreY + radius);
         float handle = radius * CIRCLE_HANDLE;
         stream.moveTo(centreX + radius, centreY);
         stream.curveTo(centreX + radius, centreY + handle, centreX + handle, centreY + radius, centreX, centreY + radius);
         stream.curveTo(centreX - handle, centreY + radius, centreX - radius, centreY + handle, centreX - radius, centreY);
         stream.curveTo(centreX - radius, centreY - handle, centreX - handle, centreY - radius, centreX, centreY - radius);
         stream.curveTo(centreX + handle, centreY - radius, centreX + radius, centreY - handle, centreX + radius, centreY);
-        if (filled) {
-            stream.fill();
-        } else {
-            stream.stroke();
-        }
     }
 }
