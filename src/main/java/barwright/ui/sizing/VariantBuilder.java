@@ -3,6 +3,7 @@ package barwright.ui.sizing;
 import barwright.io.VehicleDocument;
 import barwright.io.VehicleFileException;
 import barwright.loading.VehicleLoader;
+import barwright.ui.document.DocumentEvent;
 import barwright.ui.field.NumberText;
 import barwright.ui.field.ViewSettings;
 import barwright.units.UnitSystem;
@@ -103,7 +104,12 @@ final class VariantBuilder extends JPanel {
                 CompareView.button("compare.addVariant", "Add the variant", addVariant)), BorderLayout.EAST);
 
         WhileShown updates = new WhileShown(this, this::carChanged);
-        context.document().addListener(event -> updates.request());
+        context.document().addListener(event -> {
+            if (event.kind() == DocumentEvent.Kind.REPLACED) {
+                pending.clear(); // changes chosen for another car
+            }
+            updates.request();
+        });
         context.view().addListener(this::unitsChanged);
         carChanged();
     }

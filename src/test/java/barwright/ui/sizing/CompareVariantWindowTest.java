@@ -124,6 +124,10 @@ class CompareVariantWindowTest {
 
     @Test
     void a_car_without_a_rear_bar_offers_no_rear_bar_fields() throws Exception {
+        sizing.comboBox("compare.what").selectItem("Rear bar — " + VariantChoices.ARM_HOLE);
+        sizing.comboBox("compare.hole").selectItem(0);
+        sizing.button("compare.addChange").click();
+        assertThat(sizing.list("compare.changes").contents()).hasSize(1);
         var saloon = VehicleLoader.read(Path.of("sample-vehicles/road-saloon.json"));
         GuiActionRunner.execute(() -> fixture.window.document().replace(saloon, null, "sample: road saloon"));
         fixture.robot.waitForIdle();
@@ -137,5 +141,7 @@ class CompareVariantWindowTest {
         });
         assertThat(offered).contains("Rear axle — Spring rate", "Front bar — Outside diameter");
         assertThat(offered).noneMatch(item -> item.startsWith("Rear bar"));
+        // the change chosen for the car before is dropped with it
+        assertThat(sizing.list("compare.changes").contents()).isEmpty();
     }
 }
