@@ -28,6 +28,7 @@ import static barwright.io.VehicleKeys.VEHICLE;
 import static barwright.io.VehicleKeys.MATERIAL;
 import static barwright.io.VehicleKeys.SECTION;
 import static barwright.io.VehicleKeys.SELECTED_ARM;
+import static barwright.io.VehicleKeys.TYRE;
 
 /**
  * The one place that changes a vehicle file's tree: a chosen bar put in place (the window, the sizing views,
@@ -37,8 +38,6 @@ import static barwright.io.VehicleKeys.SELECTED_ARM;
  * whole, so a change keeps every unknown key and a bad value is refused with its key path like a bad file.
  */
 public final class VehicleEdits {
-    private static final String TYRE = "tyre";
-
     private VehicleEdits() {
     }
 

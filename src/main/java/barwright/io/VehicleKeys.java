@@ -18,11 +18,20 @@ public final class VehicleKeys {
     public static final String RIGHT_FRONT = "rightFront";
     public static final String LEFT_REAR = "leftRear";
     public static final String RIGHT_REAR = "rightRear";
+    /** The analysis settings object (its bar check travel). */
+    public static final String ANALYSIS = "analysis";
+
+    // an axle (file-format.md, "An axle")
+    public static final String ROLL_CENTRE_HEIGHT_MM = "rollCentreHeightMm";
+    public static final String TYRE = "tyre";
 
     public static final String BAR = "bar";
     public static final String MATERIAL = "material";
     public static final String SECTION = "section";
     public static final String SELECTED_ARM = "selectedArm";
+    /** A plain U-bar's lengths: its torsion length, and one arm length per hole. */
+    public static final String TORSION_LENGTH_MM = "torsionLengthMm";
+    public static final String ARM_LENGTHS_MM = "armLengthsMm";
     /** A shaped bar's object, and its arm holes' set-backs inside it. */
     public static final String GEOMETRY = "geometry";
     public static final String HOLE_SETBACKS_MM = "holeSetbacksMm";

@@ -6,9 +6,12 @@ import java.util.List;
 
 import static barwright.units.Constants.RADIANS_PER_DEGREE;
 
+import static barwright.io.VehicleKeys.ARM_LENGTHS_MM;
 import static barwright.io.VehicleKeys.DENSITY_KG_PER_M3;
 import static barwright.io.VehicleKeys.OUTER_DIAMETER_MM;
+import static barwright.io.VehicleKeys.ROLL_CENTRE_HEIGHT_MM;
 import static barwright.io.VehicleKeys.SHEAR_MODULUS_GPA;
+import static barwright.io.VehicleKeys.TORSION_LENGTH_MM;
 import static barwright.io.VehicleKeys.WALL_MM;
 import static barwright.io.VehicleKeys.YIELD_STRENGTH_MPA;
 import static barwright.io.VehicleKeys.YOUNGS_MODULUS_GPA;
@@ -81,7 +84,7 @@ public final class FieldCatalogue {
             field("trackMm", "Track", Quantity.LENGTH, MM,
                     "Distance between the centres of this axle's two tyre contact patches at ride height: "
                             + "measure between the tyre centrelines on the ground."),
-            field("rollCentreHeightMm", "Roll centre height", Quantity.LENGTH, MM,
+            field(ROLL_CENTRE_HEIGHT_MM, "Roll centre height", Quantity.LENGTH, MM,
                     "Height above the ground of the point the body rolls about at this axle, at ride height. "
                             + "Found by drawing the suspension links to scale from the front (their instant "
                             + "centres); a roll centre below the ground is negative."));
@@ -157,7 +160,7 @@ public final class FieldCatalogue {
 
     /** Under {@code front.bar}: the plain U-bar's lengths. */
     public static final List<FieldSpec> BAR_LENGTHS = List.of(
-            field("torsionLengthMm", "Torsion length", Quantity.LENGTH, MM,
+            field(TORSION_LENGTH_MM, "Torsion length", Quantity.LENGTH, MM,
                     "Length of the straight middle section that twists, from the centre of one bend to the "
                             + "centre of the other, along the bar's axis."),
             optional("bushingSpanMm", "Bushing span", Quantity.LENGTH, MM,
@@ -165,7 +168,7 @@ public final class FieldCatalogue {
                             + "sit at the bends (the span then equals the torsion length)."));
 
     /** One entry of {@code front.bar.armLengthsMm}; the key gets its index. */
-    public static final FieldSpec ARM = field("armLengthsMm", "Arm length", Quantity.LENGTH, MM,
+    public static final FieldSpec ARM = field(ARM_LENGTHS_MM, "Arm length", Quantity.LENGTH, MM,
             "Effective arm length of this link hole: the distance from the bar's twisting axis to the centre "
                     + "of the hole, measured square to the axis (not along a bent arm).");
 

@@ -11,6 +11,7 @@ import barwright.sizing.compare.Configuration;
 import barwright.sizing.compare.FigureRow;
 import barwright.ui.chart.ComparisonCharts;
 import barwright.ui.panel.FigureFormat;
+import barwright.ui.panel.PagePanel;
 import barwright.ui.panel.WrappingText;
 import barwright.units.Quantity;
 
@@ -22,20 +23,23 @@ import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
 import javax.swing.JTextField;
+import javax.swing.UIManager;
 import javax.swing.table.AbstractTableModel;
 import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
+import java.awt.Font;
 import java.awt.GridLayout;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.stream.Collectors;
 
 /**
  * Two to four setups side by side: each a saved vehicle file, the open car as it was when added, or a variant of
- * the open car by key path; their figures with the difference of each from the first, and the main charts with
+ * the open car built from its fields ({@link VariantBuilder}); their figures with the difference of each from the first, and the main charts with
  * one line per setup. Compared again off the event thread whenever the list changes. Event thread.
  */
 final class CompareView extends JPanel {
@@ -43,21 +47,22 @@ final class CompareView extends JPanel {
     record Entry(String name, String source, Vehicle vehicle) {
     }
 
+    /** The least height kept for the figures and charts where the view has room for the setups above them. */
+    private static final int RESULTS_HEIGHT = 260;
     private final SizingContext context;
     private final FigureFormat format;
     private final List<Entry> entries = new ArrayList<>();
     private final JTextField name = new JTextField("open car", 14);
-    private final JTextField changes = new JTextField("rear.bar.selectedArm=0", 28);
     private final Setups setups = new Setups();
     private final FigureTable setupTable;
     private final Figures figures = new Figures();
     private final FigureTable figureTable;
     private final JTabbedPane charts = new JTabbedPane();
-    private final WrappingText hint = new WrappingText("Add two to four setups. To see what a change does, add the "
-            + "open car, change it in the main window, and add it again; or add a variant by key paths of the "
-            + "vehicle file (arm holes count from 0 there). Each setup's figures show their difference from the first "
-            + "in brackets, in the same unit.");
+    private final WrappingText hint = new WrappingText("Add two to four setups: the open car as it is now, a saved "
+            + "vehicle file, or a variant of the open car built below (arm holes count from 1, as in the editor). "
+            + "Each setup's figures show their difference from the first in brackets, in the same unit.");
     private final WorkStrip work = new WorkStrip("compare");
+    private final VariantBuilder variant;
     private Comparison shown;
 
     CompareView(SizingContext context) {
@@ -66,52 +71,88 @@ final class CompareView extends JPanel {
         this.context = context;
         this.format = new FigureFormat(context.view());
         name.setName("compare.name");
-        changes.setName("compare.changes");
-        changes.setToolTipText("Changes to the open car, key.path=value, separated by semicolons, e.g. "
-                + "front.bar.section.outerDiameterMm=24; rear.bar.selectedArm=3");
         setupTable = new FigureTable("compare.setups", setups, new String[]{"What the setup is called",
-            "Where it came from"}, new int[]{220, 640});
+            "Where it came from"}, new int[]{fit(170, "front bar 25 mm (reference)"), 760});
         figureTable = new FigureTable("compare.figures", figures, new String[0], new int[]{180, 170, 170, 170, 170});
         charts.setName("compare.charts");
 
-        JButton addOpen = button("compare.addOpen", "Add the open car as it is now", this::addOpenCar);
-        JButton addFile = button("compare.addFile", "Add a saved vehicle file…", this::addFile);
-        JButton addVariant = button("compare.addVariant", "Add a variant of the open car", this::addVariant);
-        JButton remove = button("compare.remove", "Remove the chosen setup", this::removeChosen);
+        JPanel buttonColumn = column(button("compare.addOpen", "Add the open car as it is now", this::addOpenCar),
+                button("compare.addFile", "Add a saved vehicle file…", this::addFile),
+                button("compare.remove", "Remove the chosen setup", this::removeChosen));
+        JScrollPane list = new JScrollPane(setupTable);
+        list.setPreferredSize(new Dimension(800, 110));
+        JPanel setupList = new JPanel(new BorderLayout(6, 0));
+        setupList.add(list, BorderLayout.CENTER);
+        setupList.add(buttonColumn, BorderLayout.EAST);
         JPanel naming = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
         naming.add(new JLabel("Name of the next setup"));
         naming.add(name);
-        naming.add(addOpen);
-        naming.add(addFile);
-        JPanel variant = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
-        variant.add(new JLabel("Changes for a variant"));
-        variant.add(changes);
-        variant.add(addVariant);
-        variant.add(remove);
-        JPanel controls = new JPanel(new GridLayout(0, 1));
-        controls.add(naming);
-        controls.add(variant);
-        JPanel top = new JPanel(new BorderLayout(0, 4));
+        variant = new VariantBuilder(context, message -> work.say(message, true), this::addVariant);
+        JPanel controls = new JPanel(new BorderLayout());
+        controls.add(naming, BorderLayout.NORTH);
+        controls.add(variant, BorderLayout.CENTER);
+        PagePanel top = new PagePanel(new BorderLayout(0, 4));
         top.setBorder(BorderFactory.createEmptyBorder(4, 8, 4, 8));
         top.add(hint, BorderLayout.NORTH);
-        JScrollPane list = new JScrollPane(setupTable);
-        list.setPreferredSize(new Dimension(800, 110));
-        top.add(list, BorderLayout.CENTER);
+        top.add(setupList, BorderLayout.CENTER);
         top.add(controls, BorderLayout.SOUTH);
+        JScrollPane topScroll = new JScrollPane(top);
+        topScroll.setBorder(null);
+        topScroll.getVerticalScrollBar().setUnitIncrement(16);
         JScrollPane figureScroll = new JScrollPane(figureTable);
         figureScroll.setPreferredSize(new Dimension(640, 400));
         charts.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
         charts.setPreferredSize(new Dimension(520, 400));
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, figureScroll, charts);
-        split.setResizeWeight(0.6);
+        JSplitPane results = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, figureScroll, charts);
+        results.setResizeWeight(0.6);
+        results.setBorder(null);
+        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, topScroll, results);
+        split.setResizeWeight(0.5);
         split.setBorder(null);
-        add(top, BorderLayout.NORTH);
+        topScroll.setMinimumSize(new Dimension(0, 60));
+        results.setMinimumSize(new Dimension(0, 60));
+        placeDividerOnce(split, top);
         add(split, BorderLayout.CENTER);
         add(work, BorderLayout.SOUTH);
         context.view().addListener(this::redraw);
     }
 
-    private static JButton button(String name, String text, Runnable action) {
+    /**
+     * The setups and the variant builder get their full height where the view has room for them and
+     * {@link #RESULTS_HEIGHT} of figures, and at most half of it where it has not (a large text size on a small
+     * screen): they scroll, and the figures and charts stay in view.
+     */
+    private static void placeDividerOnce(JSplitPane split, JPanel top) {
+        split.addComponentListener(new ComponentAdapter() {
+            @Override
+            public void componentResized(ComponentEvent event) {
+                if (split.getHeight() > 0) {
+                    split.removeComponentListener(this);
+                    split.setDividerLocation(Math.min(top.getPreferredSize().height + 2,
+                            Math.max(split.getHeight() / 2, split.getHeight() - RESULTS_HEIGHT)));
+                }
+            }
+        });
+    }
+
+    /** @return the width given, or wider where a large text size needs it for the sample text */
+    private int fit(int pixels, String sample) {
+        Font font = UIManager.getFont("Table.font");
+        return font == null ? pixels : Math.max(pixels, getFontMetrics(font).stringWidth(sample) + 16);
+    }
+
+    /** @return the buttons one above the other, of equal width, at the top of a column */
+    static JPanel column(JButton... buttons) {
+        JPanel stack = new JPanel(new GridLayout(0, 1, 0, 2));
+        for (JButton button : buttons) {
+            stack.add(button);
+        }
+        JPanel column = new JPanel(new BorderLayout());
+        column.add(stack, BorderLayout.NORTH);
+        return column;
+    }
+
+    static JButton button(String name, String text, Runnable action) {
         JButton button = new JButton(text);
         button.setName(name);
         button.addActionListener(event -> action.run());
@@ -147,15 +188,20 @@ final class CompareView extends JPanel {
     }
 
     void addVariant() {
-        List<String> edits = Arrays.stream(changes.getText().split(";")).map(String::strip)
-                .filter(edit -> !edit.isEmpty()).toList();
-        if (edits.isEmpty()) {
-            work.say("Changes for a variant: give at least one key.path=value.", true);
+        List<VariantChange> changes = variant.pending();
+        if (changes.isEmpty()) {
+            work.say("A variant needs at least one change: choose what to change and its new value, then "
+                    + "Add this change.", true);
             return;
         }
         try {
-            VehicleDocument changed = VehicleLoader.withEdits(context.currentCar(), edits);
-            add(new Entry(nextName("variant"), "the open car with " + String.join("; ", edits), changed.vehicle()));
+            VehicleDocument car = context.currentCar();
+            VehicleDocument changed = VehicleLoader.withEdits(car, changes.stream().map(VariantChange::edit)
+                    .toList());
+            if (add(new Entry(nextName("variant"), "the open car with " + variant.words(car.tree()),
+                    changed.vehicle()))) {
+                variant.clear();
+            }
         } catch (VehicleFileException refused) {
             work.say("The variant is refused: " + refused.problems().stream().map(Problem::toString)
                     .collect(Collectors.joining("; ")), true);
@@ -164,14 +210,16 @@ final class CompareView extends JPanel {
         }
     }
 
-    private void add(Entry entry) {
+    /** @return whether the setup was added (four at most) */
+    private boolean add(Entry entry) {
         if (entries.size() >= Comparison.MAX_CONFIGURATIONS) {
             work.say("Four setups at most: remove one first.", true);
-            return;
+            return false;
         }
         entries.add(entry);
         name.setText("setup " + (entries.size() + 1));
         changed();
+        return true;
     }
 
     private void removeChosen() {
@@ -202,7 +250,8 @@ final class CompareView extends JPanel {
     private void redraw() {
         figures.fireTableStructureChanged();
         for (int i = 0; i < figureTable.getColumnCount(); i++) {
-            figureTable.getColumnModel().getColumn(i).setPreferredWidth(i == 0 ? 180 : 170);
+            figureTable.getColumnModel().getColumn(i).setPreferredWidth(i == 0
+                    ? fit(180, "front share of roll stiffness") : fit(170, "1823 N·m/deg  (+240)"));
         }
         int selected = Math.max(0, charts.getSelectedIndex());
         charts.removeAll();
@@ -248,6 +297,10 @@ final class CompareView extends JPanel {
 
     Comparison shown() {
         return shown;
+    }
+
+    VariantBuilder variant() {
+        return variant;
     }
 
     WorkStrip work() {

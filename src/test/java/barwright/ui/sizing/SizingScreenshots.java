@@ -68,15 +68,7 @@ public final class SizingScreenshots {
         // the open car against two variants
         SizingScreens.onEdt(() -> {
             views.open(SizingWindow.Tab.COMPARE);
-            CompareView compare = views.compare();
-            SizingScreens.<JTextField>find(views, "compare.name").setText("as it is");
-            compare.addOpenCar();
-            SizingScreens.<JTextField>find(views, "compare.name").setText("rear bar hole 1");
-            SizingScreens.<JTextField>find(views, "compare.changes").setText("rear.bar.selectedArm=0");
-            compare.addVariant();
-            SizingScreens.<JTextField>find(views, "compare.name").setText("front bar 25 mm");
-            SizingScreens.<JTextField>find(views, "compare.changes").setText("front.bar.section.outerDiameterMm=25");
-            compare.addVariant();
+            CompareScreenshots.fill(views);
             return null;
         });
         SizingScreens.until("the comparison", () -> views.compare().work().isIdle() && views.compare().shown() != null);

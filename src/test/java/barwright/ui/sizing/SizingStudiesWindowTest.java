@@ -127,7 +127,9 @@ class SizingStudiesWindowTest {
         sizing.textBox("compare.name").deleteText().enterText("as it is");
         sizing.button("compare.addOpen").click();
         sizing.textBox("compare.name").deleteText().enterText("rear hole 1");
-        sizing.textBox("compare.changes").deleteText().enterText("rear.bar.selectedArm=0");
+        sizing.comboBox("compare.what").selectItem("Rear bar — " + VariantChoices.ARM_HOLE);
+        sizing.comboBox("compare.hole").selectItem(0);
+        sizing.button("compare.addChange").click();
         sizing.button("compare.addVariant").click();
         fixture.dialogs.filesToOpen.add(saved);
         sizing.button("compare.addFile").click();
@@ -140,6 +142,8 @@ class SizingStudiesWindowTest {
         AnalysisResult variant = VehicleAnalysis.analyse(car.withAxle(AxlePosition.REAR,
                 car.rear().withBar(car.rear().bar().withSelectedArm(0))));
         AnalysisResult roadster = VehicleAnalysis.analyse(VehicleLoader.read(saved).vehicle());
+        assertThat(GuiActionRunner.execute(() -> view.entries().stream().map(CompareView.Entry::name).toList()))
+                .containsExactly("as it is", "rear hole 1", "roadster.json");
         JTableFixture table = sizing.table("compare.figures");
         int share = row(table, "front share of load transfer");
         assertThat(table.columnIndexFor("rear hole 1")).isEqualTo(2);
@@ -158,10 +162,11 @@ class SizingStudiesWindowTest {
         assertThat(GuiActionRunner.execute(() -> view.charts().getTabCount())).isEqualTo(3);
         assertThat(GuiActionRunner.execute(() -> view.shown().charts().get(0).series().size())).isEqualTo(3);
 
-        // a variant naming a hole the bar does not have is refused with its key path, and not added
-        sizing.textBox("compare.changes").deleteText().enterText("rear.bar.selectedArm=9");
+        // the setup says where it came from in words, and a variant with no change is refused, not added
+        assertThat(GuiActionRunner.execute(() -> view.entries().get(1).source()))
+                .endsWith("with Rear bar — Arm hole in use: 2 → 1");
         sizing.button("compare.addVariant").click();
-        assertThat(GuiActionRunner.execute(() -> view.work().message())).contains("rear.bar.selectedArm");
+        assertThat(GuiActionRunner.execute(() -> view.work().message())).contains("at least one change");
         assertThat(GuiActionRunner.execute(() -> view.entries().size())).isEqualTo(3);
     }
 
