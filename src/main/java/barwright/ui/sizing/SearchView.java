@@ -8,6 +8,9 @@ import barwright.sizing.Candidate;
 import barwright.sizing.ExactSolution;
 import barwright.sizing.Rejection;
 import barwright.sizing.SizingResult;
+import barwright.sizing.TradeLimits;
+import barwright.report.sizing.ReachText;
+import barwright.report.sizing.TradeFlagText;
 import barwright.ui.document.DocumentEvent;
 import barwright.ui.panel.FigureFormat;
 import barwright.ui.panel.WrappingText;
@@ -38,6 +41,8 @@ final class SearchView extends JPanel {
     private final JTable table;
     private final WrappingText summary = new WrappingText("Choose what to aim at and press Find bars.");
     private final WrappingText exact = new WrappingText(" ");
+    /** What the flags mean and, where the best proposal has any, a caution naming them. */
+    private final WrappingText flagNote = new WrappingText(" ");
     private final WrappingText applied = new WrappingText(" ");
     private final JButton apply = new JButton("Put the chosen bar in the car");
     private final WorkStrip work = new WorkStrip("search");
@@ -51,11 +56,14 @@ final class SearchView extends JPanel {
         this.format = new FigureFormat(context.view());
         this.form = new SearchForm(context.view());
         this.rows = new CandidateTableModel(format);
-        table = new FigureTable("search.results", rows, CandidateTableModel.TOOLTIPS,
-                new int[]{44, 130, 170, 105, 80, 95, 150, 220, 110, 90, 80});
+        FigureTable figures = new FigureTable("search.results", rows, CandidateTableModel.TOOLTIPS,
+                new int[]{30, 60, 44, 70, 60, 50, 50, 44, 90, 80, 90, 110});
+        figures.fitColumnsToTexts();
+        table = figures;
         table.getSelectionModel().addListSelectionListener(event -> refreshApply());
         summary.setName("search.summary");
         exact.setName("search.exact");
+        flagNote.setName("search.flags");
         applied.setName("search.applied");
         apply.setName("search.apply");
         apply.setToolTipText("Writes the chosen bar's material, section and arm hole into the open car; Edit > Undo "
@@ -68,7 +76,10 @@ final class SearchView extends JPanel {
         results.add(summary, BorderLayout.NORTH);
         results.add(new JScrollPane(table), BorderLayout.CENTER);
         JPanel under = new JPanel(new BorderLayout(0, 4));
-        under.add(exact, BorderLayout.NORTH);
+        JPanel notes = new JPanel(new BorderLayout(0, 4));
+        notes.add(flagNote, BorderLayout.NORTH);
+        notes.add(exact, BorderLayout.CENTER);
+        under.add(notes, BorderLayout.NORTH);
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         buttons.add(apply);
         under.add(buttons, BorderLayout.CENTER);
@@ -117,16 +128,17 @@ final class SearchView extends JPanel {
     /** Takes the results off the screen (they no longer answer what was asked), with Apply disabled. */
     private void clearResults(String why) {
         shown = null;
-        rows.show(List.of(), null);
+        rows.show(List.of(), null, TradeLimits.commonPractice(0));
         summary.setText(why);
         exact.setText(" ");
+        flagNote.setText(" ");
         applied.setText(" ");
         refreshApply();
     }
 
     private void showOutcome(SearchOutcome outcome) {
         shown = outcome;
-        rows.show(outcome.result().candidates(), outcome.vehicle());
+        rows.show(outcome.result().candidates(), outcome.vehicle(), TradeLimits.of(outcome.request()));
         if (!outcome.result().candidates().isEmpty()) {
             table.setRowSelectionInterval(0, 0);
         }
@@ -166,6 +178,7 @@ final class SearchView extends JPanel {
             text.append(" The car has changed since this search: search again before using these results.");
         }
         summary.setText(text.toString());
+        flagNote.setText(flagWords(result));
         List<String> lines = new ArrayList<>();
         if (shown.exactSolid() != null) {
             lines.add(exactLine("Exact solid diameter", shown.exactSolid()));
@@ -175,6 +188,28 @@ final class SearchView extends JPanel {
                     + " tube", shown.exactWall()));
         }
         exact.setText(lines.isEmpty() ? " " : String.join("\n", lines));
+    }
+
+    /** @return the reach where the target lies outside it, the caution of a flagged best proposal, the legend */
+    private String flagWords(SizingResult result) {
+        List<String> lines = new ArrayList<>();
+        if (result.targetOutOfReach()) {
+            boolean pairs = shown.request().axles().size() > 1;
+            String bars = pairs ? "front and rear bars" : shown.request().axles().get(0).key() + " bar";
+            String words = ReachText.outOfReach(bars, Double.NaN, result.targetShare(), result.reach(),
+                    format.view().locale());
+            lines.add("Out of reach: " + words + ". The rows are the closest, not on target.");
+        }
+        if (!result.candidates().isEmpty()) {
+            TradeLimits limits = TradeLimits.of(shown.request());
+            String caution = TradeFlagText.bestCaution(result.candidates().get(0),
+                    limits.flags(result.candidates().get(0)), format.view().units());
+            if (!caution.isEmpty()) {
+                lines.add(caution);
+            }
+            lines.add(TradeFlagText.legend(limits, format.view().units()));
+        }
+        return lines.isEmpty() ? " " : String.join("\n", lines);
     }
 
     private String targets(SizingResult result) {
@@ -287,5 +322,9 @@ final class SearchView extends JPanel {
 
     String exactText() {
         return exact.getText();
+    }
+
+    String flagText() {
+        return flagNote.getText();
     }
 }
