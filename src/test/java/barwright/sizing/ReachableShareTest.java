@@ -57,15 +57,19 @@ class ReachableShareTest {
         return shares;
     }
 
+    /** @return one axle's reach over the small catalogue in its own material, at a least safety factor of 1.5 */
+    private static ShareReach reach(VehicleDocument document, AxlePosition axle) {
+        return ReachableShare.of(new SetupEvaluator(document.vehicle()), List.of(axle), choices(document, axle),
+                Constraints.safetyFactor(1.5)).orElseThrow();
+    }
+
     @Test
     void theFrontBarsReachRunsFromNoBarToTheStiffestBarAllowed() throws Exception {
         VehicleDocument document = SizingFixtures.hatchback();
-        Map<AxlePosition, SizeChoices> choices = choices(document, AxlePosition.FRONT);
-        ShareReach reach = ReachableShare.of(new SetupEvaluator(document.vehicle()), List.of(AxlePosition.FRONT),
-                choices, Constraints.safetyFactor(1.5)).orElseThrow();
-
+        ShareReach reach = reach(document, AxlePosition.FRONT);
         double noBar = share(VehicleLoader.withEdits(document, List.of("front.bar=null")).vehicle());
-        List<Double> allowed = allowedShares(document, AxlePosition.FRONT, choices.get(AxlePosition.FRONT), 1.5);
+        List<Double> allowed = allowedShares(document, AxlePosition.FRONT,
+                choices(document, AxlePosition.FRONT).get(AxlePosition.FRONT), 1.5);
         assertThat(allowed).hasSizeGreaterThan(10); // guards the test: most of the small catalogue passes
         assertThat(reach.lowest()).isCloseTo(noBar, within(SAME_MODEL));
         assertThat(reach.highest()).isCloseTo(allowed.stream().mapToDouble(Double::doubleValue).max().orElseThrow(),
@@ -77,12 +81,10 @@ class ReachableShareTest {
     @Test
     void aRearBarsReachRunsFromTheStiffestRearBarToNone() throws Exception {
         VehicleDocument document = SizingFixtures.hatchback();
-        Map<AxlePosition, SizeChoices> choices = choices(document, AxlePosition.REAR);
-        ShareReach reach = ReachableShare.of(new SetupEvaluator(document.vehicle()), List.of(AxlePosition.REAR),
-                choices, Constraints.safetyFactor(1.5)).orElseThrow();
-
+        ShareReach reach = reach(document, AxlePosition.REAR);
         double noBar = share(VehicleLoader.withEdits(document, List.of("rear.bar=null")).vehicle());
-        List<Double> allowed = allowedShares(document, AxlePosition.REAR, choices.get(AxlePosition.REAR), 1.5);
+        List<Double> allowed = allowedShares(document, AxlePosition.REAR,
+                choices(document, AxlePosition.REAR).get(AxlePosition.REAR), 1.5);
         assertThat(reach.highest()).isCloseTo(noBar, within(SAME_MODEL));
         assertThat(reach.lowest()).isCloseTo(allowed.stream().mapToDouble(Double::doubleValue).min().orElseThrow(),
                 within(SAME_MODEL));

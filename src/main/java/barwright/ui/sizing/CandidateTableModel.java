@@ -26,15 +26,15 @@ final class CandidateTableModel extends TextTableModel {
      * the bar is, what it gives, what it weighs, how hard it works and whether it is out of the ordinary; then
      * the rest, which a sideways scroll reaches.
      */
-    static final String[] COLUMNS = {"#", "Size", "Hole", "Front share", "Mass", "Safety", "Flags", "Miss",
+    static final String[] COLUMNS = {"#", "Size", "Mass", "Safety", "Flags", "Front share", "Hole", "Miss",
         "Material", "Roll gradient", "Limit", "Wheel lifts (F / R)"};
     static final String[] TOOLTIPS = {"Rank: best first, closest to the target, then lightest",
-        "Stock size: the section as the catalogue names it",
-        "Arm hole counted from 1, the first arm length in the file; its length in brackets",
-        "Front share of the lateral load transfer with this bar", "Mass of each sized bar",
+        "Stock size: the section as the catalogue names it", "Mass of each sized bar",
         "Static safety factor against yield at the check travel",
         "Where the bar lies outside what the trade usually fits a road or club car (common practice; the limits "
                 + "are written under the table): heavy, thick or stressed. A caution, not a refusal",
+        "Front share of the lateral load transfer with this bar",
+        "Arm hole counted from 1, the first arm length in the file; its length in brackets",
         "Miss in steps, how far from the target: 1 step = 1 percentage point of front share, or 0.1 deg/g of "
                 + "roll gradient",
         "The bar's material", "Body roll per g of lateral acceleration",
@@ -43,11 +43,11 @@ final class CandidateTableModel extends TextTableModel {
     /** Column numbers, as {@link #COLUMNS} orders them. */
     static final int RANK = 0;
     static final int SIZE = 1;
-    static final int HOLE = 2;
-    static final int FRONT_SHARE = 3;
-    static final int MASS = 4;
-    static final int SAFETY = 5;
-    static final int FLAGS = 6;
+    static final int MASS = 2;
+    static final int SAFETY = 3;
+    static final int FLAGS = 4;
+    static final int FRONT_SHARE = 5;
+    static final int HOLE = 6;
     static final int MISS = 7;
     static final int MATERIAL = 8;
     static final int ROLL_GRADIENT = 9;

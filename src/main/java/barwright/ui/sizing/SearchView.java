@@ -13,11 +13,13 @@ import barwright.report.sizing.ReachText;
 import barwright.report.sizing.TradeFlagText;
 import barwright.ui.document.DocumentEvent;
 import barwright.ui.panel.FigureFormat;
+import barwright.ui.panel.PagePanel;
 import barwright.ui.panel.WrappingText;
 import barwright.units.Quantity;
 
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
+import javax.swing.JComponent;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
@@ -57,13 +59,17 @@ final class SearchView extends JPanel {
         this.form = new SearchForm(context.view());
         this.rows = new CandidateTableModel(format);
         FigureTable figures = new FigureTable("search.results", rows, CandidateTableModel.TOOLTIPS,
-                new int[]{30, 60, 44, 70, 60, 50, 50, 44, 90, 80, 90, 110});
+                new int[]{30, 60, 60, 50, 50, 70, 44, 44, 90, 80, 90, 110});
         figures.fitColumnsToTexts();
         table = figures;
         table.getSelectionModel().addListSelectionListener(event -> refreshApply());
         summary.setName("search.summary");
         exact.setName("search.exact");
         flagNote.setName("search.flags");
+        for (WrappingText words : List.of(summary, flagNote, exact)) {
+            // a long text shows its start: setting it moves no scroll pane to its end
+            ((javax.swing.text.DefaultCaret) words.getCaret()).setUpdatePolicy(javax.swing.text.DefaultCaret.NEVER_UPDATE);
+        }
         applied.setName("search.applied");
         apply.setName("search.apply");
         apply.setToolTipText("Writes the chosen bar's material, section and arm hole into the open car; Edit > Undo "
@@ -73,13 +79,13 @@ final class SearchView extends JPanel {
 
         JPanel results = new JPanel(new BorderLayout(0, 4));
         results.setBorder(BorderFactory.createEmptyBorder(6, 8, 4, 8));
-        results.add(summary, BorderLayout.NORTH);
+        results.add(capped(summary, results, 20), BorderLayout.NORTH);
         results.add(new JScrollPane(table), BorderLayout.CENTER);
         JPanel under = new JPanel(new BorderLayout(0, 4));
-        JPanel notes = new JPanel(new BorderLayout(0, 4));
+        JPanel notes = new PagePanel(new BorderLayout(0, 4)); // wraps its words at the scroll pane's width
         notes.add(flagNote, BorderLayout.NORTH);
         notes.add(exact, BorderLayout.CENTER);
-        under.add(notes, BorderLayout.NORTH);
+        under.add(capped(notes, results, 30), BorderLayout.NORTH);
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         buttons.add(apply);
         under.add(buttons, BorderLayout.CENTER);
@@ -104,6 +110,29 @@ final class SearchView extends JPanel {
         context.view().addListener(this::unitsChanged);
         carShown.request();
         refreshApply();
+    }
+
+    /**
+     * @return the text in a borderless scroll pane at most that share of the results column high (and never less
+     *         than two lines), so that with large text on a small screen the words above and under the table
+     *         scroll rather than squeeze the table out of sight
+     */
+    private static JScrollPane capped(JComponent text, JComponent column, int percent) {
+        JScrollPane scroll = new JScrollPane(text, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
+                JScrollPane.HORIZONTAL_SCROLLBAR_NEVER) {
+            @Override
+            public Dimension getPreferredSize() {
+                Dimension wanted = super.getPreferredSize();
+                int twoLines = 2 * text.getFontMetrics(text.getFont()).getHeight() + 4;
+                int room = Math.max(twoLines, column.getHeight() * percent / 100);
+                return new Dimension(wanted.width, Math.min(wanted.height, room));
+            }
+        };
+        scroll.setBorder(null);
+        scroll.setOpaque(false);
+        scroll.getViewport().setOpaque(false);
+        scroll.getVerticalScrollBar().setUnitIncrement(16);
+        return scroll;
     }
 
     /** Starts a search on the car as it stands; a refused setting is said in the status line instead. */
@@ -188,6 +217,7 @@ final class SearchView extends JPanel {
                     + " tube", shown.exactWall()));
         }
         exact.setText(lines.isEmpty() ? " " : String.join("\n", lines));
+
     }
 
     /** @return the reach where the target lies outside it, the caution of a flagged best proposal, the legend */
