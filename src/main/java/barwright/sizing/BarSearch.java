@@ -42,7 +42,8 @@ public final class BarSearch {
     public static SizingResult run(Vehicle vehicle, SizingRequest request, Progress progress) {
         SetupEvaluator evaluator = new SetupEvaluator(vehicle);
         double staticFront = evaluator.masses().frontMassFraction();
-        Search search = new Search(evaluator, request, progress, staticFront);
+        ShareReach reach = ReachableShare.of(evaluator, request).orElse(null);
+        Search search = new Search(evaluator, request, progress, staticFront, reach);
         return request.axles().size() == 1 ? search.single(request.axles().get(0)) : search.pairs();
     }
 
@@ -78,10 +79,13 @@ public final class BarSearch {
         private final Constraints constraints;
         private final Progress progress;
         private final double staticFront;
+        private final ShareReach reach;
         private final AtomicLong done = new AtomicLong();
         private long total;
 
-        Search(SetupEvaluator evaluator, SizingRequest request, Progress progress, double staticFront) {
+        Search(SetupEvaluator evaluator, SizingRequest request, Progress progress, double staticFront,
+               ShareReach reach) {
+            this.reach = reach;
             this.evaluator = evaluator;
             this.request = request;
             this.constraints = request.constraints();
@@ -118,7 +122,8 @@ public final class BarSearch {
             }
             accepted.sort(ranking()); // stable: ties keep the enumeration order
             return new SizingResult(accepted.subList(0, Math.min(request.maxResults(), accepted.size())), count,
-                    accepted.size(), count(rejected), targetShare());
+                    accepted.size(), count(rejected), targetShare(),
+                    reach);
         }
 
         SizingResult pairs() {
@@ -183,7 +188,7 @@ public final class BarSearch {
                 }
             }
             progress.update(total, total);
-            return new SizingResult(found, pairCount, accepted, rejections, targetShare());
+            return new SizingResult(found, pairCount, accepted, rejections, targetShare(), reach);
         }
 
         private List<Screened> screenAll(List<BarChoice> choices, Map<Rejection, Long> rejections) {
@@ -204,22 +209,8 @@ public final class BarSearch {
             return kept;
         }
 
-        /** The checks of one bar on its own: diameter, then mass and safety factor. */
         private Screened screen(BarChoice choice) {
-            Double maxDiameter = constraints.maxOuterDiameter();
-            if (maxDiameter != null && choice.size().section().outerDiameter() > maxDiameter) {
-                return new Screened(choice, null, Rejection.OUTER_DIAMETER);
-            }
-            AntiRollBar bar = choice.applyTo(evaluator.vehicle().axle(choice.axle()).bar());
-            AxleState state = evaluator.axle(choice.axle(), bar);
-            Double maxMass = constraints.maxBarMass();
-            if (maxMass != null && state.barResult().mass() > maxMass) {
-                return new Screened(choice, state, Rejection.BAR_MASS);
-            }
-            if (state.barResult().safetyFactor() < constraints.minSafetyFactor()) {
-                return new Screened(choice, state, Rejection.SAFETY_FACTOR);
-            }
-            return new Screened(choice, state, null);
+            return BarSearch.screen(evaluator, constraints, choice);
         }
 
         /** The full figures and the lift checks. */
@@ -296,7 +287,26 @@ public final class BarSearch {
         }
     }
 
-    private record Screened(BarChoice choice, AxleState state, Rejection rejection) {
+    /** The checks of one bar on its own: diameter, then mass and safety factor. */
+    static Screened screen(SetupEvaluator evaluator, Constraints constraints, BarChoice choice) {
+        Double maxDiameter = constraints.maxOuterDiameter();
+        if (maxDiameter != null && choice.size().section().outerDiameter() > maxDiameter) {
+            return new Screened(choice, null, Rejection.OUTER_DIAMETER);
+        }
+        AntiRollBar bar = choice.applyTo(evaluator.vehicle().axle(choice.axle()).bar());
+        AxleState state = evaluator.axle(choice.axle(), bar);
+        Double maxMass = constraints.maxBarMass();
+        if (maxMass != null && state.barResult().mass() > maxMass) {
+            return new Screened(choice, state, Rejection.BAR_MASS);
+        }
+        if (state.barResult().safetyFactor() < constraints.minSafetyFactor()) {
+            return new Screened(choice, state, Rejection.SAFETY_FACTOR);
+        }
+        return new Screened(choice, state, null);
+    }
+
+    /** One bar and its axle, with why it was left out (null where it passed). */
+    record Screened(BarChoice choice, AxleState state, Rejection rejection) {
     }
 
     private record Outcome(SetupFigures figures, Rejection rejection) {

@@ -119,4 +119,35 @@ class SizeCommandTest {
         assertThat(run(2, "size", HATCHBACK, "--axle", "front", "--target-share", "0.5", "--materials", "wood")[1])
                 .contains("not a built-in material");
     }
+
+    @Test
+    void aTargetOutOfReachIsSaidAndTheFlaggedBestProposalCautioned() throws Exception {
+        // the case: the club hatchback's static front weight + 5 points, sized with the front bar
+        String text = run(0, "size", HATCHBACK, "--axle", "front", "--target-offset", "0.05")[0];
+        assertThat(text).contains("Out of reach: static front weight 63.0 % + 5.0 points = 68.0 % is out of reach "
+                + "for the front bar on this car (reachable ").contains("--target-share 0.6");
+        assertThat(text).contains("Caution: the best proposal is outside what the trade usually fits (heavy: 13.22 kg");
+        assertThat(text.lines().filter(line -> line.startsWith("  1 ")).findFirst().orElseThrow())
+                .endsWith("heavy, thick, stressed");
+
+        JsonNode root = MAPPER.readTree(run(0, "size", HATCHBACK, "--axle", "front", "--target-offset", "0.05",
+                "--json")[0]);
+        assertThat(root.path("targetOutOfReach").asBoolean()).isTrue();
+        double highest = root.path("frontShareReach").path("highest").asDouble();
+        assertThat(root.path("targetFrontLoadTransferShare").asDouble()).isGreaterThan(highest);
+        JsonNode best = root.path("candidates").get(0);
+        // the best proposal is the stiffest allowed: it sits at the top of the reach
+        assertThat(best.path("frontLoadTransferShare").asDouble()).isCloseTo(highest, within(1e-12));
+        JsonNode flags = best.path("tradeFlags");
+        assertThat(flags.size()).isEqualTo(3);
+        assertThat(flags.get(0).path("flag").asText()).isEqualTo("BAR_MASS");
+        assertThat(flags.get(0).path("barMassKg").asDouble()).isEqualTo(best.path("barMassKg").asDouble());
+        assertThat(flags.get(0).path("limitKg").asDouble()).isEqualTo(root.path("tradeLimits").path("maxBarMassKg")
+                .asDouble());
+        assertThat(flags.get(1).path("outerDiameterMm").asDouble()).isEqualTo(40.0);
+
+        // a target in reach: said as a range, no "out of reach", a light bar without flags
+        String inReach = run(0, "size", HATCHBACK, "--axle", "front", "--target-share", "0.55")[0];
+        assertThat(inReach).contains("Front share reachable with the front bar tried: ").doesNotContain("Out of reach");
+    }
 }

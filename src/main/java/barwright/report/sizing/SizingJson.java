@@ -10,10 +10,13 @@ import barwright.sizing.ExactSolution;
 import barwright.sizing.Rejection;
 import barwright.sizing.SizingRequest;
 import barwright.sizing.SizingResult;
+import barwright.sizing.TradeFlag;
+import barwright.sizing.TradeLimits;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
+import java.util.List;
 import java.util.Map;
 
 import static barwright.io.VehicleKeys.MATERIAL;
@@ -47,6 +50,20 @@ public final class SizingJson {
                 : result.targetShare());
         ReportJson.putOrNull(root, "targetRollGradientDegPerG", request.targets().rollGradient() == null ? null
                 : toDegreesPerG(request.targets().rollGradient()));
+        if (result.reach() == null) {
+            root.putNull("frontShareReach");
+        } else {
+            ObjectNode reach = root.putObject("frontShareReach");
+            reach.put("lowest", result.reach().lowest());
+            reach.put("highest", result.reach().highest());
+        }
+        root.put("targetOutOfReach", result.targetOutOfReach());
+        TradeLimits limits = TradeLimits.of(request);
+        ObjectNode trade = root.putObject("tradeLimits");
+        trade.put("maxBarMassKg", limits.maxBarMass());
+        trade.put("maxSolidDiameterMm", toMillimetres(limits.maxSolidDiameter()));
+        trade.put("maxTubeDiameterMm", toMillimetres(limits.maxTubeDiameter()));
+        trade.put("stressedBelowSafetyFactor", limits.stressFlagBelow());
         root.put("evaluated", result.evaluated());
         root.put("accepted", result.accepted());
         ObjectNode rejected = root.putObject("rejected");
@@ -56,7 +73,7 @@ public final class SizingJson {
         ArrayNode candidates = root.putArray("candidates");
         int rank = 1;
         for (Candidate candidate : result.candidates()) {
-            candidates.add(candidate(candidate, rank++));
+            candidates.add(candidate(candidate, rank++, limits.flags(candidate)));
         }
         ReportJson.putOrNull(root, "exactSolidDiameterMm", exactSolid == null || !exactSolid.found() ? null
                 : toMillimetres(exactSolid.dimension()));
@@ -67,7 +84,7 @@ public final class SizingJson {
         return root;
     }
 
-    static ObjectNode candidate(Candidate candidate, int rank) {
+    static ObjectNode candidate(Candidate candidate, int rank, List<TradeFlag> flags) {
         ObjectNode node = NODES.objectNode();
         node.put("rank", rank);
         if (candidate.bars().size() == 1) {
@@ -86,6 +103,32 @@ public final class SizingJson {
         }
         Json.putFigures(node, candidate.figures());
         node.put("missSteps", candidate.miss());
+        ArrayNode flagNodes = node.putArray("tradeFlags");
+        for (TradeFlag flag : flags) {
+            flagNodes.add(flag(flag));
+        }
+        return node;
+    }
+
+    /** One flag: its kind, axle, and the figure with where the flag starts, units in the key names. */
+    private static ObjectNode flag(TradeFlag flag) {
+        ObjectNode node = NODES.objectNode();
+        node.put("flag", flag.kind().name());
+        node.put("axle", flag.axle().key());
+        switch (flag.kind()) {
+            case BAR_MASS -> {
+                node.put("barMassKg", flag.value());
+                node.put("limitKg", flag.limit());
+            }
+            case OUTER_DIAMETER -> {
+                node.put("outerDiameterMm", toMillimetres(flag.value()));
+                node.put("limitMm", toMillimetres(flag.limit()));
+            }
+            case STRESS -> {
+                node.put("barSafetyFactor", flag.value());
+                node.put("limitSafetyFactor", flag.limit());
+            }
+        }
         return node;
     }
 

@@ -10,6 +10,9 @@ import barwright.sizing.Rejection;
 import barwright.sizing.SetupFigures;
 import barwright.sizing.SizingRequest;
 import barwright.sizing.SizingResult;
+import barwright.sizing.Targets;
+import barwright.sizing.TradeFlag;
+import barwright.sizing.TradeLimits;
 import barwright.units.Quantity;
 import barwright.units.UnitSystem;
 
@@ -17,6 +20,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 
 /** The sizing result as the command line prints it for people. */
 public final class SizingText {
@@ -32,11 +36,19 @@ public final class SizingText {
         out.append("Constraints: ").append(constraints(request.constraints(), units)).append('\n');
         out.append(String.format(Locale.ROOT, "Tried %d %s; %d met every constraint%s.%n", result.evaluated(),
                 request.axles().size() > 1 ? "pairs of bars" : "bars", result.accepted(), rejections(result)));
+        reach(request, result).ifPresent(line -> out.append(line).append('\n'));
         out.append('\n');
+        TradeLimits limits = TradeLimits.of(request);
         if (result.candidates().isEmpty()) {
             out.append("No stock size meets every constraint: relax the one that left most out, or add sizes.\n");
         } else {
-            out.append(table(result, units));
+            out.append(table(result, limits, units));
+            String caution = TradeFlagText.bestCaution(result.candidates().get(0),
+                    limits.flags(result.candidates().get(0)), units);
+            out.append(TradeFlagText.legend(limits, units)).append('\n');
+            if (!caution.isEmpty()) {
+                out.append(caution).append('\n');
+            }
         }
         out.append('\n');
         if (exactSolid != null) {
@@ -50,12 +62,36 @@ public final class SizingText {
         return out.toString();
     }
 
-    private static String table(SizingResult result, UnitSystem units) {
+    /**
+     * @return the front shares the sized bars reach, and where the target lies outside them, the words of
+     *         {@link ReachText} and what to do; empty where the reach is unknown
+     */
+    static Optional<String> reach(SizingRequest request, SizingResult result) {
+        if (result.reach() == null) {
+            return Optional.empty();
+        }
+        String bars = request.axles().size() > 1 ? "front and rear bars" : request.axles().get(0).key() + " bar";
+        if (!result.targetOutOfReach()) {
+            return Optional.of("Front share reachable with the " + bars + " tried: "
+                    + ReachText.range(result.reach(), Locale.ROOT) + ".");
+        }
+        Targets targets = request.targets();
+        double staticFront = targets.frontShareOffset() == null ? Double.NaN
+                : result.targetShare() - targets.frontShareOffset();
+        double aim = result.reach().aimFor(result.targetShare());
+        return Optional.of("Out of reach: " + ReachText.outOfReach(bars, staticFront, result.targetShare(),
+                result.reach(), Locale.ROOT) + ". The proposals below are the closest, not on target: aim inside "
+                + "the range (for example --target-share " + String.format(Locale.ROOT, "%.3f", aim)
+                + "), or change the other axle's bar or the springs.");
+    }
+
+    private static String table(SizingResult result, TradeLimits limits, UnitSystem units) {
         TextTable table = new TextTable("#", "bar", "material", "hole", "front share", "roll gradient", "limit",
-                "lifts (front/rear)", "bar mass", "safety", "miss");
+                "lifts (front/rear)", "bar mass", "safety", "miss", "flags");
         int rank = 1;
         for (Candidate candidate : result.candidates()) {
             SetupFigures figures = candidate.figures();
+            List<TradeFlag> flags = limits.flags(candidate);
             for (int b = 0; b < candidate.bars().size(); b++) {
                 BarChoice choice = candidate.bars().get(b);
                 BarFigures bar = figures.bar(choice.axle());
@@ -71,7 +107,8 @@ public final class SizingText {
                                 + TextTable.lift(figures.rearInsideLift(), units) : "",
                         TextTable.figure(bar.mass(), Quantity.MASS, units, 2),
                         String.format(Locale.ROOT, "%.2f", bar.safetyFactor()),
-                        first ? String.format(Locale.ROOT, "%.2f", candidate.miss()) : "");
+                        first ? String.format(Locale.ROOT, "%.2f", candidate.miss()) : "",
+                        TradeFlagText.words(flags, choice.axle()));
             }
             rank++;
         }

@@ -7,6 +7,9 @@ import barwright.sizing.BarChoice;
 import barwright.sizing.BarFigures;
 import barwright.sizing.Candidate;
 import barwright.sizing.SetupFigures;
+import barwright.sizing.TradeFlag;
+import barwright.sizing.TradeLimits;
+import barwright.report.sizing.TradeFlagText;
 import barwright.ui.panel.FigureFormat;
 import barwright.units.Quantity;
 
@@ -18,17 +21,41 @@ import java.util.function.Function;
  * bars were sized each cell holds the front's value, then the rear's.
  */
 final class CandidateTableModel extends TextTableModel {
-    static final String[] COLUMNS = {"Rank", "Stock size", "Material", "Arm hole", "Front share", "Roll gradient",
-        "Limit and balance", "Inside wheel lifts (front / rear)", "Bar mass", "Safety factor", "Miss (steps)"};
-    static final String[] TOOLTIPS = {"Best first: closest to the target, then lightest",
-        "The section as the catalogue names it", "The bar's material",
+    /**
+     * Short headers (the whole meaning is in each header's tooltip), the columns a choice turns on first: what
+     * the bar is, what it gives, what it weighs, how hard it works and whether it is out of the ordinary; then
+     * the rest, which a sideways scroll reaches.
+     */
+    static final String[] COLUMNS = {"#", "Size", "Mass", "Safety", "Flags", "Front share", "Hole", "Miss",
+        "Material", "Roll gradient", "Limit", "Wheel lifts (F / R)"};
+    static final String[] TOOLTIPS = {"Rank: best first, closest to the target, then lightest",
+        "Stock size: the section as the catalogue names it", "Mass of each sized bar",
+        "Static safety factor against yield at the check travel",
+        "Where the bar lies outside what the trade usually fits a road or club car (common practice; the limits "
+                + "are written under the table): heavy, thick or stressed. A caution, not a refusal",
+        "Front share of the lateral load transfer with this bar",
         "Arm hole counted from 1, the first arm length in the file; its length in brackets",
-        "Front share of the lateral load transfer with this bar", "Body roll per g of lateral acceleration",
-        "The grip limit and which axle reaches it first", "Lateral acceleration at which each inside wheel lifts",
-        "Mass of each sized bar", "Static safety factor against yield at the check travel",
-        "How far from the target: 1 step = 1 percentage point of front share, or 0.1 deg/g of roll gradient"};
+        "Miss in steps, how far from the target: 1 step = 1 percentage point of front share, or 0.1 deg/g of "
+                + "roll gradient",
+        "The bar's material", "Body roll per g of lateral acceleration",
+        "The grip limit and which axle reaches it first",
+        "Lateral acceleration at which each inside wheel lifts, front / rear"};
+    /** Column numbers, as {@link #COLUMNS} orders them. */
+    static final int RANK = 0;
+    static final int SIZE = 1;
+    static final int MASS = 2;
+    static final int SAFETY = 3;
+    static final int FLAGS = 4;
+    static final int FRONT_SHARE = 5;
+    static final int HOLE = 6;
+    static final int MISS = 7;
+    static final int MATERIAL = 8;
+    static final int ROLL_GRADIENT = 9;
+    static final int LIMIT = 10;
+    static final int LIFTS = 11;
     private final FigureFormat format;
     private List<Candidate> candidates = List.of();
+    private List<List<TradeFlag>> flags = List.of();
     private Vehicle vehicle;
 
     CandidateTableModel(FigureFormat format) {
@@ -36,9 +63,13 @@ final class CandidateTableModel extends TextTableModel {
         this.format = format;
     }
 
-    /** @param searched the car the candidates were found for (their arm lengths are its bars') */
-    void show(List<Candidate> shown, Vehicle searched) {
+    /**
+     * @param searched the car the candidates were found for (their arm lengths are its bars')
+     * @param limits   what the trade usually fits, for the flags
+     */
+    void show(List<Candidate> shown, Vehicle searched, TradeLimits limits) {
         candidates = List.copyOf(shown);
+        flags = candidates.stream().map(limits::flags).toList();
         vehicle = searched;
         fireTableDataChanged();
     }
@@ -52,6 +83,11 @@ final class CandidateTableModel extends TextTableModel {
         return candidates.get(row);
     }
 
+    /** @return the flags of the candidate in that row */
+    List<TradeFlag> flags(int row) {
+        return flags.get(row);
+    }
+
     @Override
     public int getRowCount() {
         return candidates.size();
@@ -62,16 +98,17 @@ final class CandidateTableModel extends TextTableModel {
         Candidate candidate = candidates.get(row);
         SetupFigures figures = candidate.figures();
         return switch (column) {
-            case 0 -> Integer.toString(row + 1);
-            case 1 -> perBar(candidate, choice -> choice.size().label(), true);
-            case 2 -> perBar(candidate, choice -> choice.material().name(), false);
-            case 3 -> perBar(candidate, choice -> hole(candidate, choice), false);
-            case 4 -> format.text(figures.frontLoadTransferShare(), Quantity.SHARE);
-            case 5 -> format.text(figures.rollGradient(), Quantity.ROLL_GRADIENT);
-            case 6 -> format.text(figures.limit(), Quantity.ACCELERATION) + ", " + figures.balance().key();
-            case 7 -> lift(figures, AxlePosition.FRONT) + " / " + lift(figures, AxlePosition.REAR);
-            case 8 -> perBar(candidate, choice -> format.text(bar(candidate, choice).mass(), Quantity.MASS), false);
-            case 9 -> perBar(candidate, choice -> format.factor(bar(candidate, choice).safetyFactor()), false);
+            case RANK -> Integer.toString(row + 1);
+            case SIZE -> perBar(candidate, choice -> choice.size().label(), true);
+            case MATERIAL -> perBar(candidate, choice -> choice.material().name(), false);
+            case HOLE -> perBar(candidate, choice -> hole(candidate, choice), false);
+            case FRONT_SHARE -> format.text(figures.frontLoadTransferShare(), Quantity.SHARE);
+            case ROLL_GRADIENT -> format.text(figures.rollGradient(), Quantity.ROLL_GRADIENT);
+            case LIMIT -> format.text(figures.limit(), Quantity.ACCELERATION) + ", " + figures.balance().key();
+            case LIFTS -> lift(figures, AxlePosition.FRONT) + " / " + lift(figures, AxlePosition.REAR);
+            case MASS -> perBar(candidate, choice -> format.text(bar(candidate, choice).mass(), Quantity.MASS), false);
+            case SAFETY -> perBar(candidate, choice -> format.factor(bar(candidate, choice).safetyFactor()), false);
+            case FLAGS -> TradeFlagText.words(candidate, flags.get(row));
             default -> String.format(format.view().locale(), "%.2f", candidate.miss());
         };
     }

@@ -5,11 +5,16 @@ import barwright.model.Vehicle;
 import barwright.physics.ImpossibleVehicleException;
 import barwright.physics.MassProperties;
 import barwright.report.sheet.SheetContent;
+import barwright.report.sizing.ReachText;
+import barwright.sizing.ShareReach;
 import barwright.sizing.SizingRequest;
+import barwright.ui.panel.WrappingText;
+import barwright.ui.task.BackgroundWork;
 import barwright.ui.field.ViewSettings;
 import barwright.units.Constants;
 import barwright.units.Quantity;
 
+import javax.swing.BorderFactory;
 import javax.swing.ButtonGroup;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
@@ -18,6 +23,8 @@ import javax.swing.JLabel;
 import javax.swing.JRadioButton;
 import javax.swing.JSpinner;
 import javax.swing.SpinnerNumberModel;
+import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -42,9 +49,19 @@ final class SearchForm extends Rows {
     private final QuantityField tubeDiameter;
     private final JSpinner count = new JSpinner(new SpinnerNumberModel(SizingRequest.DEFAULT_MAX_RESULTS, 1, 100, 1));
     private final JButton search = new JButton("Find bars");
+    /** What the bars reach on the car, and why the default target was moved where it was. */
+    private final WrappingText reachNote = new WrappingText(" ");
+    private final BackgroundWork<ReachInput, SearchPlan.Reach> reachWork;
+    private final ViewSettings view;
+    /** True once a person has typed a target or chosen how to aim: the form then never moves it. */
+    private boolean targetChosen;
+    /** True while the form itself sets the target, so that its own edits do not count as a person's. */
+    private boolean settingDefault;
+    private Vehicle lastCar;
 
     SearchForm(ViewSettings view) {
         setName("search.form");
+        this.view = view;
         share = new QuantityField("search.share", "Front share aimed at", Quantity.SHARE, view, 0.01, 0.99, 0.68, false);
         offset = new QuantityField("search.offset", "Points above the static front weight", Quantity.SHARE, view, -0.5,
                 0.5, SheetContent.RULE_OF_THUMB_OFFSET, false);
@@ -73,6 +90,10 @@ final class SearchForm extends Rows {
         rearDown.setName("search.rearStaysDown");
         count.setName("search.count");
         search.setName("search.run");
+        reachNote.setName("search.reach");
+        reachWork = BackgroundWork.newestOnly(input -> SearchPlan.reach(input.vehicle(), input.settings()),
+                this::showReach, failure -> showReach(null));
+        watchForAPersonsTarget();
         ButtonGroup shareKind = new ButtonGroup();
         shareKind.add(shareItself);
         shareKind.add(shareOffset);
@@ -86,6 +107,7 @@ final class SearchForm extends Rows {
         across(aimShare);
         across(inLine(22, shareOffset, offset, offset.unitLabel()));
         across(inLine(22, shareItself, share, share.unitLabel()));
+        across(indented(reachNote));
         across(inLine(0, aimGradient, gradient, gradient.unitLabel()));
         heading("Every result must have");
         line("Least safety factor", safety);
@@ -103,8 +125,13 @@ final class SearchForm extends Rows {
         end();
     }
 
-    /** Says which material "own" means for the car as it stands. */
+    /**
+     * Says which material "own" means for the car as it stands, and works out (off the event thread) which front
+     * shares the bars reach on it: a default target out of reach is moved just inside, and said so.
+     */
     void showCar(Vehicle vehicle) {
+        lastCar = vehicle;
+        requestReach();
         List<String> own = new ArrayList<>();
         for (AxlePosition position : AxlePosition.values()) {
             if (vehicle.axle(position).bar() != null) {
@@ -121,6 +148,106 @@ final class SearchForm extends Rows {
             // a mass half typed can make the car impossible for a moment; the main window says why
             offset.setToolTipText("The static front weight cannot be worked out for this car; " + rule);
         }
+    }
+
+    private static javax.swing.JComponent indented(javax.swing.JComponent component) {
+        component.setBorder(BorderFactory.createEmptyBorder(0, 26, 2, 0));
+        return component;
+    }
+
+    /** A person's typing or choosing of the target stops the form from moving it (the form's own edits do not). */
+    private void watchForAPersonsTarget() {
+        DocumentListener typed = new DocumentListener() {
+            @Override
+            public void insertUpdate(DocumentEvent event) {
+                chosen();
+            }
+
+            @Override
+            public void removeUpdate(DocumentEvent event) {
+                chosen();
+            }
+
+            @Override
+            public void changedUpdate(DocumentEvent event) {
+                chosen();
+            }
+        };
+        share.getDocument().addDocumentListener(typed);
+        offset.getDocument().addDocumentListener(typed);
+        shareItself.addActionListener(event -> chosen());
+        shareOffset.addActionListener(event -> chosen());
+        aimShare.addActionListener(event -> chosen());
+        axle.addActionListener(event -> requestReach());
+    }
+
+    private void chosen() {
+        if (!settingDefault) {
+            targetChosen = true;
+        }
+    }
+
+    /** Works out the reach of the bars as the form would search them now (where its settings can be read). */
+    private void requestReach() {
+        if (lastCar == null) {
+            return;
+        }
+        try {
+            reachWork.submit(new ReachInput(lastCar, settings()));
+        } catch (IllegalArgumentException unreadable) {
+            reachNote.setText(" "); // a field half typed: its message comes when the search is asked for
+        }
+    }
+
+    /** What the reach is worked out for: the car and the form's settings as they stood. */
+    private record ReachInput(Vehicle vehicle, SearchSettings settings) {
+    }
+
+    /**
+     * Moves a default target out of reach just inside the reach (a person's target stays as typed) and says
+     * what the bars reach; with no answer, says nothing.
+     */
+    private void showReach(SearchPlan.Reach answer) {
+        if (answer == null || answer.reach() == null) {
+            reachNote.setText(" ");
+            return;
+        }
+        Locale locale = view.locale();
+        ShareReach reach = answer.reach();
+        String bars = answer.axles().size() > 1 ? "front and rear bars" : answer.axles().get(0).key() + " bar";
+        String range = "Reachable with the " + bars + " on this car: " + ReachText.range(reach, locale) + ".";
+        if (targetChosen) {
+            reachNote.setText(range);
+            return;
+        }
+        double wanted = answer.staticFront() + SheetContent.RULE_OF_THUMB_OFFSET;
+        settingDefault = true;
+        try {
+            aimShare.setSelected(true);
+            if (reach.contains(wanted)) {
+                shareOffset.setSelected(true);
+                offset.setValue(SheetContent.RULE_OF_THUMB_OFFSET);
+                reachNote.setText(range);
+            } else {
+                double aim = Math.round(reach.aimFor(wanted) * 1000) / 1000.0; // a tenth of a point
+                shareItself.setSelected(true);
+                share.setValue(aim);
+                String words = ReachText.outOfReach(bars, answer.staticFront(), wanted, reach, locale);
+                reachNote.setText(Character.toUpperCase(words.charAt(0)) + words.substring(1) + "; aiming at "
+                        + ReachText.percent(aim, locale) + ".");
+            }
+        } finally {
+            settingDefault = false;
+        }
+    }
+
+    /** @return true where no reach is being worked out */
+    boolean reachSettled() {
+        return reachWork.isIdle();
+    }
+
+    String reachText() {
+        return reachNote.getText();
     }
 
     /**

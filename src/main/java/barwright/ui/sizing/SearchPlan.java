@@ -8,7 +8,9 @@ import barwright.sizing.BarSearch;
 import barwright.sizing.Constraints;
 import barwright.sizing.ExactSize;
 import barwright.sizing.ExactSolution;
+import barwright.sizing.ReachableShare;
 import barwright.sizing.SetupEvaluator;
+import barwright.sizing.ShareReach;
 import barwright.sizing.SizeChoices;
 import barwright.sizing.SizingRequest;
 import barwright.sizing.Targets;
@@ -39,6 +41,32 @@ final class SearchPlan {
      * @throws IllegalArgumentException with a message for people where the settings cannot make a search
      */
     static SizingRequest request(Vehicle vehicle, SearchSettings settings) {
+        Map<AxlePosition, SizeChoices> choices = choices(vehicle, settings);
+        return new SizingRequest(settings.axles(), targets(settings), constraints(settings), choices,
+                settings.count(), SizingRequest.DEFAULT_TIE_BAND);
+    }
+
+    /**
+     * The front shares the bars of a search with these settings can reach on the car (whatever it aims at), and
+     * the car's static front weight; off the event thread.
+     *
+     * @throws IllegalArgumentException with a message for people where the settings cannot make a search
+     */
+    static Reach reach(Vehicle vehicle, SearchSettings settings) {
+        SetupEvaluator evaluator = new SetupEvaluator(vehicle);
+        return new Reach(settings.axles(), evaluator.masses().frontMassFraction(), ReachableShare.of(evaluator,
+                settings.axles(), choices(vehicle, settings), constraints(settings)).orElse(null));
+    }
+
+    /**
+     * @param axles       the sized axles
+     * @param staticFront the car's static front weight fraction
+     * @param reach       the front shares reachable, or null where none is (no bar passes the limits)
+     */
+    record Reach(List<AxlePosition> axles, double staticFront, ShareReach reach) {
+    }
+
+    private static Map<AxlePosition, SizeChoices> choices(Vehicle vehicle, SearchSettings settings) {
         Map<AxlePosition, SizeChoices> choices = new EnumMap<>(AxlePosition.class);
         List<StockSize> sizes = sizes(settings.catalogues());
         for (AxlePosition axle : settings.axles()) {
@@ -52,8 +80,7 @@ final class SearchPlan {
                     sizes, List.of()));
         }
         refuseTooManyPairs(vehicle, choices);
-        return new SizingRequest(settings.axles(), targets(settings), constraints(settings), choices,
-                settings.count(), SizingRequest.DEFAULT_TIE_BAND);
+        return choices;
     }
 
     /**

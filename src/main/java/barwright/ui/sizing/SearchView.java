@@ -8,13 +8,18 @@ import barwright.sizing.Candidate;
 import barwright.sizing.ExactSolution;
 import barwright.sizing.Rejection;
 import barwright.sizing.SizingResult;
+import barwright.sizing.TradeLimits;
+import barwright.report.sizing.ReachText;
+import barwright.report.sizing.TradeFlagText;
 import barwright.ui.document.DocumentEvent;
 import barwright.ui.panel.FigureFormat;
+import barwright.ui.panel.PagePanel;
 import barwright.ui.panel.WrappingText;
 import barwright.units.Quantity;
 
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
+import javax.swing.JComponent;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
@@ -38,6 +43,8 @@ final class SearchView extends JPanel {
     private final JTable table;
     private final WrappingText summary = new WrappingText("Choose what to aim at and press Find bars.");
     private final WrappingText exact = new WrappingText(" ");
+    /** What the flags mean and, where the best proposal has any, a caution naming them. */
+    private final WrappingText flagNote = new WrappingText(" ");
     private final WrappingText applied = new WrappingText(" ");
     private final JButton apply = new JButton("Put the chosen bar in the car");
     private final WorkStrip work = new WorkStrip("search");
@@ -51,11 +58,18 @@ final class SearchView extends JPanel {
         this.format = new FigureFormat(context.view());
         this.form = new SearchForm(context.view());
         this.rows = new CandidateTableModel(format);
-        table = new FigureTable("search.results", rows, CandidateTableModel.TOOLTIPS,
-                new int[]{44, 130, 170, 105, 80, 95, 150, 220, 110, 90, 80});
+        FigureTable figures = new FigureTable("search.results", rows, CandidateTableModel.TOOLTIPS,
+                new int[]{30, 60, 60, 50, 50, 70, 44, 44, 90, 80, 90, 110});
+        figures.fitColumnsToTexts();
+        table = figures;
         table.getSelectionModel().addListSelectionListener(event -> refreshApply());
         summary.setName("search.summary");
         exact.setName("search.exact");
+        flagNote.setName("search.flags");
+        for (WrappingText words : List.of(summary, flagNote, exact)) {
+            // a long text shows its start: setting it moves no scroll pane to its end
+            ((javax.swing.text.DefaultCaret) words.getCaret()).setUpdatePolicy(javax.swing.text.DefaultCaret.NEVER_UPDATE);
+        }
         applied.setName("search.applied");
         apply.setName("search.apply");
         apply.setToolTipText("Writes the chosen bar's material, section and arm hole into the open car; Edit > Undo "
@@ -65,10 +79,13 @@ final class SearchView extends JPanel {
 
         JPanel results = new JPanel(new BorderLayout(0, 4));
         results.setBorder(BorderFactory.createEmptyBorder(6, 8, 4, 8));
-        results.add(summary, BorderLayout.NORTH);
+        results.add(capped(summary, results, 20), BorderLayout.NORTH);
         results.add(new JScrollPane(table), BorderLayout.CENTER);
         JPanel under = new JPanel(new BorderLayout(0, 4));
-        under.add(exact, BorderLayout.NORTH);
+        JPanel notes = new PagePanel(new BorderLayout(0, 4)); // wraps its words at the scroll pane's width
+        notes.add(flagNote, BorderLayout.NORTH);
+        notes.add(exact, BorderLayout.CENTER);
+        under.add(capped(notes, results, 30), BorderLayout.NORTH);
         JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
         buttons.add(apply);
         under.add(buttons, BorderLayout.CENTER);
@@ -95,6 +112,29 @@ final class SearchView extends JPanel {
         refreshApply();
     }
 
+    /**
+     * @return the text in a borderless scroll pane at most that share of the results column high (and never less
+     *         than two lines), so that with large text on a small screen the words above and under the table
+     *         scroll rather than squeeze the table out of sight
+     */
+    private static JScrollPane capped(JComponent text, JComponent column, int percent) {
+        JScrollPane scroll = new JScrollPane(text, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
+                JScrollPane.HORIZONTAL_SCROLLBAR_NEVER) {
+            @Override
+            public Dimension getPreferredSize() {
+                Dimension wanted = super.getPreferredSize();
+                int twoLines = 2 * text.getFontMetrics(text.getFont()).getHeight() + 4;
+                int room = Math.max(twoLines, column.getHeight() * percent / 100);
+                return new Dimension(wanted.width, Math.min(wanted.height, room));
+            }
+        };
+        scroll.setBorder(null);
+        scroll.setOpaque(false);
+        scroll.getViewport().setOpaque(false);
+        scroll.getVerticalScrollBar().setUnitIncrement(16);
+        return scroll;
+    }
+
     /** Starts a search on the car as it stands; a refused setting is said in the status line instead. */
     void search() {
         SearchSettings settings;
@@ -117,16 +157,17 @@ final class SearchView extends JPanel {
     /** Takes the results off the screen (they no longer answer what was asked), with Apply disabled. */
     private void clearResults(String why) {
         shown = null;
-        rows.show(List.of(), null);
+        rows.show(List.of(), null, TradeLimits.commonPractice(0));
         summary.setText(why);
         exact.setText(" ");
+        flagNote.setText(" ");
         applied.setText(" ");
         refreshApply();
     }
 
     private void showOutcome(SearchOutcome outcome) {
         shown = outcome;
-        rows.show(outcome.result().candidates(), outcome.vehicle());
+        rows.show(outcome.result().candidates(), outcome.vehicle(), TradeLimits.of(outcome.request()));
         if (!outcome.result().candidates().isEmpty()) {
             table.setRowSelectionInterval(0, 0);
         }
@@ -166,6 +207,7 @@ final class SearchView extends JPanel {
             text.append(" The car has changed since this search: search again before using these results.");
         }
         summary.setText(text.toString());
+        flagNote.setText(flagWords(result));
         List<String> lines = new ArrayList<>();
         if (shown.exactSolid() != null) {
             lines.add(exactLine("Exact solid diameter", shown.exactSolid()));
@@ -175,6 +217,29 @@ final class SearchView extends JPanel {
                     + " tube", shown.exactWall()));
         }
         exact.setText(lines.isEmpty() ? " " : String.join("\n", lines));
+
+    }
+
+    /** @return the reach where the target lies outside it, the caution of a flagged best proposal, the legend */
+    private String flagWords(SizingResult result) {
+        List<String> lines = new ArrayList<>();
+        if (result.targetOutOfReach()) {
+            boolean pairs = shown.request().axles().size() > 1;
+            String bars = pairs ? "front and rear bars" : shown.request().axles().get(0).key() + " bar";
+            String words = ReachText.outOfReach(bars, Double.NaN, result.targetShare(), result.reach(),
+                    format.view().locale());
+            lines.add("Out of reach: " + words + ". The rows are the closest, not on target.");
+        }
+        if (!result.candidates().isEmpty()) {
+            TradeLimits limits = TradeLimits.of(shown.request());
+            String caution = TradeFlagText.bestCaution(result.candidates().get(0),
+                    limits.flags(result.candidates().get(0)), format.view().units());
+            if (!caution.isEmpty()) {
+                lines.add(caution);
+            }
+            lines.add(TradeFlagText.legend(limits, format.view().units()));
+        }
+        return lines.isEmpty() ? " " : String.join("\n", lines);
     }
 
     private String targets(SizingResult result) {
@@ -287,5 +352,9 @@ final class SearchView extends JPanel {
 
     String exactText() {
         return exact.getText();
+    }
+
+    String flagText() {
+        return flagNote.getText();
     }
 }

@@ -30,6 +30,9 @@ final class SizingWindow extends JDialog {
         }
     }
 
+    /** The window's size where the screen has room for it (pixels). */
+    static final int DEFAULT_WIDTH = 1180;
+    static final int DEFAULT_HEIGHT = 800;
     private final JTabbedPane tabs = new JTabbedPane();
     private final SearchView search;
     private final TubeView tubes;
@@ -57,7 +60,9 @@ final class SizingWindow extends JDialog {
         content.add(new CautionLine(), BorderLayout.SOUTH);
         setContentPane(content);
         setMinimumSize(new Dimension(900, 600));
-        setSize(new Dimension(1180, 800));
+        // its usual size, or the screen's room where that is smaller (a shop laptop or projector at 1024 x 768)
+        java.awt.Rectangle room = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment().getMaximumWindowBounds();
+        setSize(new Dimension(Math.min(DEFAULT_WIDTH, room.width), Math.min(DEFAULT_HEIGHT, room.height)));
         if (owner != null) {
             // placed beside the owner's corner here, where it is made (toolchain.md: reliable clicks under Xvfb)
             setLocation(owner.getX() + 40, owner.getY() + 40);

@@ -38,16 +38,18 @@ import java.util.List;
  * chosen tube can be put in the car as one undoable edit. Event thread.
  */
 final class TubeView extends JPanel {
-    static final String[] COLUMNS = {"Tube", "Material", "Link rate", "Rate vs solid", "Mass", "Mass saved",
-        "Largest stress", "Fatigue life", "Stress vs solid", "Safety factor"};
-    static final String[] HELP = {"The tube as the catalogue names it", "The tube's material",
-        "Force per unit of relative link travel at the same hole", "The tube's rate over the solid bar's, less one",
-        "The tube's mass", "The solid bar's mass less the tube's, and as a share of the solid's",
-        "Largest von Mises stress at the check travel",
+    /** What a choice turns on first (mass, what it saves, safety, life), then how the rate and stress compare. */
+    static final String[] COLUMNS = {"Tube", "Material", "Mass", "Mass saved", "Safety", "Fatigue life",
+        "Rate vs solid", "Link rate", "Stress", "Stress vs solid"};
+    static final String[] HELP = {"The tube as the catalogue names it", "The tube's material", "The tube's mass",
+        "The solid bar's mass less the tube's, and as a share of the solid's",
+        "Static safety factor against yield at the check travel",
         "Laps to failure on the default lap (invented: 12 corners up to 1.2 g), the tube in the car; "
                 + "\"no damage\": no cycle reaches the endurance limit",
-        "The tube's largest stress over the solid bar's, less one",
-        "Static safety factor against yield at the check travel"};
+        "The tube's rate over the solid bar's, less one",
+        "Force per unit of relative link travel at the same hole",
+        "Largest von Mises stress at the check travel",
+        "The tube's largest stress over the solid bar's, less one"};
     private final SizingContext context;
     private final FigureFormat format;
     private final JComboBox<String> axle = new JComboBox<>(new String[]{"front bar", "rear bar"});
@@ -88,7 +90,10 @@ final class TubeView extends JPanel {
         ButtonGroup which = new ButtonGroup();
         which.add(own);
         which.add(given);
-        table = new FigureTable("tubes.results", model, HELP, new int[]{195, 140, 95, 95, 70, 115, 100, 105, 95, 110});
+        FigureTable figures = new FigureTable("tubes.results", model, HELP,
+                new int[]{90, 90, 50, 80, 50, 80, 70, 70, 70, 70});
+        figures.fitColumnsToTexts(); // short headers, each column as wide as its texts: the safety factor in view
+        table = figures;
         table.getSelectionModel().addListSelectionListener(event -> refreshApply());
         find.addActionListener(event -> find());
         apply.setToolTipText("Writes the chosen tube and its material into the open car (same hole); Edit > Undo "
@@ -288,15 +293,15 @@ final class TubeView extends JPanel {
             return switch (column) {
                 case 0 -> match.size().label();
                 case 1 -> match.material().name();
-                case 2 -> format.text(match.linkRate(), Quantity.LINEAR_RATE);
-                case 3 -> String.format(locale, "%+.1f %%", match.rateDifference() * 100);
-                case 4 -> format.text(match.mass(), Quantity.MASS);
-                case 5 -> format.text(match.massSaved(), Quantity.MASS)
+                case 2 -> format.text(match.mass(), Quantity.MASS);
+                case 3 -> format.text(match.massSaved(), Quantity.MASS)
                         + String.format(locale, " (%.0f %%)", 100 * match.massSaved() / solidBar.mass());
-                case 6 -> format.text(match.maxStress(), Quantity.STRESS);
-                case 7 -> TubeOutput.lifeText(shown.lives().tubes().get(row));
-                case 8 -> String.format(locale, "%+.0f %%", 100 * (match.maxStress() / solidBar.maxVonMisesStress() - 1));
-                default -> format.factor(match.safetyFactor());
+                case 4 -> format.factor(match.safetyFactor());
+                case 5 -> TubeOutput.lifeText(shown.lives().tubes().get(row));
+                case 6 -> String.format(locale, "%+.1f %%", match.rateDifference() * 100);
+                case 7 -> format.text(match.linkRate(), Quantity.LINEAR_RATE);
+                case 8 -> format.text(match.maxStress(), Quantity.STRESS);
+                default -> String.format(locale, "%+.0f %%", 100 * (match.maxStress() / solidBar.maxVonMisesStress() - 1));
             };
         }
     }

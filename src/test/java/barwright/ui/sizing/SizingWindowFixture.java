@@ -22,11 +22,28 @@ import java.util.function.Supplier;
  * views opened from its Tools menu as a person would, and the checks the sizing window tests share.
  */
 final class SizingWindowFixture implements AutoCloseable {
-    private final WindowFixture main = new WindowFixture();
-    final Robot robot = main.robot;
-    final MainWindow window = main.window;
-    final FrameFixture frame = main.frame;
-    final ScriptedDialogs dialogs = main.dialogs;
+    private final WindowFixture main;
+    final Robot robot;
+    final MainWindow window;
+    final FrameFixture frame;
+    final ScriptedDialogs dialogs;
+
+    SizingWindowFixture() {
+        this(new WindowFixture());
+    }
+
+    /** The main window at that size and text size (points, 0 for the system's). */
+    SizingWindowFixture(int width, int height, int textSize) {
+        this(new WindowFixture(width, height, textSize));
+    }
+
+    private SizingWindowFixture(WindowFixture main) {
+        this.main = main;
+        robot = main.robot;
+        window = main.window;
+        frame = main.frame;
+        dialogs = main.dialogs;
+    }
 
     /** Opens the sizing views through Tools > item and returns their window. */
     DialogFixture openTool(String item) {

@@ -88,10 +88,10 @@ class SizingWindowTest {
         assertThat(table.rowCount()).isEqualTo(core.candidates().size()).isEqualTo(10);
         for (int row = 0; row < core.candidates().size(); row++) {
             Candidate expected = core.candidates().get(row);
-            assertThat(table.valueAt(org.assertj.swing.data.TableCell.row(row).column(1)))
+            assertThat(table.valueAt(org.assertj.swing.data.TableCell.row(row).column(CandidateTableModel.SIZE)))
                     .isEqualTo(expected.bars().get(0).size().label());
             // shown to one decimal in percent: within half a unit of the last digit
-            assertThat(number(table.valueAt(org.assertj.swing.data.TableCell.row(row).column(4))))
+            assertThat(number(table.valueAt(org.assertj.swing.data.TableCell.row(row).column(CandidateTableModel.FRONT_SHARE))))
                     .isCloseTo(expected.figures().frontLoadTransferShare() * 100, within(0.05));
         }
         // 189 sizes in the four built-in catalogue files x 4 arm holes x 1 material
@@ -258,11 +258,11 @@ class SizingWindowTest {
     @Test
     void figures_and_fields_follow_the_unit_switch() {
         DialogFixture sizing = searchRearFor52();
-        assertThat(sizing.table("search.results").valueAt(org.assertj.swing.data.TableCell.row(0).column(8)))
+        assertThat(sizing.table("search.results").valueAt(org.assertj.swing.data.TableCell.row(0).column(CandidateTableModel.MASS)))
                 .endsWith("kg");
         sizing.textBox("search.maxMass").enterText("2");
         fixture.frame.toggleButton("units.us").click();
-        assertThat(sizing.table("search.results").valueAt(org.assertj.swing.data.TableCell.row(0).column(8)))
+        assertThat(sizing.table("search.results").valueAt(org.assertj.swing.data.TableCell.row(0).column(CandidateTableModel.MASS)))
                 .endsWith("lb");
         assertThat(sizing.label("search.maxMass.unit").text()).isEqualTo("lb");
         // 2 kg typed, shown again in pounds: 2 / 0.45359237 (NIST SP 811) = 4.409 lb
