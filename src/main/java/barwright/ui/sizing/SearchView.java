@@ -22,7 +22,6 @@ import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import java.awt.BorderLayout;
 import java.awt.Dimension;
@@ -50,6 +49,8 @@ final class SearchView extends JPanel {
     private final WorkStrip work = new WorkStrip("search");
     private SearchOutcome shown;
     private final WhileShown carShown;
+    /** The settings beside the results, or the two as tabs where the window is narrow for its text. */
+    private final SettingsBeside layout;
 
     SearchView(SizingContext context) {
         super(new BorderLayout());
@@ -91,19 +92,25 @@ final class SearchView extends JPanel {
         under.add(buttons, BorderLayout.CENTER);
         under.add(applied, BorderLayout.SOUTH);
         results.add(under, BorderLayout.SOUTH);
-        JScrollPane formScroll = new JScrollPane(form);
+        JScrollPane formScroll = new JScrollPane(form) {
+            @Override
+            public Dimension getPreferredSize() {
+                // as wide as the settings' own text needs (it grows with the text size), never under 390 px
+                int scrollBar = getVerticalScrollBar().getPreferredSize().width;
+                int width = Math.max(390, form.getPreferredSize().width + scrollBar + getInsets().left
+                        + getInsets().right);
+                return new Dimension(width, 500);
+            }
+        };
         formScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         formScroll.getVerticalScrollBar().setUnitIncrement(16);
-        formScroll.setPreferredSize(new Dimension(390, 500));
         JPanel left = new JPanel(new BorderLayout());
         left.add(formScroll, BorderLayout.CENTER);
         JPanel run = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 4));
         run.add(form.searchButton()); // outside the scrolled settings: always in view
         left.add(run, BorderLayout.SOUTH);
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, results);
-        split.setBorder(null);
-        split.setResizeWeight(0);
-        add(split, BorderLayout.CENTER);
+        layout = new SettingsBeside("search", left, results);
+        add(layout, BorderLayout.CENTER);
         add(work, BorderLayout.SOUTH);
         carShown = new WhileShown(this, this::showCar);
         context.document().addListener(this::documentChanged);
@@ -133,6 +140,11 @@ final class SearchView extends JPanel {
         scroll.getViewport().setOpaque(false);
         scroll.getVerticalScrollBar().setUnitIncrement(16);
         return scroll;
+    }
+
+    /** @return true where the settings and the results are two tabs (a window narrow for its text) */
+    boolean settingsAndResultsTabbed() {
+        return layout.tabbed();
     }
 
     /** Starts a search on the car as it stands; a refused setting is said in the status line instead. */
@@ -171,6 +183,7 @@ final class SearchView extends JPanel {
         if (!outcome.result().candidates().isEmpty()) {
             table.setRowSelectionInterval(0, 0);
         }
+        layout.showResults();
         applied.setText(" ");
         describe();
         refreshApply();

@@ -46,6 +46,7 @@ final class SizingWindow extends JDialog {
         setDefaultCloseOperation(WindowConstants.HIDE_ON_CLOSE);
         search = new SearchView(context);
         tabs.setName("sizing.tabs");
+        tabs.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT); // one row of tabs, whatever the text size
         add(Tab.SEARCH, search);
         tubes = new TubeView(context);
         add(Tab.TUBES, tubes);
@@ -57,7 +58,7 @@ final class SizingWindow extends JDialog {
         add(Tab.PRELOAD, preload);
         JPanel content = new JPanel(new BorderLayout());
         content.add(tabs, BorderLayout.CENTER);
-        content.add(new CautionLine(), BorderLayout.SOUTH);
+        content.add(new CautionLine().scrolledWhereShort(content), BorderLayout.SOUTH);
         setContentPane(content);
         setMinimumSize(new Dimension(900, 600));
         // its usual size, or the screen's room where that is smaller (a shop laptop or projector at 1024 x 768)

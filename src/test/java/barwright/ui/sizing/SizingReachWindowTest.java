@@ -112,6 +112,30 @@ class SizingReachWindowTest {
         assertDecidingColumnsInView();
     }
 
+    @Test
+    void withTheLargestTextAt1024By768TheSettingsAndResultsAreTabsAndTheDecidingColumnsInView() {
+        fixture = new SizingWindowFixture(1024, 768, barwright.ui.app.Themes.largestTextSize());
+        DialogFixture sizing = fixture.openTool("Size a bar to a target…");
+        GuiActionRunner.execute(() -> {
+            SizingWindow views = fixture.views();
+            views.setSize(1024, 768);
+            views.validate();
+            return null;
+        });
+        fixture.robot.waitForIdle();
+        // side by side the settings alone wanted most of the width: their labels and the table were cut
+        assertThat(GuiActionRunner.execute(() -> fixture.views().search().settingsAndResultsTabbed())).isTrue();
+        sizing.comboBox("search.axle").selectItem("rear bar");
+        sizing.radioButton("search.shareItself").click();
+        sizing.textBox("search.share").deleteText().enterText("52");
+        sizing.button("search.run").click();
+        fixture.waitFor("the rows", () -> fixture.views().search().table().getRowCount() > 0);
+        fixture.robot.waitForIdle();
+        // a finished search turns to its results
+        assertThat(GuiActionRunner.execute(() -> fixture.views().search().table().isShowing())).isTrue();
+        assertDecidingColumnsInView();
+    }
+
     /** Mass, safety factor and flags end inside the scroll pane's visible width; no header is cut. */
     private void assertDecidingColumnsInView() {
         List<String> faults = GuiActionRunner.execute(() -> {
