@@ -14,6 +14,7 @@ public final class ScriptedDialogs implements Dialogs {
     public final Deque<Path> filesToSave = new ArrayDeque<>();
     public final Deque<UnsavedChoice> unsavedAnswers = new ArrayDeque<>();
     public final List<String> errors = new ArrayList<>();
+    public final List<String> information = new ArrayList<>();
     public int unsavedQuestions;
 
     @Override
@@ -36,5 +37,10 @@ public final class ScriptedDialogs implements Dialogs {
     @Override
     public void showError(String title, String message) {
         errors.add(title + ": " + message);
+    }
+
+    @Override
+    public void showInformation(String title, String message) {
+        information.add(title + ": " + message);
     }
 }

@@ -32,4 +32,7 @@ public interface Dialogs {
 
     /** Tells the person something went wrong, and why. */
     void showError(String title, String message);
+
+    /** Tells the person something that needs no answer, e.g. the program's version in About. */
+    void showInformation(String title, String message);
 }

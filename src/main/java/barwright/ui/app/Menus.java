@@ -1,5 +1,6 @@
 package barwright.ui.app;
 
+import barwright.report.ProgramVersion;
 import barwright.ui.action.CommandAction;
 import barwright.ui.action.RecentFiles;
 import barwright.ui.action.WindowContribution;
@@ -13,7 +14,6 @@ import javax.swing.JButton;
 import javax.swing.JMenu;
 import javax.swing.JMenuBar;
 import javax.swing.JMenuItem;
-import javax.swing.JOptionPane;
 import javax.swing.JRadioButtonMenuItem;
 import javax.swing.JToggleButton;
 import javax.swing.JToolBar;
@@ -121,9 +121,7 @@ final class Menus {
         JMenu helpMenu = menu("Help", KeyEvent.VK_H);
         helpMenu.add(help);
         helpMenu.add(new CommandAction("About Barwright", "Version and licence", null, KeyEvent.VK_A,
-                () -> JOptionPane.showMessageDialog(window, "Barwright " + version() + "\nAnti-roll bars and lateral "
-                        + "load transfer.\nSee the LICENSE file for the licence.", "About Barwright",
-                        JOptionPane.INFORMATION_MESSAGE)));
+                () -> window.files().dialogs().showInformation("About Barwright", aboutText())));
         bar.add(helpMenu);
         return bar;
     }
@@ -289,8 +287,14 @@ final class Menus {
         return menu;
     }
 
-    private static String version() {
-        String version = Menus.class.getPackage().getImplementationVersion();
-        return version != null ? version : "(development build)";
+    /**
+     * @return the About text: the program's version as {@code --version} prints it, the Java it runs on and the
+     * licence
+     */
+    static String aboutText() {
+        return ProgramVersion.line() + "\nAnti-roll bars and lateral load transfer.\n"
+                + "Running on Java " + System.getProperty("java.version") + " ("
+                + System.getProperty("java.vendor", "unknown vendor") + ").\n"
+                + "Free software under the MIT licence: see the LICENSE file that came with the program.";
     }
 }

@@ -82,4 +82,9 @@ final class SwingDialogs implements Dialogs {
     public void showError(String title, String message) {
         JOptionPane.showMessageDialog(owner, message, title, JOptionPane.ERROR_MESSAGE);
     }
+
+    @Override
+    public void showInformation(String title, String message) {
+        JOptionPane.showMessageDialog(owner, message, title, JOptionPane.INFORMATION_MESSAGE);
+    }
 }

@@ -6,6 +6,7 @@ import barwright.insight.LiftEnvelopeResult;
 import barwright.insight.Sensitivity;
 import barwright.ui.field.ViewSettings;
 import barwright.ui.panel.Palette;
+import barwright.ui.sizing.WhileShown;
 import barwright.ui.task.AnalysisOutcome;
 import barwright.ui.task.BackgroundWork;
 import barwright.ui.task.ResultsModel;
@@ -18,8 +19,10 @@ import java.awt.BorderLayout;
 
 /**
  * The setter's questions: one tab each for the lift envelope, the sensitivity and the chassis study. After every
- * analysis the window accepts, the three are computed again off the event thread; the envelope keeps the one
- * before as the previous setting. Event thread.
+ * analysis the window accepts, the three are computed again off the event thread while the panel is on screen
+ * (the sensitivity alone analyses the car a score of times: while the panel is hidden an edit costs nothing
+ * here, and the newest analysis is computed when it is shown again); the envelope keeps the one before as the
+ * previous setting. Event thread.
  */
 public final class InsightPanel extends JPanel {
     private final ResultsModel results;
@@ -29,6 +32,7 @@ public final class InsightPanel extends JPanel {
     private final JLabel status = new JLabel(" ");
     private final JTabbedPane tabs = new JTabbedPane();
     private final BackgroundWork<AnalysisOutcome, InsightResults> worker;
+    private final WhileShown whileShown;
     private AnalysisOutcome submitted;
     private InsightResults current;
 
@@ -52,6 +56,7 @@ public final class InsightPanel extends JPanel {
         add(status, BorderLayout.NORTH);
         add(tabs, BorderLayout.CENTER);
         worker = BackgroundWork.newestOnly(InsightPanel::compute, this::arrived, this::failed);
+        whileShown = new WhileShown(this, this::submitShown);
         results.addListener(this::resultsChanged);
         view.addListener(this::redraw);
         resultsChanged();
@@ -65,8 +70,12 @@ public final class InsightPanel extends JPanel {
     }
 
     private void resultsChanged() {
-        AnalysisOutcome shown = results.shown();
         status.setText(results.isStale() ? "Out of date: " + results.staleReason() : " ");
+        whileShown.request();
+    }
+
+    private void submitShown() {
+        AnalysisOutcome shown = results.shown();
         if (shown == null || !shown.succeeded() || shown == submitted) {
             return;
         }
@@ -97,10 +106,13 @@ public final class InsightPanel extends JPanel {
         }
     }
 
-    /** @return true when no computation runs or waits and the views show the newest accepted analysis */
+    /**
+     * @return true when no computation runs or waits and the views show the newest accepted analysis (they
+     * catch up only while the panel is on screen)
+     */
     public boolean isSettled() {
         return worker.isIdle() && current != null && submitted != null
-                && current.vehicle().equals(submitted.vehicle());
+                && current.vehicle().equals(submitted.vehicle()) && submitted == results.shown();
     }
 
     /** @return what the views show, or null before the first computation */

@@ -16,6 +16,7 @@ import barwright.ui.chart.DrawingExport;
 import barwright.ui.panel.PagePanel;
 import barwright.ui.panel.Palette;
 import barwright.ui.panel.WrappingText;
+import barwright.ui.sizing.WhileShown;
 import barwright.ui.task.BackgroundWork;
 import barwright.ui.task.CorneringProbe;
 import barwright.units.Quantity;
@@ -72,6 +73,7 @@ public final class LinkagePage extends JPanel {
     private final JSlider slider = new JSlider(0, 100);
     private final JComboBox<String> turn = new JComboBox<>(new String[] {"Left turn", "Right turn"});
     private final BackgroundWork<LinkageScene.Request, LinkageScene> worker;
+    private final WhileShown solveWhileShown;
     private long revision;
     /** What the drawing's last solve says (a preview refused, a linkage run out of travel), or null. */
     private String sceneNote;
@@ -129,6 +131,9 @@ public final class LinkagePage extends JPanel {
 
         worker = BackgroundWork.newestOnly(LinkageScene::solve, this::arrived,
                 failure -> message.setText("The drawing could not be made: " + failure));
+        // solved again only while on screen (a slider move or an edit elsewhere costs a hidden page nothing);
+        // the newest car and slider are solved when the page is shown
+        solveWhileShown = new WhileShown(this, () -> submit(null));
         context.document().addListener(event -> {
             releaseNote = null;
             if (event.kind() == barwright.ui.document.DocumentEvent.Kind.REPLACED) {
@@ -245,7 +250,7 @@ public final class LinkagePage extends JPanel {
 
     /** Asks for the drawing of the car as last accepted, at the slider's roll. */
     private void refresh() {
-        submit(null);
+        solveWhileShown.request();
         showProblems();
     }
 

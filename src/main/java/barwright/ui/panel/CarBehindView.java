@@ -123,10 +123,13 @@ public final class CarBehindView extends JComponent {
     public void paintPicture(Graphics2D g, int width, int height, Font font) {
         AnalysisResult result = result();
         drawnFigures.clear();
-        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        // the background before antialiasing is on: the same pixels for a whole-pixel rectangle, but not worked
+        // out (and on X11 not sent to the display) as a coverage mask the size of the picture
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_OFF);
         g.setColor(Palette.colour("Panel.background", Color.WHITE));
         g.fillRect(0, 0, width, height);
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
         if (result != null) {
             paintCar(g, result, width, height, font != null ? font : new Font(Font.SANS_SERIF, Font.PLAIN, 13));
         }

@@ -29,6 +29,15 @@ public final class WarningsPanel extends PagePanel {
         if (warnings == null || warnings.equals(showing)) {
             return; // the same warnings: nothing to rebuild
         }
+        if (sameCodes(warnings, showing)) {
+            // the same warnings with new figures (an edit moves the numbers in them): the lines keep their place
+            // and only their words change, rather than the whole list being made again on every edit
+            for (int i = 0; i < warnings.size(); i++) {
+                ((JTextArea) getComponent(i)).setText("\u26A0 " + warnings.get(i).message());
+            }
+            showing = warnings;
+            return;
+        }
         showing = warnings;
         removeAll();
         if (warnings.isEmpty()) {
@@ -42,6 +51,19 @@ public final class WarningsPanel extends PagePanel {
         }
         revalidate();
         repaint();
+    }
+
+    /** @return whether both lists hold warnings of the same codes in the same order (and at least one) */
+    private static boolean sameCodes(List<Warning> next, List<Warning> before) {
+        if (before == null || before.isEmpty() || next.size() != before.size()) {
+            return false;
+        }
+        for (int i = 0; i < next.size(); i++) {
+            if (!next.get(i).code().equals(before.get(i).code())) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static JTextArea line(String name, String text, Color colour) {

@@ -5,6 +5,7 @@ import barwright.model.TurnDirection;
 import barwright.ui.task.AnalysisOutcome;
 import barwright.ui.task.ResultsModel;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.sizing.WhileShown;
 
 import javax.swing.JButton;
 import javax.swing.JComboBox;
@@ -52,8 +53,10 @@ public final class TyrePage extends JPanel {
         top.add(fit);
         add(top, BorderLayout.NORTH);
         add(axles, BorderLayout.CENTER);
-        results.addListener(this::refresh);
-        view.addListener(this::refresh);
+        // redrawn only while on screen: a hidden page costs an edit nothing and catches up when it is shown
+        WhileShown whileShown = new WhileShown(this, this::refresh);
+        results.addListener(whileShown::request);
+        view.addListener(whileShown::request);
         refresh();
     }
 

@@ -35,9 +35,10 @@ public final class InsightScreenshots {
         });
         MainWindow window = holder.get();
         InsightPanel panel = InsightWindows.panel(window);
+        // the views compute only while on screen: shown first, so that the edit leaves the setting before dashed
+        SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedComponent(panel));
         InsightWindows.settle(window, panel);
         SwingUtilities.invokeAndWait(() -> {
-            window.tabs().setSelectedComponent(panel);
             window.document().edit(KeyPath.of("rear.bar.selectedArm"), IntNode.valueOf(0), null, null);
         });
         InsightWindows.settle(window, panel);

@@ -59,9 +59,10 @@ class InsightViewsTest {
         frame = new FrameFixture(robot, window);
         frame.show();
         panel = InsightWindows.panel(window);
-        InsightWindows.settle(window, panel);
-        // the results tabs scroll: the last tab may be out of view for a click, so it is chosen as a menu would
+        // the results tabs scroll: the last tab may be out of view for a click, so it is chosen as a menu would;
+        // the views compute only while on screen, so the panel is shown before waiting for them
         GuiActionRunner.execute(() -> window.tabs().setSelectedComponent(panel));
+        InsightWindows.settle(window, panel);
         robot.waitForIdle();
     }
 

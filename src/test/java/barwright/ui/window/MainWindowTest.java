@@ -4,6 +4,7 @@ import barwright.io.VehicleFileWriter;
 import barwright.loading.VehicleLoader;
 import barwright.physics.AnalysisResult;
 import barwright.physics.VehicleAnalysis;
+import barwright.report.ProgramVersion;
 import barwright.ui.action.Dialogs;
 import barwright.ui.document.Samples;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -141,6 +142,18 @@ class MainWindowTest {
         fixture.frame.toggleButton("units.si").click();
         fixture.robot.waitForIdle();
         assertThat(spring.text()).isEqualTo("70");
+    }
+
+    @Test
+    void aboutShowsTheVersionThatDashDashVersionPrintsTheJavaAndTheLicence() {
+        fixture.frame.menuItemWithPath("Help", "About Barwright").click();
+        fixture.robot.waitForIdle();
+        // the build writes the version from pom.xml; "unknown" would mean the test ran without it
+        assertThat(ProgramVersion.number()).isNotEqualTo("unknown");
+        assertThat(fixture.dialogs.information).singleElement().asString()
+                .startsWith("About Barwright: " + ProgramVersion.line() + "\n")
+                .contains("Java " + System.getProperty("java.version"))
+                .contains("MIT licence");
     }
 
     @Test
