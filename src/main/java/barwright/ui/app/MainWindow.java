@@ -178,6 +178,7 @@ public final class MainWindow extends JFrame {
         resultsSplit.setLayout(resultsLayout);
         resultsSplit.add(centre);
         resultsSplit.add(rightScroll);
+        tabs.addChangeListener(event -> resultsSplit.revalidate()); // the car picture needs more height than a chart
         JScrollPane resultsScroll = new JScrollPane(resultsSplit, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
                 JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         resultsScroll.setBorder(null);
@@ -201,8 +202,11 @@ public final class MainWindow extends JFrame {
      * size with its slider, and the warnings, at the present text size
      */
     private int chartsMinimumHeight() {
-        return tabs.pictureOverhead() + tabs.car().getMinimumSize().height
-                + warningsArea.getPreferredSize().height;
+        // a chart or a page has no words above its drawing to keep whole: the least drawing height will do, so
+        // that on a low window the chart, its legend and the warnings stay in view rather than scroll off
+        int picture = tabs.getSelectedIndex() <= 0 ? tabs.car().getMinimumSize().height
+                : barwright.ui.panel.CarBehindView.DRAWING_LEAST_HEIGHT;
+        return tabs.pictureOverhead() + picture + warningsArea.getPreferredSize().height;
     }
 
     /** @return the height of a line of text at the present text size (pixels) */

@@ -32,7 +32,7 @@ public final class CarBehindView extends JComponent {
     /** Body roll is a degree or two: it is drawn this many times larger so that it can be seen. */
     static final double ROLL_DRAWN_LARGER = 5;
     /** The least height of the drawing itself, car and columns (pixels): judged from screenshots at 1024x768. */
-    static final int DRAWING_LEAST_HEIGHT = 240;
+    public static final int DRAWING_LEAST_HEIGHT = 240;
     private static final String LEGEND_KEY = "columns: the load each tyre puts on the road";
     private final ResultsModel results;
     private final CorneringProbe probe;
@@ -437,7 +437,9 @@ public final class CarBehindView extends JComponent {
                                                              double centre, double rollCentre, boolean left,
                                                              int width) {
         double height = ascent + descent;
-        double y = rollCentre - height / 2;
+        // beside its dot, but above the ground line, clear of the load columns that hang below it
+        double ground = Math.max(car.tyres.get(0).getMaxY(), car.tyres.get(1).getMaxY());
+        double y = Math.min(rollCentre - height / 2, ground - 3 - height);
         RoundRectangle2D awayTyre = car.tyres.get(left ? 0 : 1);
         RoundRectangle2D otherTyre = car.tyres.get(left ? 1 : 0);
         java.awt.geom.Rectangle2D[] places = {

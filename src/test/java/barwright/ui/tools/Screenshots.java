@@ -92,6 +92,11 @@ public final class Screenshots {
             usUnits();
             presentation();
             sizingViews();
+            // the tyre page on the law tyre and on the fitted tyre, and the fit dialog on the shipped data
+            barwright.ui.tyre.TyreScreens.shoot(window, folder, "", (component, file) -> write(component,
+                    file.getFileName().toString().replace(".png", "")));
+            settle(500);
+            dynamicsPages();
             SwingUtilities.invokeAndWait(window::dispose);
         }
 
@@ -194,6 +199,27 @@ public final class Screenshots {
             settle(1500);
             write(frame.get().getRootPane(), "presentation");
             SwingUtilities.invokeAndWait(() -> frame.get().close());
+        }
+
+        /**
+         * The roll-in-motion pages again on the sample with dampers (invented; the club hatchback has none, so
+         * they show only why there is no run): this replaces the open car, so it comes last.
+         */
+        private void dynamicsPages() throws Exception {
+            SwingUtilities.invokeAndWait(() -> window.document().replace(barwright.ui.document.Samples.load(
+                    barwright.ui.document.Samples.ALL.get(barwright.ui.document.Samples.ALL.size() - 1)), null,
+                    "sample"));
+            settle(2000);
+            int count = onEdt(() -> window.tabs().getTabCount());
+            for (int tab = 0; tab < count; tab++) {
+                int index = tab;
+                String name = slug(onEdt(() -> window.tabs().getTitleAt(index)));
+                if (name.equals("dampers") || name.equals("turn-in") || name.equals("lap-replay")) {
+                    SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedIndex(index));
+                    settle(3000); // the run is worked out off the event thread
+                    write(window.getRootPane(), name);
+                }
+            }
         }
 
         /** Each view of the sizing window, at the window's size (on a screen of that size it can be no larger). */

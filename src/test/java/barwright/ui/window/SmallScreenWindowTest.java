@@ -152,7 +152,6 @@ class SmallScreenWindowTest {
                         : index <= 5 ? tabs.selectedChart().component() : (JComponent) tabs.getSelectedComponent();
                 int content = fixture.window.getContentPane().getHeight();
                 int visible = shown.getVisibleRect().height;
-                System.out.println("page " + tabs.getTitleAt(index) + ": " + visible + " of " + content + " px, window " + fixture.window.getSize());
                 return visible < 0.45 * content ? tabs.getTitleAt(index) + ": " + visible + " px shown of a "
                         + content + " px window" : null;
             });
