@@ -202,10 +202,11 @@ public final class MainWindow extends JFrame {
      * size with its slider, and the warnings, at the present text size
      */
     private int chartsMinimumHeight() {
-        // a chart or a page has no words above its drawing to keep whole: the least drawing height will do, so
-        // that on a low window the chart, its legend and the warnings stay in view rather than scroll off
+        // a chart or a page has no words above its drawing to keep whole: the least drawing height, or twelve
+        // lines of text where that is more (a chart's title, axes and legend grow with the text; below that the
+        // plot shrank to a sliver at 28 pt), so that the chart, its legend and the warnings stay in view
         int picture = tabs.getSelectedIndex() <= 0 ? tabs.car().getMinimumSize().height
-                : barwright.ui.panel.CarBehindView.DRAWING_LEAST_HEIGHT;
+                : Math.max(barwright.ui.panel.CarBehindView.DRAWING_LEAST_HEIGHT, 12 * lineHeight());
         return tabs.pictureOverhead() + picture + warningsArea.getPreferredSize().height;
     }
 
