@@ -35,15 +35,20 @@ final class BalanceWork {
                 new WorkValue("K_f", "front roll stiffness (springs, bar, tyres)", front, Quantity.ROLL_STIFFNESS),
                 new WorkValue("K_r", "rear roll stiffness (springs, bar, tyres)", rear, Quantity.ROLL_STIFFNESS)));
         List<Step> steps = new ArrayList<>();
-        steps.add(new Step("m_s g h'  (the roll moment of the body's own weight, per radian of roll)",
-                new WorkValue("m_s g h'", "gravity's roll moment per radian", masses.gravityRollMoment(),
+        steps.add(new Step("m_s g h'  (the roll moment of the body's own weight per unit of roll angle)",
+                new WorkValue("m_s g h'", "gravity's roll moment per unit of roll", masses.gravityRollMoment(),
                         Quantity.ROLL_STIFFNESS)));
         WorkValue gradient = new WorkValue("φ/a_y", "body roll per g", result.rollGradient(), Quantity.ROLL_GRADIENT);
-        String note = "Per g of lateral acceleration (g = 9.80665 m/s²). Without the tyres (springs and bars "
-                + "only) the same formula gives " + "the suspension roll gradient.";
+        String note = "Per g of lateral acceleration (g = 9.80665 m/s²): 1 g puts a roll moment m_s g h' on the "
+                + "body (N·m; in lbf·ft with the mass in lb), and over stiffnesses per degree the roll comes out in "
+                + "degrees. Without the tyres (springs and bars only) the same formula gives the suspension roll "
+                + "gradient.";
         Double chassis = result.vehicle().chassisTorsionalStiffness();
         if (chassis == null) {
-            return new Derivation("Roll gradient", "φ / a_y = m_s h' / (K_f + K_r − m_s g h')", inputs, steps,
+            // per g: 1 g of cornering puts a roll moment m_s g h' on the body (N·m, or lbf·ft with the mass in
+            // lb); over stiffnesses per degree it gives degrees
+            return new Derivation("Roll gradient", "φ / a_y = m_s g h' / (K_f + K_r − m_s g h'),   a_y = 1 g",
+                    inputs, steps,
                     gradient, ROLL_SOURCE, note);
         }
         inputs.add(new WorkValue("K_c", "body twist stiffness between the axles", chassis, Quantity.ROLL_STIFFNESS));
@@ -80,16 +85,18 @@ final class BalanceWork {
             inputs.add(new WorkValue("φ_" + s + "/a_y", "body roll at the " + word + " per g", roll,
                     Quantity.ROLL_GRADIENT));
             LoadTransferParts parts = result.axle(position).loadTransfer();
-            steps.add(new Step("m_u" + s + " h_u" + s + " / t_" + s, new WorkValue("ΔF_u" + s,
+            // per g of a_y: a mass m pushes sideways with m g (N; lbf with m in lb), so each part is N or lbf per g
+            steps.add(new Step("ΔF_u" + s + " = m_u" + s + " g h_u" + s + " / t_" + s, new WorkValue("ΔF_u" + s,
                     word + " unsprung part", parts.unsprung(), Quantity.FORCE_PER_G)));
-            steps.add(new Step("m_s" + s + " z_" + s + " / t_" + s, new WorkValue("ΔF_g" + s,
+            steps.add(new Step("ΔF_g" + s + " = m_s" + s + " g z_" + s + " / t_" + s, new WorkValue("ΔF_g" + s,
                     word + " geometric part (through the roll centre)", parts.geometric(), Quantity.FORCE_PER_G)));
-            steps.add(new Step("K_" + s + " φ_" + s + " / t_" + s, new WorkValue("ΔF_e" + s,
+            steps.add(new Step("ΔF_e" + s + " = K_" + s + " (φ_" + s + "/a_y) / t_" + s, new WorkValue("ΔF_e" + s,
                     word + " elastic part (through springs, bar, tyres)", parts.elastic(), Quantity.FORCE_PER_G)));
             steps.add(new Step("ΔF_" + s + " = ΔF_u" + s + " + ΔF_g" + s + " + ΔF_e" + s, new WorkValue("ΔF_" + s,
                     word + " load transfer", parts.total(), Quantity.FORCE_PER_G)));
         }
-        return new Derivation("Front share of lateral load transfer", "share = ΔF_f / (ΔF_f + ΔF_r)", inputs, steps,
+        return new Derivation("Front share of lateral load transfer",
+                "share = ΔF_f / (ΔF_f + ΔF_r),   each ΔF per g of lateral acceleration (g = 9.80665 m/s²)", inputs, steps,
                 new WorkValue("share", "front share of the load transfer", result.frontLoadTransferShare(),
                         Quantity.SHARE),
                 ROLL_SOURCE,

@@ -14,6 +14,9 @@ final class StiffnessWork {
             + "track, so a rate k gives k t² / 2 per side pair; springs in series add compliances. A standard "
             + "relation of vehicle dynamics (common practice).";
 
+    /** A roll stiffness from rates and a track is a moment per radian of roll; the figures show it per degree. */
+    static final String PER_RADIAN = "   (N·m or lbf·ft per radian of roll: × π/180 gives it per degree)";
+
     private StiffnessWork() {
     }
 
@@ -21,7 +24,7 @@ final class StiffnessWork {
         Axle axle = result.vehicle().axle(position);
         AxleStiffness stiffness = result.axle(position).stiffness();
         return new Derivation(capital(position) + " roll stiffness from the springs",
-                "K_spr = k_w t² / 2,   with the wheel rate k_w = k_s MR²",
+                "K_spr = k_w t² / 2,   with the wheel rate k_w = k_s MR²" + PER_RADIAN,
                 List.of(new WorkValue("k_s", "rate of one spring, at the spring", axle.springRate(), Quantity.LINEAR_RATE),
                         new WorkValue("MR", "spring motion ratio (spring travel / wheel travel)",
                                 axle.springMotionRatio(), Quantity.RATIO),
@@ -43,7 +46,7 @@ final class StiffnessWork {
         }
         double linkRate = result.axle(position).bar().linkRate();
         return new Derivation(capital(position) + " roll stiffness from the bar",
-                "K_bar = k_link r² t²",
+                "K_bar = k_link r² t²" + PER_RADIAN,
                 List.of(new WorkValue("k_link", "bar rate per unit of relative travel of its two link ends",
                                 linkRate, Quantity.LINEAR_RATE),
                         new WorkValue("r", "link motion ratio (link travel / wheel travel)",
@@ -60,7 +63,7 @@ final class StiffnessWork {
     static Derivation tyres(AnalysisResult result, AxlePosition position) {
         Axle axle = result.vehicle().axle(position);
         AxleStiffness stiffness = result.axle(position).stiffness();
-        return new Derivation(capital(position) + " roll stiffness of the tyres", "K_tyre = k_t t² / 2",
+        return new Derivation(capital(position) + " roll stiffness of the tyres", "K_tyre = k_t t² / 2" + PER_RADIAN,
                 List.of(new WorkValue("k_t", "vertical rate of one tyre", axle.tyreVerticalRate(),
                         Quantity.LINEAR_RATE), track(axle)),
                 List.of(),

@@ -82,7 +82,7 @@ final class TurnWork {
                         new WorkValue("s", "tyre grip change with load", tyreData.frictionLoadSensitivity(),
                                 Quantity.RATIO),
                         new WorkValue("F_z0", "tyre reference load", tyreData.nominalLoad(), Quantity.FORCE));
-        return new Derivation(title, "m_" + axle.key().charAt(0) + " a_y = μ(F_zo) F_zo + μ(F_zi) F_zi, solved for a_y",
+        return new Derivation(title, "share × m × a_y = μ(F_zo) F_zo + μ(F_zi) F_zi, solved for a_y (in g: a_y = capacity / (share m g))",
                 inputs,
                 List.of(new Step("F_zo = static load + load transfer at the limit", new WorkValue("F_zo",
                                 word + " outside wheel load at the limit", outside, Quantity.FORCE)),

@@ -58,6 +58,8 @@ public final class MainWindow extends JFrame {
      * the scroll bar and the borders.
      */
     static final int RESULTS_LEAST_WIDTH = 440;
+    /** The most of the window's width the editor takes when it is laid out to fit (the rest is the results'). */
+    static final double EDITOR_MOST_SHARE = 0.4;
     private final OpenDocument document;
     private final Settings settings;
     private final ViewSettings view;
@@ -176,6 +178,7 @@ public final class MainWindow extends JFrame {
         resultsSplit.setLayout(resultsLayout);
         resultsSplit.add(centre);
         resultsSplit.add(rightScroll);
+        tabs.addChangeListener(event -> resultsSplit.revalidate()); // the car picture needs more height than a chart
         JScrollPane resultsScroll = new JScrollPane(resultsSplit, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
                 JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         resultsScroll.setBorder(null);
@@ -199,8 +202,12 @@ public final class MainWindow extends JFrame {
      * size with its slider, and the warnings, at the present text size
      */
     private int chartsMinimumHeight() {
-        return tabs.pictureOverhead() + tabs.car().getMinimumSize().height
-                + warningsArea.getPreferredSize().height;
+        // a chart or a page has no words above its drawing to keep whole: the least drawing height, or twelve
+        // lines of text where that is more (a chart's title, axes and legend grow with the text; below that the
+        // plot shrank to a sliver at 28 pt), so that the chart, its legend and the warnings stay in view
+        int picture = tabs.getSelectedIndex() <= 0 ? tabs.car().getMinimumSize().height
+                : Math.max(barwright.ui.panel.CarBehindView.DRAWING_LEAST_HEIGHT, 12 * lineHeight());
+        return tabs.pictureOverhead() + picture + warningsArea.getPreferredSize().height;
     }
 
     /** @return the height of a line of text at the present text size (pixels) */
@@ -249,7 +256,10 @@ public final class MainWindow extends JFrame {
      */
     void fitEditor() {
         int wanted = Math.max(VehicleEditor.WIDTH * textScale() / 100, editor.neededWidth());
-        int allowed = Math.max(VehicleEditor.WIDTH, getWidth() - RESULTS_LEAST_WIDTH);
+        // and never more than EDITOR_MOST_SHARE of the window: on a projector at 1024x768 with a large text the
+        // charts and pages then keep some 600 px of width (the editor's labels go above their fields, Form)
+        int allowed = Math.max(VehicleEditor.WIDTH, Math.min(getWidth() - RESULTS_LEAST_WIDTH,
+                (int) Math.round(getWidth() * EDITOR_MOST_SHARE)));
         // where the editor at its usual width still leaves room for the figures beside the charts, keep them
         // there: the editor's labels then go above their fields (Form) rather than push the figures below
         // (at the system text size only: with larger text the figures go below on any screen this fits)

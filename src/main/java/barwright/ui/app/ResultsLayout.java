@@ -19,10 +19,11 @@ final class ResultsLayout implements LayoutManager {
     /** The narrowest the charts and the car picture may get before the figures move below (pixels): the car
      * picture's least width, 400, and its borders. */
     static final int CHARTS_MIN_WIDTH = 440;
-    /** The share of the height the figures take at most when below the charts. */
-    private static final double FIGURES_BELOW_SHARE = 0.42;
+    /** The share of the height the figures take at most when below the charts (the rest scrolls in their column):
+     * at 1024x768 the car picture then keeps 350 px at every text size. */
+    private static final double FIGURES_BELOW_SHARE = 0.36;
     /** The least height of the figures when below, in lines of text: a few rows, the rest scrolls. */
-    private static final int FIGURES_MIN_LINES = 6;
+    private static final int FIGURES_MIN_LINES = 5;
     private final Component charts;
     private final Component figures;
     private final IntSupplier chartsMinHeight;
@@ -54,6 +55,14 @@ final class ResultsLayout implements LayoutManager {
         return width - Math.min(figures.getPreferredSize().width, width) >= CHARTS_MIN_WIDTH;
     }
 
+    /**
+     * @return the height the charts get above their least before the figures below get more: two lines and a
+     * little (at 1024x768 the car picture then keeps 350 px at every text size)
+     */
+    private int spare() {
+        return 2 * lineHeight.getAsInt() + 10;
+    }
+
     private int figuresMinHeight() {
         return FIGURES_MIN_LINES * lineHeight.getAsInt();
     }
@@ -71,9 +80,10 @@ final class ResultsLayout implements LayoutManager {
         if (beside) {
             charts.setBounds(x, y, width - figuresWidth, height);
             figures.setBounds(x + width - figuresWidth, y, figuresWidth, height);
-        } else if (visibleHeight(parent) >= chartsLeast + figuresMinHeight()) {
+        } else if (visibleHeight(parent) >= chartsLeast + spare() + figuresMinHeight()) {
+            // the charts first: their least and two lines to spare, then the figures (their column scrolls)
             int below = Math.max(figuresMinHeight(),
-                    Math.min((int) Math.round(height * FIGURES_BELOW_SHARE), height - chartsLeast));
+                    Math.min((int) Math.round(height * FIGURES_BELOW_SHARE), height - chartsLeast - spare()));
             below = Math.max(0, Math.min(below, height - chartsLeast));
             charts.setBounds(x, y, width, height - below);
             figures.setBounds(x, y + height - below, width, below);

@@ -32,13 +32,32 @@ public final class CarBehindView extends JComponent {
     /** Body roll is a degree or two: it is drawn this many times larger so that it can be seen. */
     static final double ROLL_DRAWN_LARGER = 5;
     /** The least height of the drawing itself, car and columns (pixels): judged from screenshots at 1024x768. */
-    static final int DRAWING_LEAST_HEIGHT = 240;
+    public static final int DRAWING_LEAST_HEIGHT = 240;
     private static final String LEGEND_KEY = "columns: the load each tyre puts on the road";
     private final ResultsModel results;
     private final CorneringProbe probe;
     private final FigureFormat format;
     /** The figures written at the last paint, for the window tests. */
     private final List<String> drawnFigures = new ArrayList<>();
+    /** Where the tyres, the body and the labels were drawn at the last paint, for the tests. */
+    private Placement placed;
+
+    /**
+     * Where the parts of the picture were drawn (pixels).
+     *
+     * @param tyres          the left and the right tyre
+     * @param body           the rolled body's bounds
+     * @param forceLabel     the words "m·a_y, inertial force"
+     * @param rollCentreName the words "rear roll centre"
+     */
+    record Placement(List<java.awt.geom.Rectangle2D> tyres, java.awt.geom.Rectangle2D body,
+                     java.awt.geom.Rectangle2D forceLabel, java.awt.geom.Rectangle2D rollCentreName) {
+    }
+
+    /** @return where the parts were drawn at the last paint, or null before a result was drawn */
+    Placement placement() {
+        return placed;
+    }
 
     public CarBehindView(ResultsModel results, CorneringProbe probe, FigureFormat format) {
         this.results = results;
@@ -175,59 +194,87 @@ public final class CarBehindView extends JComponent {
         g.drawLine(10, ground, width - 10, ground);
 
         double halfTrack = result.vehicle().rear().track() / 2 * scale;
-        double tyreWidth = 0.21 * scale;
-        double tyreHeight = 0.6 * scale;
-        int lift = (int) Math.max(4, line * 0.5);
-        tyre(g, centre - halfTrack, ground - (leftLoadRear <= 0 ? lift : 0), tyreWidth, tyreHeight, text);
-        tyre(g, centre + halfTrack, ground - (rightLoadRear <= 0 ? lift : 0), tyreWidth, tyreHeight, text);
+        Font small = font.deriveFont(font.getSize2D() * 0.85f);
+        var labelMetrics = g.getFontMetrics(font);
+        var smallMetrics = g.getFontMetrics(small);
+        String force = "m·a_y, inertial force";
+        java.awt.geom.Rectangle2D forceLabel = null;
+        // the car as large as fits; where the force's label then finds no clear place beside or above the car,
+        // the car is drawn a step smaller (at most 8 steps, to 36 % of its size), leaving room above its roof
+        double largest = scale;
+        for (int attempt = 0; attempt <= 8 && forceLabel == null; attempt++) {
+            scale = largest * Math.pow(0.88, attempt);
+            halfTrack = result.vehicle().rear().track() / 2 * scale;
+            CarShape shape = shape(result, centre, ground, scale, line, roll, left, leftLoadRear <= 0,
+                    rightLoadRear <= 0);
+            forceLabel = forceLabelPlace(shape, labelMetrics.stringWidth(force), labelMetrics.getAscent(),
+                    labelMetrics.getDescent(), left, width, top, attempt == 8);
+        }
+        CarShape car = shape(result, centre, ground, scale, line, roll, left, leftLoadRear <= 0, rightLoadRear <= 0);
+        double tyreWidth = car.tyres.get(0).getWidth();
+        Color tyreFill = Palette.colour("Barwright.tyreFill", new Color(0x3A3A3A));
+        for (RoundRectangle2D tyre : car.tyres) {
+            g.setColor(tyreFill);
+            g.fill(tyre);
+            g.setColor(text);
+            g.draw(tyre);
+        }
 
         // the body, rolled about the rear roll centre toward the outside of the turn
-        double rollCentre = ground - result.vehicle().rear().rollCentreHeight() * scale;
-        AffineTransform saved = g.getTransform();
-        g.rotate((left ? 1 : -1) * roll * ROLL_DRAWN_LARGER, centre, rollCentre);
-        Path2D body = new Path2D.Double();
-        double bodyHalf = halfTrack - tyreWidth * 0.6;
-        double sill = ground - 0.42 * scale;
-        double waist = ground - 0.95 * scale;
-        double roof = ground - 1.32 * scale;
-        body.moveTo(centre - bodyHalf, sill);
-        body.lineTo(centre - bodyHalf, waist);
-        body.lineTo(centre - bodyHalf * 0.7, roof);
-        body.lineTo(centre + bodyHalf * 0.7, roof);
-        body.lineTo(centre + bodyHalf, waist);
-        body.lineTo(centre + bodyHalf, sill);
-        body.closePath();
+        double rollCentre = car.rollCentreY;
         g.setColor(Palette.colour("Barwright.bodyFill", new Color(0xDDE3EA)));
-        g.fill(body);
+        g.fill(car.body);
         g.setColor(text);
-        g.draw(body);
-        double cgY = ground - result.masses().sprungCgHeight() * scale;
-        g.fillOval((int) centre - 5, (int) cgY - 5, 10, 10);
-        g.setTransform(saved);
-        Font small = font.deriveFont(font.getSize2D() * 0.85f);
+        g.setStroke(new BasicStroke(1.5f));
+        g.draw(car.body);
+        double cgY = car.cg.getY();
+        double cgX = car.cg.getX();
+        g.fillOval((int) cgX - 5, (int) cgY - 5, 10, 10);
+        double bodyHalf = halfTrack - tyreWidth * 0.6;
         g.setFont(small);
         g.setColor(Palette.muted());
         g.fillOval((int) centre - 3, (int) rollCentre - 3, 6, 6);
-        // the roll centre's name on the side away from the arrow, so that the two never overlap
+        // the roll centre's name on the side away from the arrow, clear of the tyres and the body
         String rollCentreName = "rear roll centre";
-        int nameWidth = g.getFontMetrics().stringWidth(rollCentreName);
-        int nameX = (int) (left ? centre - 8 - nameWidth : centre + 8);
-        int nameY = (int) rollCentre + g.getFontMetrics().getAscent() / 2;
-        // on a light box, so that it reads over a tyre or the body on a small picture
+        java.awt.geom.Rectangle2D name = rollCentrePlace(car, smallMetrics.stringWidth(rollCentreName),
+                smallMetrics.getAscent(), smallMetrics.getDescent(), centre, rollCentre, left, width);
+        int nameX = (int) name.getX();
+        int nameY = (int) (name.getY() + smallMetrics.getAscent());
+        if (Math.abs(name.getCenterY() - rollCentre) > smallMetrics.getHeight()
+                || Math.abs(name.getCenterX() - centre) > name.getWidth() / 2 + 12) {
+            // moved away from its dot: a thin line leads back to it
+            g.setStroke(new BasicStroke(1f));
+            double toX = name.getCenterX() < centre ? name.getMaxX() : name.getX();
+            g.draw(new java.awt.geom.Line2D.Double(toX, name.getCenterY(), centre, rollCentre));
+        }
+        // on a light box, so that it reads over a column or the ground line
         g.setColor(Palette.colour("Panel.background", Color.WHITE));
-        g.fillRect(nameX - 2, nameY - g.getFontMetrics().getAscent(), nameWidth + 4, g.getFontMetrics().getHeight());
+        g.fillRect(nameX - 2, (int) name.getY(), (int) name.getWidth() + 4, (int) name.getHeight());
         g.setColor(Palette.muted());
         g.drawString(rollCentreName, nameX, nameY);
 
-        arrow(g, centre, cgY, (left ? 1 : -1) * bodyHalf * (0.3 + 0.5 * probe.fractionOfLimit()), text);
+        arrow(g, cgX, cgY, (left ? 1 : -1) * bodyHalf * (0.3 + 0.5 * probe.fractionOfLimit()), text);
         g.setFont(font);
         g.setColor(text);
-        // D'Alembert's inertial force on the sprung mass, pointing to the outside of the turn
-        String force = "m·a_y, inertial force";
-        int forceWidth = g.getFontMetrics().stringWidth(force);
-        double forceX = left ? centre + 12 : centre - 12 - forceWidth;
-        forceX = Math.max(4, Math.min(forceX, width - 4 - forceWidth));
-        g.drawString(force, (int) forceX, (int) cgY - 8);
+        // D'Alembert's inertial force on the sprung mass, pointing to the outside of the turn; its name clear of
+        // the body and the tyres, a thin line leading to the arrow where it stands away from it
+        if (forceLabel == null) {
+            forceLabel = new java.awt.geom.Rectangle2D.Double(left ? width - 4 - labelMetrics.stringWidth(force) : 4,
+                    top, labelMetrics.stringWidth(force), labelMetrics.getHeight());
+        }
+        double arrowMiddle = cgX + (left ? 1 : -1) * bodyHalf * (0.15 + 0.25 * probe.fractionOfLimit());
+        g.setStroke(new BasicStroke(1f));
+        g.setColor(Palette.muted());
+        double leadY = forceLabel.getMaxY() < cgY ? forceLabel.getMaxY() : forceLabel.getCenterY();
+        double leadX = Math.max(forceLabel.getX(), Math.min(arrowMiddle, forceLabel.getMaxX()));
+        if (forceLabel.getMaxY() >= cgY) {
+            leadX = forceLabel.getCenterX() < arrowMiddle ? forceLabel.getMaxX() : forceLabel.getX();
+        }
+        g.draw(new java.awt.geom.Line2D.Double(leadX, leadY, arrowMiddle, cgY - 3));
+        g.setColor(text);
+        g.drawString(force, (int) forceLabel.getX(), (int) (forceLabel.getY() + labelMetrics.getAscent()));
+        placed = new Placement(List.of(car.tyres.get(0).getBounds2D(), car.tyres.get(1).getBounds2D()),
+                car.body.getBounds2D(), forceLabel, name);
 
         double maxLoad = Math.max(Math.max(atLimit.frontOutside(), atLimit.rearOutside()), 1);
         double columnHeight = bottom - ground - line * 2.2;
@@ -293,13 +340,125 @@ public final class CarBehindView extends JComponent {
                 y + metrics.getHeight(), width);
     }
 
-    private static void tyre(Graphics2D g, double centreX, double bottom, double width, double height, Color text) {
-        RoundRectangle2D shape = new RoundRectangle2D.Double(centreX - width / 2, bottom - height, width, height,
-                width * 0.5, width * 0.5);
-        g.setColor(Palette.colour("Barwright.tyreFill", new Color(0x3A3A3A)));
-        g.fill(shape);
-        g.setColor(text);
-        g.draw(shape);
+    /** The car's outline at a scale: both tyres, the rolled body, its centre of mass and the roll centre. */
+    private static final class CarShape {
+        final List<RoundRectangle2D> tyres;
+        final java.awt.Shape body;
+        final java.awt.geom.Point2D cg;
+        final double rollCentreY;
+
+        CarShape(List<RoundRectangle2D> tyres, java.awt.Shape body, java.awt.geom.Point2D cg, double rollCentreY) {
+            this.tyres = tyres;
+            this.body = body;
+            this.cg = cg;
+            this.rollCentreY = rollCentreY;
+        }
+    }
+
+    private static CarShape shape(AnalysisResult result, double centre, int ground, double scale, int line,
+                                  double roll, boolean left, boolean leftLifted, boolean rightLifted) {
+        double halfTrack = result.vehicle().rear().track() / 2 * scale;
+        double tyreWidth = 0.21 * scale;
+        double tyreHeight = 0.6 * scale;
+        int lift = (int) Math.max(4, line * 0.5);
+        List<RoundRectangle2D> tyres = new ArrayList<>();
+        for (int side = -1; side <= 1; side += 2) {
+            double bottom = ground - ((side < 0 ? leftLifted : rightLifted) ? lift : 0);
+            tyres.add(new RoundRectangle2D.Double(centre + side * halfTrack - tyreWidth / 2, bottom - tyreHeight,
+                    tyreWidth, tyreHeight, tyreWidth * 0.5, tyreWidth * 0.5));
+        }
+        double rollCentre = ground - result.vehicle().rear().rollCentreHeight() * scale;
+        AffineTransform rolled = AffineTransform.getRotateInstance((left ? 1 : -1) * roll * ROLL_DRAWN_LARGER,
+                centre, rollCentre);
+        Path2D body = new Path2D.Double();
+        double bodyHalf = halfTrack - tyreWidth * 0.6;
+        double sill = ground - 0.42 * scale;
+        double waist = ground - 0.95 * scale;
+        double roof = ground - 1.32 * scale;
+        body.moveTo(centre - bodyHalf, sill);
+        body.lineTo(centre - bodyHalf, waist);
+        body.lineTo(centre - bodyHalf * 0.7, roof);
+        body.lineTo(centre + bodyHalf * 0.7, roof);
+        body.lineTo(centre + bodyHalf, waist);
+        body.lineTo(centre + bodyHalf, sill);
+        body.closePath();
+        double cgY = ground - result.masses().sprungCgHeight() * scale;
+        return new CarShape(tyres, rolled.createTransformedShape(body),
+                rolled.transform(new java.awt.geom.Point2D.Double(centre, cgY), null), rollCentre);
+    }
+
+    /** @return whether the words' box keeps a few pixels clear of both tyres and the body, inside the picture */
+    private static boolean clear(java.awt.geom.Rectangle2D words, CarShape car, int width, double top) {
+        java.awt.geom.Rectangle2D padded = new java.awt.geom.Rectangle2D.Double(words.getX() - 3, words.getY() - 3,
+                words.getWidth() + 6, words.getHeight() + 6);
+        if (words.getX() < 2 || words.getMaxX() > width - 2 || words.getY() < top) {
+            return false;
+        }
+        for (RoundRectangle2D tyre : car.tyres) {
+            if (tyre.getBounds2D().intersects(padded)) {
+                return false;
+            }
+        }
+        return !car.body.getBounds2D().intersects(padded); // its bounds: a margin about the rolled corners
+    }
+
+    /**
+     * @return a place for the force's name clear of the body and the tyres: above the roof on the outside of
+     * the turn, beside the outside tyre, or under the words at the top; null where none is clear (with
+     * {@code aboveRoof}, the roof's line is always taken: the car was drawn smaller to leave it)
+     */
+    private static java.awt.geom.Rectangle2D forceLabelPlace(CarShape car, int textWidth, int ascent, int descent,
+                                                             boolean left, int width, double top,
+                                                             boolean aboveRoof) {
+        java.awt.geom.Rectangle2D body = car.body.getBounds2D();
+        double height = ascent + descent;
+        double cgX = car.cg.getX();
+        double outsideX = left ? cgX + 12 : cgX - 12 - textWidth;
+        outsideX = Math.max(4, Math.min(outsideX, width - 4 - textWidth));
+        double roofY = body.getY() - 6 - height;
+        RoundRectangle2D outsideTyre = car.tyres.get(left ? 1 : 0);
+        double besideX = left ? outsideTyre.getMaxX() + 8 : outsideTyre.getX() - 8 - textWidth;
+        java.awt.geom.Rectangle2D[] places = {
+                new java.awt.geom.Rectangle2D.Double(outsideX, roofY, textWidth, height),
+                new java.awt.geom.Rectangle2D.Double(besideX, car.cg.getY() - height - 4, textWidth, height),
+                new java.awt.geom.Rectangle2D.Double(outsideX, top, textWidth, height)};
+        for (java.awt.geom.Rectangle2D place : places) {
+            if (clear(place, car, width, top)) {
+                return place;
+            }
+        }
+        return aboveRoof ? new java.awt.geom.Rectangle2D.Double(outsideX, Math.max(top, roofY), textWidth, height)
+                : null;
+    }
+
+    /**
+     * @return a place for the roll centre's name: beside its dot on the side away from the arrow, or beyond the
+     * tyre on that side, or beyond the other tyre, or under the ground line; the first clear of the tyres and
+     * the body
+     */
+    private static java.awt.geom.Rectangle2D rollCentrePlace(CarShape car, int textWidth, int ascent, int descent,
+                                                             double centre, double rollCentre, boolean left,
+                                                             int width) {
+        double height = ascent + descent;
+        // beside its dot, but above the ground line, clear of the load columns that hang below it
+        double ground = Math.max(car.tyres.get(0).getMaxY(), car.tyres.get(1).getMaxY());
+        double y = Math.min(rollCentre - height / 2, ground - 3 - height);
+        RoundRectangle2D awayTyre = car.tyres.get(left ? 0 : 1);
+        RoundRectangle2D otherTyre = car.tyres.get(left ? 1 : 0);
+        java.awt.geom.Rectangle2D[] places = {
+                new java.awt.geom.Rectangle2D.Double(left ? centre - 8 - textWidth : centre + 8, y, textWidth, height),
+                new java.awt.geom.Rectangle2D.Double(left ? awayTyre.getX() - 8 - textWidth : awayTyre.getMaxX() + 8,
+                        y, textWidth, height),
+                new java.awt.geom.Rectangle2D.Double(left ? otherTyre.getMaxX() + 8 : otherTyre.getX() - 8 - textWidth,
+                        y, textWidth, height)};
+        for (java.awt.geom.Rectangle2D place : places) {
+            if (clear(place, car, width, 0)) {
+                return place;
+            }
+        }
+        double lowest = Math.max(car.tyres.get(0).getMaxY(), car.tyres.get(1).getMaxY());
+        return new java.awt.geom.Rectangle2D.Double(Math.max(4, Math.min(centre - textWidth / 2.0,
+                width - 4 - textWidth)), lowest + 4, textWidth, height);
     }
 
     private static void arrow(Graphics2D g, double x, double y, double length, Color colour) {

@@ -99,7 +99,7 @@ final class Form extends PagePanel {
             return super.getMinimumSize().width;
         }
         place(false);
-        int width = super.getMinimumSize().width;
+        int width = getLayout().minimumLayoutSize(this).width; // not the cached size: the other constraints'
         place(true);
         return width;
     }
@@ -113,7 +113,7 @@ final class Form extends PagePanel {
             return super.getMinimumSize().width;
         }
         place(true);
-        int width = super.getMinimumSize().width;
+        int width = getLayout().minimumLayoutSize(this).width; // not the cached size: the other constraints'
         place(false);
         return width;
     }

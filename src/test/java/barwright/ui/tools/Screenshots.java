@@ -3,21 +3,39 @@ package barwright.ui.tools;
 import barwright.ui.action.Settings;
 import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
+import barwright.ui.app.Themes;
+import barwright.ui.present.PresentationFrame;
+import barwright.ui.present.PresentationViews;
+import barwright.units.UnitSystem;
 
 import javax.imageio.ImageIO;
+import javax.swing.AbstractButton;
 import javax.swing.JComponent;
+import javax.swing.JTabbedPane;
 import javax.swing.SwingUtilities;
+import java.awt.Component;
+import java.awt.Container;
+import java.awt.Rectangle;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.concurrent.atomic.AtomicReference;
 
 /**
- * Writes screenshots of the main views to docs/images/ (used in the README). Run under a display, e.g.
- * {@code xvfb-run -a -s "-screen 0 1280x1024x24" mvn -B -q test-compile exec:java
- * -Dexec.classpathScope=test -Dexec.mainClass=barwright.ui.tools.Screenshots}. Arguments, all optional: the
- * folder, the theme (light or dark), the text size in points, the window size (e.g. 1024x768).
+ * Writes a screenshot of every view, in the light and the dark theme, to one folder: the six results tabs,
+ * each page the other parts of the program add to them (each of a page's own tabs), the editor's pages, the
+ * show-the-work dialog, presentation mode and each view of the sizing window. Files are named
+ * {@code <set>-<view>-<theme>.png}, e.g. {@code small-wheel-loads-dark.png}. Run under a display, from the
+ * test classpath:
+ * <pre>
+ * xvfb-run -a -s "-screen 0 1280x1024x24" mvn -B -q test-compile exec:java -Dexec.classpathScope=test \
+ *     -Dexec.mainClass=barwright.ui.tools.Screenshots -Dexec.args="docs/images small 1024x768 28"
+ * </pre>
+ * Arguments, all optional: the folder (docs/images), the set's name (small), the window size (1024x768; the
+ * sizing window and presentation mode take the same size, as on a screen of that size), the text size in
+ * points (the largest offered; 0 for the system's).
  */
 public final class Screenshots {
     private Screenshots() {
@@ -25,119 +43,287 @@ public final class Screenshots {
 
     public static void main(String[] args) throws Exception {
         Path folder = Path.of(args.length > 0 ? args[0] : "docs/images");
+        String set = args.length > 1 ? args[1] : "small";
+        String[] size = (args.length > 2 ? args[2] : "1024x768").split("x");
+        int textSize = args.length > 3 ? Integer.parseInt(args[3]) : Themes.largestTextSize();
         Files.createDirectories(folder);
-        Settings settings = Settings.inMemory();
-        if (args.length > 1) {
-            settings.put("theme", args[1]);
+        for (String theme : new String[]{"light", "dark"}) {
+            new Shooter(folder, set, theme, Integer.parseInt(size[0]), Integer.parseInt(size[1]), textSize).all();
         }
-        if (args.length > 2) {
-            settings.put("textSize", args[2]);
-        }
-        AtomicReference<MainWindow> holder = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            MainWindow window = DesktopApp.open(settings, () -> { });
-            window.setLocation(0, 0);
-            window.setSize(size(args, 0), size(args, 1));
-            holder.set(window);
-        });
-        MainWindow window = holder.get();
-        settle(window);
-        String suffix = (args.length > 1 ? "-" + args[1] : "") + (args.length > 2 ? "-text" + args[2] : "")
-                + (args.length > 3 ? "-" + args[3] : "");
-        String[] names = {"car-from-behind", "wheel-loads", "body-roll", "load-transfer-parts", "handling", "bar-sweep"};
-        for (int tab = 0; tab < names.length; tab++) {
-            int index = tab;
-            SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedIndex(index));
-            settle(window);
-            write(window.getRootPane(), folder.resolve("main-" + names[tab] + suffix + ".png"));
-        }
-        // the linkage page on the built-in sample's strut front (ui.linkage)
-        SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedComponent(
-                window.contribution(barwright.ui.linkage.LinkageViews.class).page()));
-        settle(window);
-        write(window.getRootPane(), folder.resolve("main-linkage" + suffix + ".png"));
-        SwingUtilities.invokeAndWait(() -> {
-            window.tabs().setSelectedIndex(0);
-            window.editor().setSelectedIndex(2);
-        });
-        settle(window);
-        write(window.getRootPane(), folder.resolve("main-front-bar" + suffix + ".png"));
-
-        // the front bar's fatigue life on the default lap, scrolled into view (worked out off the event thread)
-        SwingUtilities.invokeAndWait(() -> {
-            JComponent life = (JComponent) find(window, "front.bar.life");
-            life.scrollRectToVisible(new java.awt.Rectangle(0, life.getHeight() - 1, life.getWidth(), 1));
-        });
-        Thread.sleep(2000);
-        settle(window);
-        write(window.getRootPane(), folder.resolve("bar-fatigue-life" + suffix + ".png"));
-
-        // the working behind the front share, as an instructor opens it
-        SwingUtilities.invokeAndWait(() -> ((javax.swing.AbstractButton) find(window, "figure.frontShare")).doClick());
-        settle(window);
-        write(dialog("work.dialog"), folder.resolve("show-the-work" + suffix + ".png"));
-        SwingUtilities.invokeAndWait(() -> javax.swing.SwingUtilities.getWindowAncestor(dialog("work.dialog")).dispose());
-
-        // a refused tube wall: the field is marked, the results are out of date
-        SwingUtilities.invokeAndWait(() -> window.editor().setSelectedIndex(4));
-        settle(window);
-        SwingUtilities.invokeAndWait(() -> ((javax.swing.JTextField) find(window, "rear.bar.section.wallMm")).setText("14"));
-        settle(window);
-        write(window.getRootPane(), folder.resolve("refused-value" + suffix + ".png"));
-        SwingUtilities.invokeAndWait(() -> window.document().undo());
-        settle(window);
-
-        // tube or solid: each tube's fatigue life beside its mass and stress
-        SwingUtilities.invokeAndWait(() -> menuItem(window.getJMenuBar(), "Tube or solid bar of the same rate…").doClick());
-        settle(window);
-        SwingUtilities.invokeAndWait(() -> ((javax.swing.AbstractButton) find(dialog("sizing.window"), "tubes.find")).doClick());
-        for (int i = 0; i < 300; i++) {
-            boolean[] found = new boolean[1];
-            SwingUtilities.invokeAndWait(() -> found[0] = ((javax.swing.JTable) find(dialog("sizing.window"),
-                    "tubes.results")).getRowCount() > 0);
-            if (found[0]) {
-                break;
-            }
-            Thread.sleep(100);
-        }
-        Thread.sleep(300);
-        write(dialog("sizing.window"), folder.resolve("tube-or-solid-life" + suffix + ".png"));
-        SwingUtilities.invokeAndWait(() -> SwingUtilities.getWindowAncestor(dialog("sizing.window")).setVisible(false));
-
-        // US customary units and a larger text for a projector
-        SwingUtilities.invokeAndWait(() -> {
-            window.setUnits(barwright.units.UnitSystem.US);
-            window.editor().setSelectedIndex(1);
-            window.tabs().setSelectedIndex(1);
-        });
-        settle(window);
-        write(window.getRootPane(), folder.resolve("us-units" + suffix + ".png"));
-        SwingUtilities.invokeAndWait(() -> window.setUnits(barwright.units.UnitSystem.SI));
-        settle(window);
-
-        // the tyre page (law tyre, then the fitted tyre on both axles) and the fit dialog on the shipped data
-        barwright.ui.tyre.TyreScreens.shoot(window, folder, suffix, Screenshots::write);
-
-        // the roll in motion: dampers, turn-in and lap on the dampers sample (this replaces the open car, so last)
-        SwingUtilities.invokeAndWait(() -> window.setUnits(barwright.units.UnitSystem.SI));
-        barwright.ui.dynamics.DynamicsScreenshots.capture(window, folder, suffix);
-        SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
     }
 
-    /** @return the window's width (part 0) or height (part 1) from a fourth argument such as "1024x768" */
-    private static int size(String[] args, int part) {
-        String[] given = (args.length > 3 ? args[3] : "1280x880").split("x");
-        return Integer.parseInt(given[part]);
+    /** One theme's screenshots, from a window of its own. */
+    private static final class Shooter {
+        private final Path folder;
+        private final String set;
+        private final String theme;
+        private final int width;
+        private final int height;
+        private final int textSize;
+        private MainWindow window;
+
+        Shooter(Path folder, String set, String theme, int width, int height, int textSize) {
+            this.folder = folder;
+            this.set = set;
+            this.theme = theme;
+            this.width = width;
+            this.height = height;
+            this.textSize = textSize;
+        }
+
+        void all() throws Exception {
+            Settings settings = Settings.inMemory();
+            settings.put("theme", theme);
+            settings.put("textSize", Integer.toString(textSize));
+            AtomicReference<MainWindow> holder = new AtomicReference<>();
+            SwingUtilities.invokeAndWait(() -> {
+                MainWindow opened = DesktopApp.open(settings, () -> { });
+                opened.setLocation(0, 0);
+                opened.setSize(width, height);
+                holder.set(opened);
+            });
+            window = holder.get();
+            settle(1000);
+            resultsTabs();
+            editorPages();
+            workDialogs();
+            refusedValue();
+            usUnits();
+            presentation();
+            sizingViews();
+            // the tyre page on the law tyre and on the fitted tyre, and the fit dialog on the shipped data
+            barwright.ui.tyre.TyreScreens.shoot(window, folder, "", (component, file) -> write(component,
+                    file.getFileName().toString().replace(".png", "")));
+            settle(500);
+            dynamicsPages();
+            SwingUtilities.invokeAndWait(window::dispose);
+        }
+
+        /** The car picture, the five charts and each contributed page (each of its own tabs, if it has any). */
+        private void resultsTabs() throws Exception {
+            int count = onEdt(() -> window.tabs().getTabCount());
+            for (int tab = 0; tab < count; tab++) {
+                int index = tab;
+                SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedIndex(index));
+                settle(index > 5 ? 1500 : 300); // a contributed page may work its figures out off the event thread
+                String name = slug(onEdt(() -> window.tabs().getTitleAt(index)));
+                JTabbedPane inner = onEdt(() -> innerTabs((Container) window.tabs().getSelectedComponent()));
+                if (inner == null) {
+                    write(window.getRootPane(), name);
+                    continue;
+                }
+                int pages = onEdt(inner::getTabCount);
+                for (int page = 0; page < pages; page++) {
+                    int innerIndex = page;
+                    SwingUtilities.invokeAndWait(() -> inner.setSelectedIndex(innerIndex));
+                    settle(800);
+                    write(window.getRootPane(), name + "-" + slug(onEdt(() -> inner.getTitleAt(innerIndex))));
+                }
+                SwingUtilities.invokeAndWait(() -> inner.setSelectedIndex(0));
+            }
+            SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedIndex(0));
+            settle(300);
+        }
+
+        /** Each page of the editor, and the front bar's fatigue life scrolled into view. */
+        private void editorPages() throws Exception {
+            int count = onEdt(() -> window.editor().getTabCount());
+            for (int page = 0; page < count; page++) {
+                int index = page;
+                SwingUtilities.invokeAndWait(() -> window.editor().setSelectedIndex(index));
+                settle(300);
+                write(window.getRootPane(), "editor-" + slug(onEdt(() -> window.editor().getTitleAt(index))));
+            }
+            SwingUtilities.invokeAndWait(() -> window.editor().setSelectedIndex(2));
+            settle(300);
+            SwingUtilities.invokeAndWait(() -> {
+                JComponent life = (JComponent) find(window, "front.bar.life");
+                life.scrollRectToVisible(new Rectangle(0, 0, life.getWidth(), life.getHeight()));
+            });
+            settle(2000); // the life on the default lap is worked out off the event thread
+            write(window.getRootPane(), "editor-front-bar-life");
+            SwingUtilities.invokeAndWait(() -> window.editor().setSelectedIndex(0));
+        }
+
+        /** The working behind the front share and behind the front roll stiffness, as an instructor opens it. */
+        private void workDialogs() throws Exception {
+            for (String[] figure : new String[][]{{"figure.frontShare", "front-share"},
+                    {"figure.rollStiffness.axle.front", "front-roll-stiffness"}}) {
+                SwingUtilities.invokeAndWait(() -> ((AbstractButton) find(window, figure[0])).doClick());
+                settle(300);
+                write(dialog("work.dialog"), "show-the-work-" + figure[1]);
+                SwingUtilities.invokeAndWait(() -> SwingUtilities.getWindowAncestor(dialog("work.dialog")).dispose());
+            }
+        }
+
+        /** A refused tube wall: the field is marked, the results are out of date. */
+        private void refusedValue() throws Exception {
+            SwingUtilities.invokeAndWait(() -> window.editor().setSelectedIndex(4));
+            settle(300);
+            javax.swing.JTextField wall = (javax.swing.JTextField) find(window, "rear.bar.section.wallMm");
+            String kept = onEdt(wall::getText);
+            SwingUtilities.invokeAndWait(() -> wall.setText("14"));
+            settle(500);
+            write(window.getRootPane(), "refused-value");
+            SwingUtilities.invokeAndWait(() -> wall.setText(kept));
+            settle(500);
+        }
+
+        /** US customary units on the front axle page and the wheel loads. */
+        private void usUnits() throws Exception {
+            SwingUtilities.invokeAndWait(() -> {
+                window.setUnits(UnitSystem.US);
+                window.editor().setSelectedIndex(1);
+                window.tabs().setSelectedIndex(1);
+            });
+            settle(500);
+            write(window.getRootPane(), "us-units");
+            SwingUtilities.invokeAndWait(() -> {
+                window.setUnits(UnitSystem.SI);
+                window.editor().setSelectedIndex(0);
+                window.tabs().setSelectedIndex(0);
+            });
+            settle(300);
+        }
+
+        /** Presentation mode over a screen of the window's size, the setup pinned. */
+        private void presentation() throws Exception {
+            AtomicReference<PresentationFrame> frame = new AtomicReference<>();
+            SwingUtilities.invokeAndWait(() -> {
+                PresentationFrame shown = window.contribution(PresentationViews.class).toggle();
+                shown.setBounds(0, 0, width, height);
+                shown.togglePin();
+                frame.set(shown);
+            });
+            settle(1500);
+            write(frame.get().getRootPane(), "presentation");
+            SwingUtilities.invokeAndWait(() -> frame.get().close());
+        }
+
+        /**
+         * The roll-in-motion pages again on the sample with dampers (invented; the club hatchback has none, so
+         * they show only why there is no run): this replaces the open car, so it comes last.
+         */
+        private void dynamicsPages() throws Exception {
+            SwingUtilities.invokeAndWait(() -> window.document().replace(barwright.ui.document.Samples.load(
+                    barwright.ui.document.Samples.ALL.get(barwright.ui.document.Samples.ALL.size() - 1)), null,
+                    "sample"));
+            settle(2000);
+            int count = onEdt(() -> window.tabs().getTabCount());
+            for (int tab = 0; tab < count; tab++) {
+                int index = tab;
+                String name = slug(onEdt(() -> window.tabs().getTitleAt(index)));
+                if (name.equals("dampers") || name.equals("turn-in") || name.equals("lap-replay")) {
+                    SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedIndex(index));
+                    settle(3000); // the run is worked out off the event thread
+                    write(window.getRootPane(), name);
+                }
+            }
+        }
+
+        /** Each view of the sizing window, at the window's size (on a screen of that size it can be no larger). */
+        private void sizingViews() throws Exception {
+            SwingUtilities.invokeAndWait(() -> menuItem(window.getJMenuBar(), "Size a bar to a target…").doClick());
+            settle(500);
+            SwingUtilities.invokeAndWait(() -> {
+                java.awt.Window sizing = SwingUtilities.getWindowAncestor(dialog("sizing.window"));
+                sizing.setBounds(0, 0, width, height);
+                sizing.validate();
+            });
+            JTabbedPane tabs = (JTabbedPane) find(dialog("sizing.window"), "sizing.tabs");
+            int count = onEdt(tabs::getTabCount);
+            for (int tab = 0; tab < count; tab++) {
+                int index = tab;
+                SwingUtilities.invokeAndWait(() -> tabs.setSelectedIndex(index));
+                settle(800);
+                Component found = find(dialog("sizing.window"), "tubes.find");
+                if (found instanceof AbstractButton button && button.isShowing()) {
+                    SwingUtilities.invokeAndWait(button::doClick);
+                    waitForRows("tubes.results");
+                }
+                write(dialog("sizing.window"), "sizing-" + slug(onEdt(() -> tabs.getTitleAt(index))));
+            }
+            SwingUtilities.invokeAndWait(() -> SwingUtilities.getWindowAncestor(dialog("sizing.window"))
+                    .setVisible(false));
+        }
+
+        private void waitForRows(String table) throws Exception {
+            for (int i = 0; i < 300; i++) {
+                boolean found = onEdt(() -> ((javax.swing.JTable) find(dialog("sizing.window"), table))
+                        .getRowCount() > 0);
+                if (found) {
+                    break;
+                }
+                Thread.sleep(100);
+            }
+            Thread.sleep(300);
+        }
+
+        private void settle(long extra) throws Exception {
+            for (int i = 0; i < 300; i++) {
+                if (onEdt(() -> window.analysis().isIdle() && window.results().shown() != null)) {
+                    break;
+                }
+                Thread.sleep(20);
+            }
+            SwingUtilities.invokeAndWait(() -> { });
+            Thread.sleep(extra);
+            SwingUtilities.invokeAndWait(() -> { });
+        }
+
+        private void write(JComponent component, String view) throws Exception {
+            Screenshots.write(component, folder.resolve(set + "-" + view + "-" + theme + ".png"));
+        }
     }
 
-    private static java.awt.Component find(java.awt.Container root, String name) {
-        for (java.awt.Component child : root.getComponents()) {
+    /** @return the first tabbed pane inside the page, or null where it has none */
+    private static JTabbedPane innerTabs(Container page) {
+        if (page instanceof JTabbedPane tabs) {
+            return tabs;
+        }
+        for (Component child : page.getComponents()) {
+            if (child instanceof JTabbedPane tabs) {
+                return tabs;
+            }
+            if (child instanceof Container container) {
+                JTabbedPane found = innerTabs(container);
+                if (found != null) {
+                    return found;
+                }
+            }
+        }
+        return null;
+    }
+
+    /** @return the title in lower case with hyphens: "Lift, balance, chassis" gives "lift-balance-chassis" */
+    static String slug(String title) {
+        return title.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
+    }
+
+    private static <T> T onEdt(java.util.concurrent.Callable<T> task) throws Exception {
+        AtomicReference<T> value = new AtomicReference<>();
+        AtomicReference<Exception> failed = new AtomicReference<>();
+        SwingUtilities.invokeAndWait(() -> {
+            try {
+                value.set(task.call());
+            } catch (Exception e) {
+                failed.set(e);
+            }
+        });
+        if (failed.get() != null) {
+            throw failed.get();
+        }
+        return value.get();
+    }
+
+    static Component find(Container root, String name) {
+        for (Component child : root.getComponents()) {
             if (name.equals(child.getName())) {
                 return child;
             }
-            if (child instanceof java.awt.Container container) {
-                java.awt.Component found = find(container, name);
+            if (child instanceof Container container) {
+                Component found = find(container, name);
                 if (found != null) {
                     return found;
                 }
@@ -165,19 +351,6 @@ public final class Screenshots {
             }
         }
         throw new IllegalStateException("no open window " + name);
-    }
-
-    private static void settle(MainWindow window) throws Exception {
-        for (int i = 0; i < 200; i++) {
-            boolean[] idle = new boolean[1];
-            SwingUtilities.invokeAndWait(() -> idle[0] = window.analysis().isIdle() && window.results().shown() != null);
-            if (idle[0]) {
-                break;
-            }
-            Thread.sleep(20);
-        }
-        SwingUtilities.invokeAndWait(() -> { });
-        Thread.sleep(200);
     }
 
     public static void write(JComponent component, Path file) throws Exception {

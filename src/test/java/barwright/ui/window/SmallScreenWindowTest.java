@@ -129,6 +129,39 @@ class SmallScreenWindowTest {
         }
     }
 
+    /**
+     * At 1024x768 with the largest text every results page (the car picture, the five charts and each page
+     * another part of the program adds) shows at least 45 % of the window's content height of picture or chart
+     * on screen: the part of it not scrolled out of view (judged usable from the screenshots; at about 180 px,
+     * 25 %, the charts could not be read).
+     */
+    @Test
+    void atTheLargestTextOnA1024By768ScreenEveryResultsPageShowsItsPictureAtAUsableHeight() {
+        fixture = new WindowFixture(1024, 768, Themes.largestTextSize());
+        List<String> faults = new ArrayList<>();
+        int pages = GuiActionRunner.execute(() -> fixture.window.tabs().getTabCount());
+        assertThat(pages).isGreaterThan(6); // the car, the five charts and the contributed pages
+        for (int page = 0; page < pages; page++) {
+            int index = page;
+            GuiActionRunner.execute(() -> fixture.window.tabs().setSelectedIndex(index));
+            fixture.settle();
+            String fault = GuiActionRunner.execute(() -> {
+                fixture.window.validate();
+                var tabs = fixture.window.tabs();
+                JComponent shown = index == 0 ? tabs.car()
+                        : index <= 5 ? tabs.selectedChart().component() : (JComponent) tabs.getSelectedComponent();
+                int content = fixture.window.getContentPane().getHeight();
+                int visible = shown.getVisibleRect().height;
+                return visible < 0.45 * content ? tabs.getTitleAt(index) + ": " + visible + " px shown of a "
+                        + content + " px window" : null;
+            });
+            if (fault != null) {
+                faults.add(fault);
+            }
+        }
+        assertThat(faults).isEmpty();
+    }
+
     @Test
     void onAWideScreenAtTheSystemTextTheFiguresStayBesideTheCharts() {
         fixture = new WindowFixture(1280, 880, 0);

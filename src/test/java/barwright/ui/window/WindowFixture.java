@@ -51,7 +51,9 @@ public final class WindowFixture implements AutoCloseable {
             return created;
         });
         frame = new FrameFixture(robot, window);
-        frame.show();
+        // at the size asked for: show() alone packs the window to its preferred size (1679 x 2248 px at the
+        // largest text), which no screen of the size under test would give
+        frame.show(new java.awt.Dimension(width, height));
         settle();
     }
 
