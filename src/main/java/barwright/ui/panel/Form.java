@@ -131,7 +131,10 @@ final class Form extends PagePanel {
         if (narrow != stacked) {
             stacked = narrow;
             place(stacked);
-            revalidate(); // the form's height changes: the scroll pane asks again
+            // the form's height changes, so the scroll pane must ask again; not now: a revalidate() inside this
+            // layout pass is lost, as the pass marks the parents valid when it ends, and one validate() could
+            // leave the form at its old height. Asked once the pass is over, it takes.
+            javax.swing.SwingUtilities.invokeLater(this::revalidate);
         }
         super.doLayout();
     }
