@@ -133,6 +133,7 @@ public final class ChartStyle {
         panel.setMinimumDrawHeight(150);
         panel.setMaximumDrawWidth(4000);
         panel.setMaximumDrawHeight(3000);
+        VerticalAxisLabels.fitAfterEachDrawing(panel);
         return panel;
     }
 
