@@ -112,7 +112,7 @@ final class SearchView extends JPanel {
      *         than two lines), so that with large text on a small screen the words above and under the table
      *         scroll rather than squeeze the table out of sight
      */
-    private static JScrollPane capped(JComponent text, JComponent column, int percent) {
+    static JScrollPane capped(JComponent text, JComponent column, int percent) {
         JScrollPane scroll = new JScrollPane(text, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
                 JScrollPane.HORIZONTAL_SCROLLBAR_NEVER) {
             @Override
