@@ -4,17 +4,22 @@ import org.jfree.chart.ChartPanel;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.Axis;
 import org.jfree.chart.block.BlockBorder;
+import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.plot.CategoryPlot;
+import org.jfree.chart.plot.Marker;
 import org.jfree.chart.plot.Plot;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.Layer;
 
 import javax.swing.UIManager;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * Dresses a chart in the window's theme: its background, text colour and text size, so that charts follow
@@ -54,9 +59,7 @@ public final class ChartStyle {
         Color background = colour("Panel.background", Color.WHITE);
         Color text = colour("Label.foreground", Color.BLACK);
         Color grid = colour("Barwright.chart.grid", new Color(0xCCCCCC));
-        Font base = UIManager.getFont("defaultFont") != null ? UIManager.getFont("defaultFont")
-                : UIManager.getFont("Label.font");
-        float size = base == null ? 13f : base.getSize2D();
+        float size = baseSize();
         chart.setBackgroundPaint(background);
         chart.setAntiAlias(true);
         TextTitle title = chart.getTitle();
@@ -79,7 +82,7 @@ public final class ChartStyle {
         plot.setBackgroundPaint(colour("Barwright.chart.plotBackground", background));
         plot.setOutlinePaint(grid);
         Font axisFont = new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size));
-        Font tickFont = new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size * 0.9f));
+        Font tickFont = labelFont();
         if (plot instanceof XYPlot xy) {
             xyPlot(xy, grid, text, axisFont, tickFont);
             if (plot instanceof org.jfree.chart.plot.CombinedDomainXYPlot combined) {
@@ -88,8 +91,10 @@ public final class ChartStyle {
                     part.setBackgroundPaint(colour("Barwright.chart.plotBackground", background));
                     part.setOutlinePaint(grid);
                     xyPlot(part, grid, text, axisFont, tickFont);
+                    labels(part);
                 }
             }
+            labels(xy);
         } else if (plot instanceof CategoryPlot category) {
             category.setRangeGridlinePaint(grid);
             axis(category.getDomainAxis(), text, axisFont, tickFont);
@@ -137,11 +142,48 @@ public final class ChartStyle {
         return panel;
     }
 
-    /** @return the font for marker and annotation labels: the theme's text size, a little smaller */
+    /**
+     * @return the font for marker and annotation labels, the size of the axes' tick labels (the window's text
+     *         size, a little smaller): words on the plot grow with the text-size setting as the axes do
+     */
     public static Font labelFont() {
+        return new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(baseSize() * 0.9f));
+    }
+
+    /** @return the window's text size in points (the theme's default font), 13 where there is none */
+    private static float baseSize() {
         Font base = UIManager.getFont("defaultFont") != null ? UIManager.getFont("defaultFont")
                 : UIManager.getFont("Label.font");
-        return new Font(Font.SANS_SERIF, Font.PLAIN, Math.round((base == null ? 13f : base.getSize2D()) * 0.85f));
+        return base == null ? 13f : base.getSize2D();
+    }
+
+    /**
+     * Gives the labels already on a plot (its markers' and its text annotations') the label font, keeping their
+     * style (bold stays bold); labels added later take {@link #labelFont()} where they are made.
+     */
+    private static void labels(XYPlot plot) {
+        Font font = labelFont();
+        List<Marker> markers = new ArrayList<>();
+        for (Layer layer : new Layer[]{Layer.FOREGROUND, Layer.BACKGROUND}) {
+            addAll(markers, plot.getDomainMarkers(layer));
+            addAll(markers, plot.getRangeMarkers(layer));
+        }
+        for (Marker marker : markers) {
+            marker.setLabelFont(font.deriveFont(marker.getLabelFont().getStyle()));
+        }
+        for (Object annotation : plot.getAnnotations()) {
+            if (annotation instanceof XYTextAnnotation words) {
+                words.setFont(font.deriveFont(words.getFont().getStyle()));
+            }
+        }
+    }
+
+    private static void addAll(List<Marker> into, java.util.Collection<?> markers) {
+        if (markers != null) {
+            for (Object marker : markers) {
+                into.add((Marker) marker);
+            }
+        }
     }
 
     public static Color text() {

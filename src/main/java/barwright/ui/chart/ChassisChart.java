@@ -127,6 +127,7 @@ public final class ChassisChart {
         ValueMarker marker = new ValueMarker(value, ChartStyle.series(1), new BasicStroke(1.2f, BasicStroke.CAP_BUTT,
                 BasicStroke.JOIN_MITER, 1f, new float[]{4f, 4f}, 0f));
         marker.setLabel(label);
+        marker.setLabelFont(ChartStyle.labelFont());
         marker.setLabelPaint(ChartStyle.text());
         marker.setLabelBackgroundColor(new Color(0, 0, 0, 0));
         marker.setLabelAnchor(RectangleAnchor.LEFT);
@@ -137,6 +138,7 @@ public final class ChassisChart {
     private static ValueMarker upright(double at, String label, Color colour, RectangleAnchor anchor, TextAnchor text) {
         ValueMarker marker = new ValueMarker(at, colour, new BasicStroke(1.5f));
         marker.setLabel(label);
+        marker.setLabelFont(ChartStyle.labelFont());
         marker.setLabelPaint(colour);
         marker.setLabelBackgroundColor(new Color(0, 0, 0, 0));
         marker.setLabelAnchor(anchor);

@@ -188,7 +188,7 @@ public final class EnvelopeChart {
         double low = current.mostBraking() / STANDARD_GRAVITY;
         double high = current.mostAcceleration() / STANDARD_GRAVITY;
         plot.getRangeAxis().setRange(low - 0.05, high + 0.12);
-        Font font = new Font(Font.SANS_SERIF, Font.BOLD, 11);
+        Font font = ChartStyle.labelFont().deriveFont(Font.BOLD);
         XYTextAnnotation leftTurn = new XYTextAnnotation("← turning left", -reach * 0.55, high + 0.06);
         XYTextAnnotation rightTurn = new XYTextAnnotation("turning right →", reach * 0.55, high + 0.06);
         for (XYTextAnnotation label : new XYTextAnnotation[]{leftTurn, rightTurn}) {
@@ -203,6 +203,7 @@ public final class EnvelopeChart {
                 BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[]{4f, 3f}, 0f));
         marker.setLabel(String.format(java.util.Locale.ROOT, "limit %.2f g", Math.abs(at)));
         marker.setLabelPaint(ChartStyle.series(4));
+        marker.setLabelFont(ChartStyle.labelFont());
         marker.setLabelBackgroundColor(new java.awt.Color(0, 0, 0, 0));
         marker.setLabelAnchor(anchor == RectangleAnchor.TOP_LEFT ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.BOTTOM_LEFT);
         marker.setLabelTextAnchor(text == TextAnchor.TOP_RIGHT ? TextAnchor.BOTTOM_LEFT : TextAnchor.BOTTOM_RIGHT);

@@ -77,6 +77,7 @@ public final class HandlingChart extends ResultChart {
         marker.setLabel(String.format(view.locale(), "%s %.3f g", label, Axes.shown(accel, Quantity.ACCELERATION,
                 view)));
         marker.setLabelPaint(colour);
+        marker.setLabelFont(ChartStyle.labelFont());
         boolean front = label.startsWith("front");
         marker.setLabelAnchor(front ? RectangleAnchor.TOP_LEFT : RectangleAnchor.BOTTOM_LEFT);
         marker.setLabelTextAnchor(front ? TextAnchor.TOP_RIGHT : TextAnchor.BOTTOM_RIGHT);

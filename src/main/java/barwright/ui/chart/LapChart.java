@@ -47,6 +47,7 @@ public final class LapChart {
         limit.setPaint(ChartStyle.series(2));
         limit.setStroke(TimeCharts.DASHED);
         limit.setLabel("the axle's limit");
+        limit.setLabelFont(ChartStyle.labelFont());
         gripPlot.addRangeMarker(limit);
         chart = new JFreeChart("Open a lap log to replay it", JFreeChart.DEFAULT_TITLE_FONT, plot, true);
         ChartStyle.apply(chart);

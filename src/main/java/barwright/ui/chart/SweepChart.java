@@ -142,6 +142,7 @@ public final class SweepChart extends ResultChart {
         if (label != null) {
             marker.setLabel(label);
             marker.setLabelPaint(ChartStyle.text());
+            marker.setLabelFont(ChartStyle.labelFont());
             marker.setLabelAnchor(anchor);
             marker.setLabelTextAnchor(textAnchor);
         }

@@ -94,6 +94,7 @@ public final class WheelLoadChart extends ResultChart {
                     "inside %s lifts at %.2f g", axle, x), x, 0, -Math.PI / 4);
             mark.setTextAnchor(TextAnchor.BOTTOM_RIGHT);
             mark.setPaint(ChartStyle.text());
+            mark.setFont(ChartStyle.labelFont());
             mark.setArrowPaint(ChartStyle.text());
             plot.addAnnotation(mark);
         }

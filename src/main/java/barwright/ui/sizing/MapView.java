@@ -18,7 +18,6 @@ import javax.swing.SwingConstants;
 import java.awt.BorderLayout;
 import java.awt.Component;
 import java.awt.Dimension;
-import java.awt.FlowLayout;
 import java.awt.GridBagConstraints;
 import java.awt.GridBagLayout;
 import java.awt.Insets;
@@ -86,19 +85,21 @@ final class MapView extends JPanel {
         reference.setVisible(false);
         reference.unitLabel().setVisible(false);
 
-        JPanel top = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 4));
+        JPanel top = new JPanel(new WrappingFlow(6, 4)); // wraps onto a second line with large text
         top.add(new JLabel("Tint the cells by their front share against"));
         top.add(centre);
         top.add(reference);
         top.add(reference.unitLabel());
-        JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        JPanel buttons = new JPanel(new WrappingFlow(6, 2));
         buttons.add(useHoles);
         buttons.add(csv);
         buttons.add(sheet);
         JPanel under = new JPanel(new BorderLayout());
         legend.setName("map.legend");
+        // new words show from their start: setting them moves no scroll pane to their end
+        ((javax.swing.text.DefaultCaret) legend.getCaret()).setUpdatePolicy(javax.swing.text.DefaultCaret.NEVER_UPDATE);
         legend.setBorder(BorderFactory.createEmptyBorder(2, 8, 2, 8));
-        under.add(legend, BorderLayout.NORTH);
+        under.add(SearchView.capped(legend, this, 22), BorderLayout.NORTH); // scrolls: the map keeps its room
         under.add(buttons, BorderLayout.CENTER);
         under.add(work, BorderLayout.SOUTH);
         grid.setName("map.grid");

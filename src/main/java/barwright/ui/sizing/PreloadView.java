@@ -19,6 +19,7 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import java.awt.BorderLayout;
 import java.awt.Font;
+import java.util.List;
 import java.util.function.ToDoubleFunction;
 
 /**
@@ -27,8 +28,8 @@ import java.util.function.ToDoubleFunction;
  * again off the event thread whenever the car or a setting changes. Event thread.
  */
 final class PreloadView extends JPanel {
-    static final String[] COLUMNS = {"Wheel", "Load with the link neutral", "Change per unit of link length",
-        "Load with the link changed"};
+    /** Short headers (each column's tooltip says it in full): all four in view with the largest text. */
+    static final String[] COLUMNS = {"Wheel", "Load, link neutral", "Change per length", "Load, link changed"};
     private final SizingContext context;
     private final FigureFormat format;
     private final JComboBox<String> axle = new JComboBox<>(new String[]{"front bar", "rear bar"});
@@ -57,6 +58,10 @@ final class PreloadView extends JPanel {
         words.setName("preload.words");
         cross.setName("preload.cross");
         words.setFont(words.getFont().deriveFont(Font.BOLD));
+        for (WrappingText text : List.of(words, cross)) {
+            // new words show from their start: setting them moves no scroll pane to their end
+            ((javax.swing.text.DefaultCaret) text.getCaret()).setUpdatePolicy(javax.swing.text.DefaultCaret.NEVER_UPDATE);
+        }
 
         Rows settings = new Rows();
         settings.heading("The link you change");
@@ -76,9 +81,24 @@ final class PreloadView extends JPanel {
             "Corner load with the link changed by the length given"}, new int[]{120, 200, 220, 200});
         Rows results = new Rows();
         results.across(words);
-        JScrollPane scroll = new JScrollPane(table);
-        scroll.setPreferredSize(new java.awt.Dimension(600, 24 + 4 * 22));
-        scroll.setMinimumSize(scroll.getPreferredSize());
+        table.fitColumnsToTexts(); // each column as wide as its header and figures: no name or figure cut
+        JScrollPane scroll = new JScrollPane(table) {
+            @Override
+            public java.awt.Dimension getPreferredSize() {
+                // the header and the four corners in full at any text size, with room for a sideways scroll bar
+                java.awt.Insets insets = getInsets();
+                int height = table.getTableHeader().getPreferredSize().height + 4 * table.getRowHeight()
+                        + getHorizontalScrollBar().getPreferredSize().height + insets.top + insets.bottom;
+                // no wider than the page: the words around it wrap at the page's width, the table scrolls sideways
+                return new java.awt.Dimension(Math.min(table.getPreferredSize().width, 300) + insets.left
+                        + insets.right, height);
+            }
+
+            @Override
+            public java.awt.Dimension getMinimumSize() {
+                return getPreferredSize();
+            }
+        };
         results.across(scroll);
         results.across(cross);
         results.across(advice);

@@ -92,20 +92,8 @@ final class SearchView extends JPanel {
         under.add(buttons, BorderLayout.CENTER);
         under.add(applied, BorderLayout.SOUTH);
         results.add(under, BorderLayout.SOUTH);
-        JScrollPane formScroll = new JScrollPane(form) {
-            @Override
-            public Dimension getPreferredSize() {
-                // as wide as the settings' own text needs (it grows with the text size), never under 390 px
-                int scrollBar = getVerticalScrollBar().getPreferredSize().width;
-                int width = Math.max(390, form.getPreferredSize().width + scrollBar + getInsets().left
-                        + getInsets().right);
-                return new Dimension(width, 500);
-            }
-        };
-        formScroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
-        formScroll.getVerticalScrollBar().setUnitIncrement(16);
         JPanel left = new JPanel(new BorderLayout());
-        left.add(formScroll, BorderLayout.CENTER);
+        left.add(SettingsBeside.settingsScroll(form, 500), BorderLayout.CENTER);
         JPanel run = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 4));
         run.add(form.searchButton()); // outside the scrolled settings: always in view
         left.add(run, BorderLayout.SOUTH);
@@ -124,7 +112,7 @@ final class SearchView extends JPanel {
      *         than two lines), so that with large text on a small screen the words above and under the table
      *         scroll rather than squeeze the table out of sight
      */
-    private static JScrollPane capped(JComponent text, JComponent column, int percent) {
+    static JScrollPane capped(JComponent text, JComponent column, int percent) {
         JScrollPane scroll = new JScrollPane(text, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
                 JScrollPane.HORIZONTAL_SCROLLBAR_NEVER) {
             @Override

@@ -2,9 +2,11 @@ package barwright.ui.sizing;
 
 import javax.swing.JComponent;
 import javax.swing.JPanel;
+import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
 import java.awt.BorderLayout;
+import java.awt.Dimension;
 import java.awt.event.ComponentAdapter;
 import java.awt.event.ComponentEvent;
 
@@ -39,6 +41,25 @@ final class SettingsBeside extends JPanel {
             }
         });
         arrange();
+    }
+
+    /**
+     * @return the settings in a scroll pane as wide as their own text needs (it grows with the text size), never
+     *         under 390 px, scrolling up and down only
+     */
+    static JScrollPane settingsScroll(JComponent form, int height) {
+        JScrollPane scroll = new JScrollPane(form) {
+            @Override
+            public Dimension getPreferredSize() {
+                int scrollBar = getVerticalScrollBar().getPreferredSize().width;
+                int width = Math.max(390, form.getPreferredSize().width + scrollBar + getInsets().left
+                        + getInsets().right);
+                return new Dimension(width, height);
+            }
+        };
+        scroll.setHorizontalScrollBarPolicy(JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
+        scroll.getVerticalScrollBar().setUnitIncrement(16);
+        return scroll;
     }
 
     /** @return true where the settings and the results are two tabs */

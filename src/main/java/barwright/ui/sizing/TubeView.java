@@ -38,14 +38,23 @@ import java.util.List;
  * chosen tube can be put in the car as one undoable edit. Event thread.
  */
 final class TubeView extends JPanel {
-    /** What a choice turns on first (mass, what it saves, safety, life), then how the rate and stress compare. */
-    static final String[] COLUMNS = {"Tube", "Material", "Mass", "Mass saved", "Safety", "Fatigue life",
+    /**
+     * The tube, then what a choice turns on (mass, safety, life: in view even on a small screen with large text), then
+     * its material, what it saves and how the rate and stress compare.
+     */
+    static final String[] COLUMNS = {"Tube", "Mass", "Safety", "Fatigue life", "Material", "Mass saved",
         "Rate vs solid", "Link rate", "Stress", "Stress vs solid"};
-    static final String[] HELP = {"The tube as the catalogue names it", "The tube's material", "The tube's mass",
-        "The solid bar's mass less the tube's, and as a share of the solid's",
+    static final int MASS = 1;
+    static final int SAFETY = 2;
+    static final int LIFE = 3;
+    static final int MATERIAL = 4;
+    static final int RATE_DIFFERENCE = 6;
+    static final String[] HELP = {"The tube as the catalogue names it", "The tube's mass",
         "Static safety factor against yield at the check travel",
         "Laps to failure on the default lap (invented: 12 corners up to 1.2 g), the tube in the car; "
                 + "\"no damage\": no cycle reaches the endurance limit",
+        "The tube's material",
+        "The solid bar's mass less the tube's, and as a share of the solid's",
         "The tube's rate over the solid bar's, less one",
         "Force per unit of relative link travel at the same hole",
         "Largest von Mises stress at the check travel",
@@ -66,6 +75,8 @@ final class TubeView extends JPanel {
     private final Rows rows = new Rows();
     private final Model model = new Model();
     private final FigureTable table;
+    /** The settings beside the results, or the two as tabs where the window is narrow for its text. */
+    private final SettingsBeside layout;
     private Found shown;
 
     /** A finished match, with where it was made. */
@@ -91,7 +102,7 @@ final class TubeView extends JPanel {
         which.add(own);
         which.add(given);
         FigureTable figures = new FigureTable("tubes.results", model, HELP,
-                new int[]{90, 90, 50, 80, 50, 80, 70, 70, 70, 70});
+                new int[]{90, 50, 50, 80, 90, 80, 70, 70, 70, 70});
         figures.fitColumnsToTexts(); // short headers, each column as wide as its texts: the safety factor in view
         table = figures;
         table.getSelectionModel().addListSelectionListener(event -> refreshApply());
@@ -110,11 +121,10 @@ final class TubeView extends JPanel {
         rows.across(new JLabel("<html><small>Equal rate: within 2 % of the solid bar's.</small></html>"));
         rows.end();
         JPanel left = new JPanel(new BorderLayout());
-        left.add(new JScrollPane(rows), BorderLayout.CENTER);
+        left.add(SettingsBeside.settingsScroll(rows, 400), BorderLayout.CENTER);
         JPanel run = new JPanel(new FlowLayout(FlowLayout.RIGHT, 8, 4));
-        run.add(find);
+        run.add(find); // outside the scrolled settings: always in view
         left.add(run, BorderLayout.SOUTH);
-        left.setPreferredSize(new Dimension(390, 400));
 
         JPanel results = new JPanel(new BorderLayout(0, 4));
         results.setBorder(BorderFactory.createEmptyBorder(6, 8, 4, 8));
@@ -128,8 +138,8 @@ final class TubeView extends JPanel {
         under.add(buttons, BorderLayout.CENTER);
         under.add(applied, BorderLayout.SOUTH);
         results.add(under, BorderLayout.SOUTH);
-        add(left, BorderLayout.WEST);
-        add(results, BorderLayout.CENTER);
+        layout = new SettingsBeside("tubes", left, results);
+        add(layout, BorderLayout.CENTER);
         add(work, BorderLayout.SOUTH);
         axle.addActionListener(event -> describeOwn());
         context.document().addListener(this::documentChanged);
@@ -210,6 +220,7 @@ final class TubeView extends JPanel {
         }, found -> {
             shown = found;
             model.fireTableDataChanged();
+            layout.showResults();
             if (model.getRowCount() > 0) {
                 table.setRowSelectionInterval(0, 0);
             }
@@ -262,6 +273,11 @@ final class TubeView extends JPanel {
         apply.setEnabled(table.getSelectedRow() >= 0 && stillApplies());
     }
 
+    /** @return true where the settings and the results are two tabs (a narrow window for its text) */
+    boolean settingsAndResultsTabbed() {
+        return layout.tabbed();
+    }
+
     WorkStrip work() {
         return work;
     }
@@ -292,13 +308,13 @@ final class TubeView extends JPanel {
             var locale = context.view().locale();
             return switch (column) {
                 case 0 -> match.size().label();
-                case 1 -> match.material().name();
-                case 2 -> format.text(match.mass(), Quantity.MASS);
-                case 3 -> format.text(match.massSaved(), Quantity.MASS)
+                case MASS -> format.text(match.mass(), Quantity.MASS);
+                case SAFETY -> format.factor(match.safetyFactor());
+                case LIFE -> TubeOutput.lifeText(shown.lives().tubes().get(row));
+                case MATERIAL -> match.material().name();
+                case 5 -> format.text(match.massSaved(), Quantity.MASS)
                         + String.format(locale, " (%.0f %%)", 100 * match.massSaved() / solidBar.mass());
-                case 4 -> format.factor(match.safetyFactor());
-                case 5 -> TubeOutput.lifeText(shown.lives().tubes().get(row));
-                case 6 -> String.format(locale, "%+.1f %%", match.rateDifference() * 100);
+                case RATE_DIFFERENCE -> String.format(locale, "%+.1f %%", match.rateDifference() * 100);
                 case 7 -> format.text(match.linkRate(), Quantity.LINEAR_RATE);
                 case 8 -> format.text(match.maxStress(), Quantity.STRESS);
                 default -> String.format(locale, "%+.0f %%", 100 * (match.maxStress() / solidBar.maxVonMisesStress() - 1));

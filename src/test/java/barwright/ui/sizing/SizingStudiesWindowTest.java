@@ -98,14 +98,14 @@ class SizingStudiesWindowTest {
         // each tube's fatigue life on the default lap, as the core gives it (sizing.TubeLivesTest checks the core)
         TubeLives lives = TubeLives.of(car, AxlePosition.FRONT, core, defaultLap());
         for (int row = 0; row < core.matches().size(); row++) {
-            assertThat(table.valueAt(TableCell.row(row).column(5))).isEqualTo(TubeOutput.lifeText(lives.tubes().get(row)));
+            assertThat(table.valueAt(TableCell.row(row).column(TubeView.LIFE))).isEqualTo(TubeOutput.lifeText(lives.tubes().get(row)));
         }
         for (int row = 0; row < core.matches().size(); row++) {
             TubeMatch match = core.matches().get(row);
             assertThat(table.valueAt(TableCell.row(row).column(0))).isEqualTo(match.size().label());
-            assertThat(table.valueAt(TableCell.row(row).column(1))).isEqualTo(match.material().name());
+            assertThat(table.valueAt(TableCell.row(row).column(TubeView.MATERIAL))).isEqualTo(match.material().name());
             // within the 2 % the issue calls equal rate, as the table says it
-            assertThat(Math.abs(number(table.valueAt(TableCell.row(row).column(6))))).isLessThanOrEqualTo(2.0);
+            assertThat(Math.abs(number(table.valueAt(TableCell.row(row).column(TubeView.RATE_DIFFERENCE))))).isLessThanOrEqualTo(2.0);
         }
         assertThat(GuiActionRunner.execute(view::solidText)).contains("22.0 mm").contains("spring steel");
 
