@@ -81,7 +81,7 @@ public final class PresentationFrame extends JFrame {
     private final JPanel figures = new JPanel();
     private final List<QuickControl> controls = new ArrayList<>();
     private final JButton pin = new JButton("Pin this setup");
-    /** The presenter's controls, at the window's text: the room reads the figures and the picture. */
+    /** The presenter's controls, at the middle text size: the room reads the figures and the picture. */
     private final JComponent controlsPanel;
     /** The caution stays at the window's text size: it is read up close, not from the back of the room. */
     private final WrappingText caution = new WrappingText(Cautions.SHORT);
@@ -159,12 +159,15 @@ public final class PresentationFrame extends JFrame {
         return base.deriveFont((float) Math.floor(wanted));
     }
 
-    /** Large text everywhere but on the tabs' titles and the caution, which are read up close. */
+    /**
+     * Large text on the figures and the picture; a middle size on the figures' names, the tabs' titles and the
+     * presenter's controls; the window's own on the caution, which is read up close.
+     */
     private void applyFonts() {
         enlarge(getContentPane());
-        views.setFont(base);
+        views.setFont(nameFont());
         caution.setFont(base);
-        setFontUnder(controlsPanel, base);
+        setFontUnder(controlsPanel, nameFont());
         setFontUnder(figures, large);
         for (Component name : figures.getComponents()) {
             if ("presentation.figure.name".equals(name.getName())) {
