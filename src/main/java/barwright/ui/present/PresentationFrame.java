@@ -152,7 +152,8 @@ public final class PresentationFrame extends JFrame {
     /** The large text for the window's height now (before it is shown: 1.6 times the window's text). */
     private Font fittedLarge() {
         float wanted = base.getSize2D() * TEXT_SCALE;
-        int height = getContentPane().getHeight();
+        // the frame's own height less its frame (its content pane is laid out only after it is resized)
+        int height = getHeight() - getInsets().top - getInsets().bottom;
         if (height > 0) {
             wanted = Math.max(base.getSize2D(), Math.min(wanted, (float) height / LINES_HIGH));
         }
