@@ -15,9 +15,17 @@ final class BeforeAfter {
     private BeforeAfter() {
     }
 
+    /** One figure: its name, shown above its value ("before -> after" where a setup is pinned). */
+    record Figure(String name, String value) {
+        /** @return the figure on one line, "name: value" */
+        String line() {
+            return name + ": " + value;
+        }
+    }
+
     /** @param pinned the pinned setup's analysis, or null: then the figures of now alone */
-    static List<String> lines(AnalysisResult pinned, AnalysisResult now, TurnDirection turn, FigureFormat format) {
-        List<String> lines = new ArrayList<>();
+    static List<Figure> lines(AnalysisResult pinned, AnalysisResult now, TurnDirection turn, FigureFormat format) {
+        List<Figure> lines = new ArrayList<>();
         lines.add(line("Front share", pinned == null ? null : percent(pinned.frontLoadTransferShare()),
                 percent(now.frontLoadTransferShare())));
         lines.add(line("Roll gradient", pinned == null ? null : format.text(pinned.rollGradient(), Quantity.ROLL_GRADIENT),
@@ -38,7 +46,7 @@ final class BeforeAfter {
         return String.format(Locale.ROOT, "%.1f %%", share * 100);
     }
 
-    private static String line(String what, String before, String after) {
-        return before == null ? what + ": " + after : what + ": " + before + " \u2192 " + after;
+    private static Figure line(String what, String before, String after) {
+        return new Figure(what, before == null ? after : before + " \u2192 " + after);
     }
 }

@@ -15,6 +15,7 @@ import barwright.ui.document.OpenDocument;
 import barwright.ui.field.ViewSettings;
 import barwright.ui.panel.CarBehindView;
 import barwright.ui.panel.FigureFormat;
+import barwright.ui.panel.WrappingText;
 import barwright.ui.task.AnalysisOutcome;
 import barwright.ui.task.CorneringProbe;
 import barwright.ui.task.ResultsModel;
@@ -22,12 +23,14 @@ import barwright.units.Quantity;
 
 import javax.swing.AbstractAction;
 import javax.swing.BorderFactory;
+import javax.swing.BoxLayout;
 import javax.swing.JButton;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
+import javax.swing.JScrollPane;
 import javax.swing.JSlider;
 import javax.swing.JTabbedPane;
 import javax.swing.KeyStroke;
@@ -39,8 +42,13 @@ import java.awt.Container;
 import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
+import java.awt.GridBagConstraints;
+import java.awt.GridBagLayout;
 import java.awt.GridLayout;
+import java.awt.Insets;
 import java.awt.event.ActionEvent;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
 import java.awt.event.KeyEvent;
 import java.util.ArrayList;
 import java.util.List;
@@ -54,8 +62,13 @@ import java.util.function.Function;
  * the figures and the charts. F11 or Escape goes back to the main window. Event thread.
  */
 public final class PresentationFrame extends JFrame {
-    /** Text this many times the window's, for the back of a classroom. */
+    /**
+     * Text this many times the window's, for the back of a classroom, but no taller than a {@link #LINES_HIGH}th
+     * of the screen (never smaller than the window's own): the largest text on a 1024x768 projector would
+     * otherwise leave the picture no room.
+     */
     static final float TEXT_SCALE = 1.6f;
+    static final int LINES_HIGH = 26;
     private static final List<String> CHART_TITLES = List.of("Handling", "Body roll", "Inside wheel loads");
     private final OpenDocument document;
     private final ViewSettings view;
@@ -64,15 +77,19 @@ public final class PresentationFrame extends JFrame {
     private final CorneringProbe probe = new CorneringProbe();
     private final JPanel pictures = new JPanel(new GridLayout(1, 2, 12, 0));
     private final JTabbedPane views = new JTabbedPane();
-    private final JPanel figures = new JPanel(new GridLayout(0, 2, 24, 2));
+    /** The figures' column beside the picture: each name over its value; it takes the width it needs. */
+    private final JPanel figures = new JPanel();
     private final List<QuickControl> controls = new ArrayList<>();
     private final JButton pin = new JButton("Pin this setup");
+    /** The presenter's controls, at the middle text size: the room reads the figures and the picture. */
+    private final JComponent controlsPanel;
     /** The caution stays at the window's text size: it is read up close, not from the back of the room. */
-    private final JLabel caution = new JLabel();
+    private final WrappingText caution = new WrappingText(Cautions.SHORT);
     private final Runnable resultsChanged = this::refresh;
     private final Runnable unitsChanged = this::unitsChanged;
     private final Consumer<DocumentEvent> documentChanged = event -> refreshControls();
-    private final Font large;
+    private final Font base;
+    private Font large;
     private ResultsModel pinned;
 
     public PresentationFrame(OpenDocument document, ViewSettings view, ResultsModel results) {
@@ -82,31 +99,48 @@ public final class PresentationFrame extends JFrame {
         this.view = view;
         this.results = results;
         this.format = new FigureFormat(view);
-        Font base = UIManager.getFont("defaultFont") != null ? UIManager.getFont("defaultFont")
+        base = UIManager.getFont("defaultFont") != null ? UIManager.getFont("defaultFont")
                 : UIManager.getFont("Label.font");
         large = base.deriveFont(base.getSize2D() * TEXT_SCALE);
 
+        controlsPanel = controls();
         views.setName("presentation.views");
         views.addTab("Car from behind", pictures);
         for (String title : CHART_TITLES) {
             views.addTab(title, new JPanel());
         }
         views.addChangeListener(event -> refreshCharts());
-        JPanel top = new JPanel(new BorderLayout(8, 4));
         figures.setName("presentation.figures");
-        top.add(figures, BorderLayout.CENTER);
-        caution.setText("<html>" + Cautions.SHORT + "</html>");
-        top.add(caution, BorderLayout.SOUTH);
-        top.setBorder(BorderFactory.createEmptyBorder(8, 12, 4, 12));
+        figures.setLayout(new BoxLayout(figures, BoxLayout.Y_AXIS));
+        figures.setBorder(BorderFactory.createEmptyBorder(4, 12, 4, 12));
+        caution.setName("presentation.caution");
+        caution.setBorder(BorderFactory.createEmptyBorder(4, 12, 4, 12));
 
-        JPanel content = new JPanel(new BorderLayout(8, 8));
-        content.add(top, BorderLayout.NORTH);
-        content.add(views, BorderLayout.CENTER);
-        content.add(controls(), BorderLayout.SOUTH);
+        // the figures' column beside the picture takes the width it needs, the picture the rest; the controls
+        // and the caution run under them both
+        JPanel middle = new JPanel(new BorderLayout(8, 0));
+        middle.add(views, BorderLayout.CENTER);
+        middle.add(figures, BorderLayout.EAST);
+        JPanel bottom = new JPanel(new BorderLayout());
+        bottom.add(controlsPanel, BorderLayout.CENTER);
+        bottom.add(scrolledWhereShort(caution), BorderLayout.SOUTH);
+        JPanel content = new JPanel(new BorderLayout(8, 4));
+        content.add(middle, BorderLayout.CENTER);
+        content.add(bottom, BorderLayout.SOUTH);
         setContentPane(content);
         bindKeys(content);
-        enlarge(content);
-        caution.setFont(base);
+        applyFonts();
+        addComponentListener(new ComponentAdapter() {
+            @Override
+            public void componentResized(ComponentEvent event) {
+                Font fitted = fittedLarge();
+                if (fitted.getSize2D() != large.getSize2D()) {
+                    large = fitted;
+                    applyFonts();
+                    refresh();
+                }
+            }
+        });
 
         results.addListener(resultsChanged);
         view.addListener(unitsChanged);
@@ -115,8 +149,64 @@ public final class PresentationFrame extends JFrame {
         refresh();
     }
 
+    /** The large text for the window's height now (before it is shown: 1.6 times the window's text). */
+    private Font fittedLarge() {
+        float wanted = base.getSize2D() * TEXT_SCALE;
+        // the frame's own height less its frame (its content pane is laid out only after it is resized)
+        int height = getHeight() - getInsets().top - getInsets().bottom;
+        if (height > 0) {
+            wanted = Math.max(base.getSize2D(), Math.min(wanted, (float) height / LINES_HIGH));
+        }
+        return base.deriveFont((float) Math.floor(wanted));
+    }
+
+    /**
+     * Large text on the figures and the picture; a middle size on the figures' names, the tabs' titles and the
+     * presenter's controls; the window's own on the caution, which is read up close.
+     */
+    private void applyFonts() {
+        enlarge(getContentPane());
+        views.setFont(nameFont());
+        caution.setFont(base);
+        setFontUnder(controlsPanel, nameFont());
+        setFontUnder(figures, large);
+        for (Component name : figures.getComponents()) {
+            if ("presentation.figure.name".equals(name.getName())) {
+                name.setFont(nameFont());
+            }
+        }
+    }
+
+    private Font nameFont() {
+        return large.deriveFont(Math.max(base.getSize2D(), large.getSize2D() * 0.75f));
+    }
+
+    /**
+     * @return the caution, scrolled to two lines where the window is short for its text (fewer than 30 lines of
+     *         it: the largest text on a 1024x768 projector), so that the picture keeps its room
+     */
+    private JComponent scrolledWhereShort(WrappingText text) {
+        JScrollPane scroll = new JScrollPane(text, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
+                JScrollPane.HORIZONTAL_SCROLLBAR_NEVER) {
+            @Override
+            public Dimension getPreferredSize() {
+                Dimension wanted = super.getPreferredSize();
+                int line = text.getFontMetrics(text.getFont()).getHeight();
+                int height = PresentationFrame.this.getHeight();
+                if (height <= 0 || height >= 30 * line) {
+                    return wanted;
+                }
+                Insets border = text.getInsets();
+                return new Dimension(wanted.width, Math.min(wanted.height, 2 * line + border.top + border.bottom));
+            }
+        };
+        scroll.setBorder(null);
+        scroll.getVerticalScrollBar().setUnitIncrement(16);
+        return scroll;
+    }
+
     private JComponent controls() {
-        JPanel row1 = new JPanel(new FlowLayout(FlowLayout.LEADING, 10, 4));
+        JPanel row1 = new JPanel(new WrappingRows());
         JComboBox<String> turn = new JComboBox<>(new String[] {"Left turn", "Right turn"});
         turn.setName("presentation.turn");
         turn.addActionListener(event -> probe.setTurn(turn.getSelectedIndex() == 1 ? TurnDirection.RIGHT
@@ -127,9 +217,8 @@ public final class PresentationFrame extends JFrame {
         slider.addChangeListener(event -> probe.setFractionOfLimit(slider.getValue() / 100.0));
         slider.addMouseWheelListener(event -> slider.setValue(slider.getValue() - event.getWheelRotation() * 5));
         row1.add(turn);
-        row1.add(new JLabel("Share of grip"));
         slider.setPreferredSize(new Dimension(160, slider.getPreferredSize().height));
-        row1.add(slider);
+        row1.add(group(new JLabel("Share of grip"), slider));
         pin.setName("presentation.pin");
         pin.setToolTipText("Keep this setup on screen beside the car as it changes: before and after");
         pin.addActionListener(new AbstractAction() {
@@ -144,35 +233,59 @@ public final class PresentationFrame extends JFrame {
         back.addActionListener(event -> close());
         row1.add(back);
 
-        JPanel controlsPanel = new JPanel(new GridLayout(3, 1));
-        controlsPanel.add(row1);
+        // the steppers as a small table: a row per axle, a column per part, each named once
+        JPanel steppers = new JPanel(new GridBagLayout());
+        steppers.setName("presentation.steppers");
+        String[] heads = {"", "Bar \u00d8", "Arm hole", "Spring"};
+        for (int column = 1; column < heads.length; column++) {
+            steppers.add(new JLabel(heads[column]), cell(column, 0));
+        }
+        int row = 1;
         for (String axle : List.of("front", "rear")) {
-            JPanel row2 = new JPanel(new FlowLayout(FlowLayout.LEADING, 10, 4));
-            controlsPanel.add(row2);
             Function<Vehicle, Axle> of = car -> "front".equals(axle) ? car.front() : car.rear();
-            String title = "front".equals(axle) ? "Front" : "Rear";
-            add(row2, title + " bar \u00d8", new QuickControl("presentation." + axle + ".diameter",
+            steppers.add(new JLabel("front".equals(axle) ? "Front" : "Rear"), cell(0, row));
+            int at = row++;
+            add(steppers, at, 1, new QuickControl("presentation." + axle + ".diameter",
                     axle + ".bar.section.outerDiameterMm", Quantity.LENGTH, 0.5e-3, document, view,
                     car -> bar(of.apply(car)) == null ? Double.NaN : bar(of.apply(car)).section().outerDiameter(),
                     null));
-            add(row2, title + " arm hole", new QuickControl("presentation." + axle + ".hole", axle + ".bar.selectedArm", null, 1,
+            add(steppers, at, 2, new QuickControl("presentation." + axle + ".hole", axle + ".bar.selectedArm", null, 1,
                     document, view, car -> bar(of.apply(car)) == null ? Double.NaN : bar(of.apply(car)).selectedArm(),
                     car -> bar(of.apply(car)).holeCount()));
-            add(row2, title + " spring", new QuickControl("presentation." + axle + ".spring", axle + ".springRateNPerMm",
+            add(steppers, at, 3, new QuickControl("presentation." + axle + ".spring", axle + ".springRateNPerMm",
                     Quantity.LINEAR_RATE, 2e3, document, view, car -> of.apply(car).springRate(), null));
         }
-        return controlsPanel;
+        JPanel both = new JPanel(new BorderLayout());
+        both.add(row1, BorderLayout.NORTH);
+        both.add(steppers, BorderLayout.WEST);
+        return both;
     }
 
     private static AntiRollBar bar(Axle axle) {
         return axle.bar();
     }
 
-    private void add(JPanel row, String label, QuickControl control) {
+    private void add(JPanel table, int row, int column, QuickControl control) {
         controls.add(control);
-        row.add(new JLabel(label));
-        row.add(control.component());
-        row.add(control.unitLabel());
+        table.add(group(control.component(), control.unitLabel()), cell(column, row));
+    }
+
+    private static GridBagConstraints cell(int column, int row) {
+        GridBagConstraints cell = new GridBagConstraints();
+        cell.gridx = column;
+        cell.gridy = row;
+        cell.anchor = GridBagConstraints.LINE_START;
+        cell.insets = new Insets(2, 10, 2, 4);
+        return cell;
+    }
+
+    /** Components kept together on one row when the row wraps (a stepper with its name and unit). */
+    private static JPanel group(JComponent... parts) {
+        JPanel group = new JPanel(new FlowLayout(FlowLayout.LEADING, 6, 0));
+        for (JComponent part : parts) {
+            group.add(part);
+        }
+        return group;
     }
 
     private void bindKeys(JComponent content) {
@@ -199,7 +312,7 @@ public final class PresentationFrame extends JFrame {
     public void togglePin() {
         AnalysisOutcome shown = results.shown();
         pinned = pinned == null && shown != null && shown.succeeded() ? ResultsModel.pinned(shown) : null;
-        pin.setText(pinned == null ? "Pin this setup" : "Let go of the pinned setup");
+        pin.setText(pinned == null ? "Pin this setup" : "Unpin");
         refresh();
     }
 
@@ -211,8 +324,9 @@ public final class PresentationFrame extends JFrame {
     /** @return the before/after lines shown at the top (tests) */
     public List<String> figureLines() {
         List<String> lines = new ArrayList<>();
-        for (Component label : figures.getComponents()) {
-            lines.add(((JLabel) label).getText());
+        Component[] shown = figures.getComponents();
+        for (int i = 0; i + 1 < shown.length; i += 2) {
+            lines.add(((JLabel) shown[i]).getText() + ": " + ((JLabel) shown[i + 1]).getText());
         }
         return lines;
     }
@@ -230,17 +344,23 @@ public final class PresentationFrame extends JFrame {
     private void refresh() {
         pictures.removeAll();
         if (pinned != null) {
-            pictures.add(picture("Pinned setup (before)", pinned));
+            pictures.add(picture("Before (pinned)", pinned));
         }
-        pictures.add(picture(pinned != null ? "Now (after)" : "Now", results));
+        pictures.add(picture(pinned != null ? "After (now)" : "Now", results));
         figures.removeAll();
         AnalysisOutcome now = results.shown();
         if (now != null && now.succeeded()) {
             AnalysisResult before = pinned == null ? null : pinned.shown().result();
-            for (String line : BeforeAfter.lines(before, now.result(), probe.turn(), format)) {
-                JLabel label = new JLabel(line);
-                label.setFont(large);
-                figures.add(label);
+            for (BeforeAfter.Figure figure : BeforeAfter.lines(before, now.result(), probe.turn(), format)) {
+                JLabel name = new JLabel(figure.name());
+                name.setName("presentation.figure.name");
+                name.setFont(nameFont());
+                name.setBorder(BorderFactory.createEmptyBorder(figures.getComponentCount() == 0 ? 0 : 2, 0, 0, 0));
+                figures.add(name);
+                JLabel value = new JLabel(figure.value());
+                value.setName("presentation.figure.value");
+                value.setFont(large);
+                figures.add(value);
             }
         }
         refreshCharts();

@@ -48,7 +48,8 @@ final class QuickControl {
         spinner = new JSpinner(new SpinnerNumberModel(0.0, -1e9, 1e9, 1.0));
         spinner.setName(name);
         if (spinner.getEditor() instanceof JSpinner.DefaultEditor editor) {
-            editor.getTextField().setColumns(5); // the model's wide bounds would otherwise make it screen-wide
+            // the model's wide bounds would otherwise make it screen-wide; a hole number has one or two digits
+            editor.getTextField().setColumns(quantity == null ? 2 : 5);
         }
         spinner.addMouseWheelListener(event -> {
             Object next = event.getWheelRotation() < 0 ? spinner.getNextValue() : spinner.getPreviousValue();

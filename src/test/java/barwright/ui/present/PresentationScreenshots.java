@@ -20,7 +20,7 @@ import java.util.concurrent.atomic.AtomicReference;
  * Writes docs/images/presentation*.png: the club hatchback sample (invented) pinned, then its front bar made
  * 2 mm thicker, before and after side by side. Run under a display: {@code xvfb-run -a -s "-screen 0
  * 1280x1024x24" mvn -B -q test-compile exec:java -Dexec.classpathScope=test
- * -Dexec.mainClass=barwright.ui.present.PresentationScreenshots -Dexec.args="docs/images light 1024x768"}.
+ * -Dexec.mainClass=barwright.ui.present.PresentationScreenshots -Dexec.args="docs/images light 1024x768 28"} (optional after the size: the text size in points, the index of the tab shown).
  */
 public final class PresentationScreenshots {
     private PresentationScreenshots() {
@@ -30,9 +30,14 @@ public final class PresentationScreenshots {
         Path folder = Path.of(args.length > 0 ? args[0] : "docs/images");
         String theme = args.length > 1 ? args[1] : "light";
         String[] size = (args.length > 2 ? args[2] : "1280x880").split("x");
+        int textSize = args.length > 3 ? Integer.parseInt(args[3]) : 0;
+        int tab = args.length > 4 ? Integer.parseInt(args[4]) : 0;
         Files.createDirectories(folder);
         Settings settings = Settings.inMemory();
         settings.put("theme", theme);
+        if (textSize > 0) {
+            settings.put("textSize", Integer.toString(textSize));
+        }
         AtomicReference<MainWindow> window = new AtomicReference<>();
         AtomicReference<PresentationFrame> frame = new AtomicReference<>();
         SwingUtilities.invokeAndWait(() -> window.set(DesktopApp.open(settings, () -> { })));
@@ -47,6 +52,8 @@ public final class PresentationScreenshots {
                     .path("outerDiameterMm").asDouble();
             main.document().edit(KeyPath.of("front.bar.section.outerDiameterMm"), DoubleNode.valueOf(diameter + 2),
                     null, null);
+            ((javax.swing.JTabbedPane) barwright.ui.NamedComponents.find(shown.getContentPane(),
+                    "presentation.views")).setSelectedIndex(tab);
             frame.set(shown);
         });
         Thread.sleep(2000);
@@ -56,7 +63,8 @@ public final class PresentationScreenshots {
             bounds.set(new Rectangle(corner, frame.get().getRootPane().getSize()));
         });
         BufferedImage picture = new Robot().createScreenCapture(bounds.get());
-        Path file = folder.resolve("presentation-" + theme + "-" + size[0] + "x" + size[1] + ".png");
+        Path file = folder.resolve("presentation-" + theme + "-" + size[0] + "x" + size[1]
+                + (textSize > 0 ? "-" + textSize + "pt" : "") + (tab > 0 ? "-tab" + tab : "") + ".png");
         ImageIO.write(picture, "png", file.toFile());
         System.out.println("wrote " + file);
         System.exit(0);
