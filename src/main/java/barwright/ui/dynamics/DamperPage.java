@@ -56,7 +56,7 @@ public final class DamperPage extends JPanel {
         setName("dampers.page");
         this.document = document;
         this.view = view;
-        table = new JTable(points); // after the view: the table asks the column names at once
+        table = new FittedTable(points); // after the view: the table asks the column names at once
         axle.setName("dampers.axle");
         axle.addActionListener(event -> refresh());
         ratio.setName("dampers.ratio");
@@ -76,13 +76,17 @@ public final class DamperPage extends JPanel {
                 + "the last two are the same point at the wheel): bump positive, rebound negative, through 0 at 0. "
                 + "Each change is one step of Edit &gt; Undo.</html>");
         help.setForeground(Palette.muted());
-        left.add(help, BorderLayout.SOUTH);
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, chart.component());
         split.setResizeWeight(0.42);
         setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
         add(top, BorderLayout.NORTH);
         add(split, BorderLayout.CENTER);
-        add(message, BorderLayout.SOUTH);
+        // the help across the whole page, not under the table: at a large text, as a narrow column, it took the
+        // table's rows
+        JPanel bottom = new JPanel(new BorderLayout(4, 4));
+        bottom.add(help, BorderLayout.CENTER);
+        bottom.add(message, BorderLayout.SOUTH);
+        add(bottom, BorderLayout.SOUTH);
         document.addListener(event -> refresh());
         view.addListener(this::refresh);
         refresh();

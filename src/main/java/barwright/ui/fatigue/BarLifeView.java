@@ -65,6 +65,20 @@ public final class BarLifeView extends JPanel {
         chart = new DamageChart("chart." + axle.key() + ".damage");
         add(summary, BorderLayout.NORTH);
         add(chart.component(), BorderLayout.CENTER);
+        // the text wraps at the width given: once that changes, its height is asked again
+        summary.addComponentListener(new java.awt.event.ComponentAdapter() {
+            private int laidOutWidth = -1;
+
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent event) {
+                if (summary.getWidth() != laidOutWidth) {
+                    laidOutWidth = summary.getWidth();
+                    if (summary.getPreferredSize().height != summary.getHeight()) {
+                        revalidate();
+                    }
+                }
+            }
+        });
         work = BackgroundWork.newestOnly(this::compute, outcome -> {
             shown = outcome;
             redraw();
@@ -81,6 +95,19 @@ public final class BarLifeView extends JPanel {
         Dimension text = summary.getPreferredSize();
         Dimension plot = chart.component().getMinimumSize();
         return new Dimension(Math.min(plot.width, LEAST_WIDTH), text.height + 4 + plot.height);
+    }
+
+    /**
+     * No wider than the least either: the column stretches the view to its own width, while the chart's own wish
+     * (a chart's usual width) and the text's (its lines unwrapped) made the editor scroll sideways at a large
+     * text. As tall as the text wrapped at the width given and the chart's own height.
+     */
+    @Override
+    public Dimension getPreferredSize() {
+        Dimension text = summary.getPreferredSize();
+        Dimension plot = chart.component().getPreferredSize();
+        return new Dimension(Math.min(plot.width, LEAST_WIDTH), text.height + 4
+                + Math.max(plot.height, chart.component().getMinimumSize().height));
     }
 
     @Override

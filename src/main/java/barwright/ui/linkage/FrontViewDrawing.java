@@ -84,18 +84,36 @@ final class FrontViewDrawing extends JComponent {
     }
 
     /**
-     * @return as wide as a chart, and tall enough for the picture to read at the current text size: the four lines
+     * @return as wide as a chart at the system text (fourteen lines at a large one: wider made the page wider
+     *         than a small screen's tab), and tall enough for the picture to read at the current text size: the four lines
      *         of heading and key, the roll centre's label under the ground, and some fourteen lines of picture
      */
+    private int roomHeight;
+
     @Override
     public Dimension getPreferredSize() {
         int line = getFontMetrics(font()).getHeight();
-        return new Dimension(Math.max(420, line * 26), Math.max(300, line * 20));
+        int height = roomHeight > 0 ? Math.max(getMinimumSize().height, Math.min(roomHeight, line * 20))
+                : Math.max(300, line * 20);
+        return new Dimension(Math.max(420, line * 14), height);
     }
 
+    /** Never taller than this (pixels; 0 for no bound): the height of the view the page scrolls in. */
+    void fitHeight(int height) {
+        if (height != roomHeight) {
+            roomHeight = height;
+            revalidate();
+        }
+    }
+
+    /**
+     * @return small: the drawing scales to the room it is given (a picture fits, it does not scroll); about nine
+     *         lines of text high, so the heading, the key and some picture still show
+     */
     @Override
     public Dimension getMinimumSize() {
-        return new Dimension(240, getPreferredSize().height);
+        int line = getFontMetrics(font()).getHeight();
+        return new Dimension(240, Math.max(180, line * 9));
     }
 
     void setDragListener(DragListener listener) {

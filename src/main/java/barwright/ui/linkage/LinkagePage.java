@@ -64,10 +64,11 @@ public final class LinkagePage extends JPanel {
     private final JTable table;
     private final JScrollPane tableScroll;
     private final JScrollPane scroller;
+    private final DrawingAndPoints split;
     private final FrontViewDrawing drawing;
     private final JTextArea noLinkage = new JTextArea();
     private final JPanel cards = new JPanel(new CardLayout());
-    private final JLabel message = new JLabel(" ");
+    private final WrappingText message = new WrappingText(" ");
     private final JToggleButton front = new JToggleButton("Front axle", true);
     private final JToggleButton rear = new JToggleButton("Rear axle");
     private final JSlider slider = new JSlider(0, 100);
@@ -103,19 +104,29 @@ public final class LinkagePage extends JPanel {
         cards.add(drawing, DRAWING);
         cards.add(new JScrollPane(noLinkage), NONE);
         message.setName("linkage.message");
+        neverScrollTo(message);
 
         tableScroll = new JScrollPane(table);
-        JPanel split = new JPanel(new BorderLayout(4, 4));
-        split.add(cards, BorderLayout.CENTER);
-        split.add(tableScroll, BorderLayout.SOUTH);
+        split = new DrawingAndPoints(cards, tableScroll);
         add(controls(), BorderLayout.NORTH);
-        // below the drawing's readable height (a small screen, a large text) the page scrolls instead of shrinking it
+        // the drawing takes the room the view gives; only below its least height does the page scroll
         PagePanel body = new PagePanel(new BorderLayout(4, 4)) {
-            /** As tall as the view unless that would squeeze the drawing under its readable (preferred) height. */
+            /**
+             * No wider than the drawing asks: the words below wrap at the width given, and on their unwrapped lines
+             * they made the page wider than a small screen's tab, cutting the drawing on the right.
+             */
+            @Override
+            public java.awt.Dimension getPreferredScrollableViewportSize() {
+                java.awt.Dimension wanted = getPreferredSize();
+                return new java.awt.Dimension(Math.min(wanted.width, Math.max(getMinimumSize().width,
+                        drawing.getPreferredSize().width)), wanted.height);
+            }
+
+            /** As tall as the view unless that would squeeze the drawing under its least height. */
             @Override
             public boolean getScrollableTracksViewportHeight() {
                 return getParent() instanceof javax.swing.JViewport viewport
-                        && viewport.getHeight() >= getPreferredSize().height;
+                        && viewport.getHeight() >= getMinimumSize().height;
             }
         };
         body.add(split, BorderLayout.CENTER);
@@ -124,6 +135,14 @@ public final class LinkagePage extends JPanel {
                 JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         scroller.setBorder(BorderFactory.createEmptyBorder());
         add(scroller, BorderLayout.CENTER);
+        // where the page must scroll (a short view), the drawing still fits whole in it: the words scroll under it
+        scroller.getViewport().addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent event) {
+                int overhead = split.beside() ? 0 : split.getHeight() - cards.getHeight();
+                drawing.fitHeight(scroller.getViewport().getHeight() - Math.max(0, overhead) - 8);
+            }
+        });
         setBorder(BorderFactory.createEmptyBorder(4, 4, 4, 4));
         // the page never asks for more room than a chart does, so the key figures keep their place beside it
         fitTable();
@@ -179,11 +198,25 @@ public final class LinkagePage extends JPanel {
         JPanel axleRow = new JPanel(new FlowLayout(FlowLayout.LEADING, 6, 0));
         axleRow.add(front);
         axleRow.add(rear);
-        axleRow.add(turn);
-        // the slider on a row of its own, so that a narrow window or a large text never pushes it out of sight
+        // the slider on a row of its own with the turn, so that a narrow window or a large text never pushes it
+        // out of sight (a row asks for all it holds side by side: three buttons and a choice were too wide at 28 pt)
         JPanel sliderRow = new JPanel(new BorderLayout(6, 0));
         sliderRow.add(label, BorderLayout.WEST);
         sliderRow.add(slider, BorderLayout.CENTER);
+        sliderRow.add(turn, BorderLayout.EAST);
+        // at a large text the three no longer fit a small screen's tab side by side: the slider goes under
+        sliderRow.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent event) {
+                int side = label.getPreferredSize().width + turn.getPreferredSize().width + 6 * line(label) + 12;
+                Object wanted = sliderRow.getWidth() >= side ? BorderLayout.CENTER : BorderLayout.SOUTH;
+                if (!wanted.equals(((BorderLayout) sliderRow.getLayout()).getConstraints(slider))) {
+                    sliderRow.remove(slider);
+                    sliderRow.add(slider, wanted);
+                    sliderRow.revalidate();
+                }
+            }
+        });
         JPanel controls = new JPanel(new BorderLayout(6, 2));
         controls.add(axleRow, BorderLayout.NORTH);
         controls.add(sliderRow, BorderLayout.CENTER);
@@ -203,14 +236,19 @@ public final class LinkagePage extends JPanel {
         buttons.add(png);
         buttons.add(svg);
         JPanel footer = new JPanel(new BorderLayout(6, 2));
-        footer.add(message, BorderLayout.CENTER);
-        footer.add(buttons, BorderLayout.EAST);
+        // the buttons under the message, not beside it: beside, they made the page too wide for a small screen
+        footer.add(message, BorderLayout.NORTH);
+        footer.add(buttons, BorderLayout.CENTER);
         WrappingText caution = new WrappingText("Moving a pickup point changes how the car behaves at speed: check "
                 + "clearances, bump steer and the maker's data, and have a qualified mechanic check the car.");
         caution.setForeground(Palette.muted());
         neverScrollTo(caution);
         footer.add(caution, BorderLayout.SOUTH);
         return footer;
+    }
+
+    private static int line(Component component) {
+        return component.getFontMetrics(component.getFont()).getHeight();
     }
 
     /** A text set by the program must not scroll the page to its caret. */
@@ -220,14 +258,30 @@ public final class LinkagePage extends JPanel {
         }
     }
 
-    /** The table as tall as its rows (at least one), so the drawing keeps the rest. */
+    /** The table as tall as its rows (at least one), and some 12 lines of text wide (420 px at the least). */
     private void fitTable() {
-        table.setPreferredScrollableViewportSize(new java.awt.Dimension(420,
+        int line = table.getFontMetrics(table.getFont()).getHeight();
+        table.setPreferredScrollableViewportSize(new java.awt.Dimension(Math.max(420, 12 * line),
                 table.getRowHeight() * Math.max(1, points.getRowCount()) + 2));
         if (tableScroll != null) {
             tableScroll.setVisible(points.getRowCount() > 0); // an axle without a linkage has no points
         }
+        if (split != null) {
+            split.rearrange();
+        }
         table.revalidate();
+    }
+
+    /**
+     * As wide as the drawing asks (or the page's least width): the slider's row and the words below, at their
+     * own widths, made the page wider than a small screen's tab, cutting the drawing on the right.
+     */
+    @Override
+    public java.awt.Dimension getPreferredSize() {
+        java.awt.Dimension wanted = super.getPreferredSize();
+        java.awt.Insets insets = getInsets();
+        return new java.awt.Dimension(Math.min(wanted.width, Math.max(getMinimumSize().width,
+                drawing.getPreferredSize().width + insets.left + insets.right + 8)), wanted.height);
     }
 
     /** Shows an axle's linkage. */
@@ -306,13 +360,9 @@ public final class LinkagePage extends JPanel {
         }
         boolean bad = !lines.isEmpty();
         message.setForeground(bad ? Palette.problem() : Palette.muted());
-        message.setText(bad ? "<html>" + escape(String.join("<br>", lines)) + "</html>"
+        message.setText(bad ? String.join("\n", lines)
                 : "Type a point in the table, or drag a circle on the drawing. Edit > Undo takes a change back.");
         table.repaint();
-    }
-
-    private static String escape(String text) {
-        return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("&lt;br&gt;", "<br>");
     }
 
     private String pointName(Pickup pickup) {
@@ -437,8 +487,8 @@ public final class LinkagePage extends JPanel {
         return table;
     }
 
-    /** @return the message line under the table */
-    JLabel message() {
+    /** @return the message line under the drawing */
+    WrappingText message() {
         return message;
     }
 

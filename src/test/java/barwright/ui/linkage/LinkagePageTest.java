@@ -193,7 +193,8 @@ class LinkagePageTest {
         double scale = GuiActionRunner.execute(() -> page.drawing().mappingScale());
         int x = (int) Math.round(lowerInner.at().x);
         int y = (int) Math.round(lowerInner.at().y);
-        int up = 40; // pixels: the drag raises the point by 40 / scale metres
+        // pixels: the drag raises the point by some 40 mm (up / scale metres), whatever room the drawing has
+        int up = (int) Math.round(0.04 * scale);
         mouse(MouseEvent.MOUSE_MOVED, x, y, 0);
         mouse(MouseEvent.MOUSE_PRESSED, x, y, InputEvent.BUTTON1_DOWN_MASK);
         mouse(MouseEvent.MOUSE_DRAGGED, x, y - up / 2, InputEvent.BUTTON1_DOWN_MASK);
