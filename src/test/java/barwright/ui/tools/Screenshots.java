@@ -109,18 +109,28 @@ public final class Screenshots {
                 settle(index > 5 ? 1500 : 300); // a contributed page may work its figures out off the event thread
                 String name = slug(onEdt(() -> window.tabs().getTitleAt(index)));
                 JTabbedPane inner = onEdt(() -> innerTabs((Container) window.tabs().getSelectedComponent()));
-                if (inner == null) {
+                int pages = inner == null ? 0 : onEdt(inner::getTabCount);
+                if (pages == 0) { // no tabs of its own, or an empty pair kept for a narrow layout
                     write(window.getRootPane(), name);
                     continue;
                 }
-                int pages = onEdt(inner::getTabCount);
-                for (int page = 0; page < pages; page++) {
+                // a page may turn a pair of tabs back into one view as it settles: look again each time
+                for (int page = 0; page < pages && onEdt(inner::getTabCount) > page; page++) {
                     int innerIndex = page;
-                    SwingUtilities.invokeAndWait(() -> inner.setSelectedIndex(innerIndex));
+                    SwingUtilities.invokeAndWait(() -> {
+                        if (inner.getTabCount() > innerIndex) {
+                            inner.setSelectedIndex(innerIndex);
+                        }
+                    });
                     settle(800);
-                    write(window.getRootPane(), name + "-" + slug(onEdt(() -> inner.getTitleAt(innerIndex))));
+                    String title = onEdt(() -> inner.getTabCount() > innerIndex ? inner.getTitleAt(innerIndex) : "");
+                    write(window.getRootPane(), title.isEmpty() ? name : name + "-" + slug(title));
                 }
-                SwingUtilities.invokeAndWait(() -> inner.setSelectedIndex(0));
+                SwingUtilities.invokeAndWait(() -> {
+                    if (inner.getTabCount() > 0) {
+                        inner.setSelectedIndex(0);
+                    }
+                });
             }
             SwingUtilities.invokeAndWait(() -> window.tabs().setSelectedIndex(0));
             settle(300);
