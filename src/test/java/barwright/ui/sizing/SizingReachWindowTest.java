@@ -15,10 +15,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
-import javax.swing.JScrollPane;
 import javax.swing.JTable;
-import javax.swing.SwingUtilities;
-import java.awt.Rectangle;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -140,27 +137,9 @@ class SizingReachWindowTest {
     private void assertDecidingColumnsInView() {
         List<String> faults = GuiActionRunner.execute(() -> {
             JTable table = fixture.views().search().table();
-            JScrollPane scroll = (JScrollPane) SwingUtilities.getAncestorOfClass(JScrollPane.class, table);
-            int visible = scroll.getViewport().getExtentSize().width;
-            List<String> cut = new ArrayList<>();
             assertThat(table.getRowCount()).isPositive();
-            for (int column : new int[]{CandidateTableModel.MASS, CandidateTableModel.SAFETY,
-                CandidateTableModel.FLAGS}) {
-                Rectangle cell = table.getCellRect(0, column, true);
-                if (cell.x + cell.width > visible) {
-                    cut.add(table.getColumnName(column) + " ends at " + (cell.x + cell.width) + " px of " + visible);
-                }
-            }
-            for (int column = 0; column < table.getColumnCount(); column++) {
-                var header = table.getTableHeader().getDefaultRenderer().getTableCellRendererComponent(table,
-                        table.getColumnName(column), false, false, -1, column);
-                int width = table.getColumnModel().getColumn(column).getWidth();
-                if (width < header.getPreferredSize().width) {
-                    cut.add("header " + table.getColumnName(column) + " " + width + " px of "
-                            + header.getPreferredSize().width);
-                }
-            }
-            return cut;
+            return SizingWindowFixture.cutColumns(table, CandidateTableModel.MASS, CandidateTableModel.SAFETY,
+                    CandidateTableModel.FLAGS);
         });
         assertThat(faults).isEmpty();
     }

@@ -7,9 +7,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
-import javax.swing.JScrollPane;
 import javax.swing.JTable;
-import javax.swing.SwingUtilities;
 import java.awt.Rectangle;
 import java.util.ArrayList;
 import java.util.List;
@@ -59,23 +57,7 @@ class SizingSmallScreenWindowTest {
                 cut.add("the rows in view are " + shown.height + " px high, under three rows of "
                         + table.getRowHeight() + " px");
             }
-            JScrollPane scroll = (JScrollPane) SwingUtilities.getAncestorOfClass(JScrollPane.class, table);
-            int visible = scroll.getViewport().getExtentSize().width;
-            for (int column : new int[]{TubeView.MASS, TubeView.SAFETY, TubeView.LIFE}) {
-                Rectangle cell = table.getCellRect(0, column, true);
-                if (cell.x + cell.width > visible) {
-                    cut.add(table.getColumnName(column) + " ends at " + (cell.x + cell.width) + " px of " + visible);
-                }
-            }
-            for (int column = 0; column < table.getColumnCount(); column++) {
-                var header = table.getTableHeader().getDefaultRenderer().getTableCellRendererComponent(table,
-                        table.getColumnName(column), false, false, -1, column);
-                int width = table.getColumnModel().getColumn(column).getWidth();
-                if (width < header.getPreferredSize().width) {
-                    cut.add("header " + table.getColumnName(column) + " " + width + " px of "
-                            + header.getPreferredSize().width);
-                }
-            }
+            cut.addAll(SizingWindowFixture.cutColumns(table, TubeView.MASS, TubeView.SAFETY, TubeView.LIFE));
             return cut;
         });
         assertThat(faults).isEmpty();

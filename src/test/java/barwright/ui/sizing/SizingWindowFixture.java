@@ -99,4 +99,31 @@ final class SizingWindowFixture implements AutoCloseable {
     public void close() {
         main.close();
     }
+
+    /**
+     * @return what a person would find cut in a results table: each deciding column that ends past the scroll
+     *         pane's visible width, and each header narrower than its text. Event thread.
+     */
+    static java.util.List<String> cutColumns(javax.swing.JTable table, int... deciding) {
+        javax.swing.JScrollPane scroll = (javax.swing.JScrollPane) javax.swing.SwingUtilities.getAncestorOfClass(
+                javax.swing.JScrollPane.class, table);
+        int visible = scroll.getViewport().getExtentSize().width;
+        java.util.List<String> cut = new java.util.ArrayList<>();
+        for (int column : deciding) {
+            java.awt.Rectangle cell = table.getCellRect(0, column, true);
+            if (cell.x + cell.width > visible) {
+                cut.add(table.getColumnName(column) + " ends at " + (cell.x + cell.width) + " px of " + visible);
+            }
+        }
+        for (int column = 0; column < table.getColumnCount(); column++) {
+            var header = table.getTableHeader().getDefaultRenderer().getTableCellRendererComponent(table,
+                    table.getColumnName(column), false, false, -1, column);
+            int width = table.getColumnModel().getColumn(column).getWidth();
+            if (width < header.getPreferredSize().width) {
+                cut.add("header " + table.getColumnName(column) + " " + width + " px of "
+                        + header.getPreferredSize().width);
+            }
+        }
+        return cut;
+    }
 }
