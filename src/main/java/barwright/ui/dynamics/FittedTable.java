@@ -1,10 +1,9 @@
 package barwright.ui.dynamics;
 
-import javax.swing.JTable;
+import barwright.ui.panel.ColumnWidths;
+import barwright.ui.panel.FittedColumnsTable;
+
 import javax.swing.JViewport;
-import javax.swing.event.TableModelEvent;
-import javax.swing.table.TableCellRenderer;
-import javax.swing.table.TableColumn;
 import javax.swing.table.TableModel;
 
 /**
@@ -12,35 +11,14 @@ import javax.swing.table.TableModel;
  * each time the rows or the text size change): where the columns fit they share the view's width, where they
  * do not the table keeps them whole and scrolls sideways, so that no number is ever cut ("-2..." for "-2500").
  */
-final class FittedTable extends JTable {
-    /** Room either side of a cell's text (pixels). */
-    private static final int PADDING = 12;
-
+final class FittedTable extends FittedColumnsTable {
     FittedTable(TableModel model) {
         super(model);
         setAutoResizeMode(AUTO_RESIZE_SUBSEQUENT_COLUMNS);
         // a new text size reaches the header after the table: measure its titles again then
         getTableHeader().addPropertyChangeListener("font", event -> fitColumns());
-        fitColumns();
-    }
-
-    /** Sets each column's least and preferred width to the widest of its header and its cells. */
-    private void fitColumns() {
-        if (getColumnModel() == null || getTableHeader() == null) {
-            return; // JTable's constructor asks before the header is made
-        }
-        for (int view = 0; view < getColumnCount(); view++) {
-            TableColumn column = getColumnModel().getColumn(view);
-            TableCellRenderer header = column.getHeaderRenderer() != null ? column.getHeaderRenderer()
-                    : getTableHeader().getDefaultRenderer();
-            int width = header.getTableCellRendererComponent(this, column.getHeaderValue(), false, false, -1, view)
-                    .getPreferredSize().width;
-            for (int row = 0; row < getRowCount(); row++) {
-                width = Math.max(width, prepareRenderer(getCellRenderer(row, view), row, view).getPreferredSize().width);
-            }
-            column.setMinWidth(width + PADDING);
-            column.setPreferredWidth(width + PADDING);
-        }
+        // every row measured, and each fitted width kept as the column's least: the table never squeezes one
+        fitColumnsWith(ColumnWidths.wholeTexts());
     }
 
     /** @return the columns' fitted widths added up */
@@ -50,18 +28,6 @@ final class FittedTable extends JTable {
             total += getColumnModel().getColumn(view).getMinWidth();
         }
         return total;
-    }
-
-    @Override
-    public void tableChanged(TableModelEvent event) {
-        super.tableChanged(event);
-        fitColumns();
-    }
-
-    @Override
-    public void updateUI() {
-        super.updateUI();
-        fitColumns();
     }
 
     /** Stretched to the view only where the fitted columns fit in it; else as wide as they are, scrolling. */

@@ -1,0 +1,75 @@
+package barwright.ui.panel;
+
+import javax.swing.JTable;
+import javax.swing.table.TableCellRenderer;
+import javax.swing.table.TableColumn;
+
+/**
+ * How a table's columns are fitted to their texts at the table's current font: each column as wide as the widest
+ * of its header and its cells, with room either side, so that no header reads "Fo..." and no number "-2..." at
+ * any text size. The tables differ only in what is given here: a width a column never goes under, how many rows
+ * are measured, and whether the fitted width is also the column's least. {@link FittedColumnsTable} applies a fit
+ * again as its rows and its text size change.
+ */
+public final class ColumnWidths {
+    /** Room either side of a cell's text (pixels). */
+    public static final int PADDING = 12;
+
+    private final int[] given;
+    private final float givenTextPoints;
+    private final int rowsMeasured;
+    private final boolean keptAsLeast;
+
+    private ColumnWidths(int[] given, float givenTextPoints, int rowsMeasured, boolean keptAsLeast) {
+        this.given = given.clone();
+        this.givenTextPoints = givenTextPoints;
+        this.rowsMeasured = rowsMeasured;
+        this.keptAsLeast = keptAsLeast;
+    }
+
+    /**
+     * @return a fit that measures every row and makes each column's fitted width its least as well as its
+     *         preferred one, so that a table that resizes its columns never squeezes one below its texts
+     */
+    public static ColumnWidths wholeTexts() {
+        return new ColumnWidths(new int[0], 1f, Integer.MAX_VALUE, true);
+    }
+
+    /**
+     * @param given           each column's width at the text size below (pixels); a column is never narrower
+     *                        than this, scaled down with a smaller text (never up: a larger text widens a
+     *                        column only as far as its texts need)
+     * @param givenTextPoints the text size the given widths were chosen at (points)
+     * @param rowsMeasured    how many rows, from the first, are measured (a cap for long lists)
+     * @return a fit that sets the preferred widths only
+     */
+    public static ColumnWidths atLeastGiven(int[] given, float givenTextPoints, int rowsMeasured) {
+        return new ColumnWidths(given, givenTextPoints, rowsMeasured, false);
+    }
+
+    /** Sets every column's preferred width (and least width, where kept) to its fitted width. Event thread. */
+    public void fit(JTable table) {
+        if (table.getColumnModel() == null) {
+            return; // JTable's constructor asks before its columns are made
+        }
+        double scale = table.getFont() == null ? 1 : table.getFont().getSize2D() / givenTextPoints;
+        for (int view = 0; view < table.getColumnCount(); view++) {
+            TableColumn column = table.getColumnModel().getColumn(view);
+            int width = view < given.length ? (int) Math.round(given[view] * Math.min(scale, 1)) : 0;
+            TableCellRenderer header = column.getHeaderRenderer() != null ? column.getHeaderRenderer()
+                    : table.getTableHeader() == null ? null : table.getTableHeader().getDefaultRenderer();
+            if (header != null) {
+                width = Math.max(width, header.getTableCellRendererComponent(table, column.getHeaderValue(), false,
+                        false, -1, view).getPreferredSize().width + PADDING);
+            }
+            for (int row = 0; row < Math.min(table.getRowCount(), rowsMeasured); row++) {
+                width = Math.max(width, table.prepareRenderer(table.getCellRenderer(row, view), row, view)
+                        .getPreferredSize().width + PADDING);
+            }
+            if (keptAsLeast) {
+                column.setMinWidth(width);
+            }
+            column.setPreferredWidth(width);
+        }
+    }
+}
