@@ -1,15 +1,14 @@
 package barwright.ui.dynamics;
 
-import barwright.ui.app.Themes;
 import barwright.ui.document.Samples;
 import barwright.ui.window.WindowFixture;
+import barwright.ui.window.WindowUnderTest;
 import org.assertj.swing.edt.GuiActionRunner;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import javax.swing.JTable;
-import javax.swing.SwingUtilities;
 import javax.swing.table.TableColumn;
 import java.awt.Component;
 import java.util.ArrayList;
@@ -24,18 +23,12 @@ import static org.assertj.core.api.Assertions.assertThat;
  */
 @Tag("window")
 class DamperTableLargeTextTest {
-    private WindowFixture fixture;
-
-    @AfterEach
-    void close() {
-        if (fixture != null) {
-            fixture.close();
-        }
-    }
+    @RegisterExtension
+    final WindowUnderTest opened = new WindowUnderTest();
 
     @Test
     void atTheLargestTextOnA1024By768ScreenNoDamperColumnIsNarrowerThanItsTexts() {
-        fixture = new WindowFixture(1024, 768, Themes.largestTextSize());
+        WindowFixture fixture = opened.onProjector();
         GuiActionRunner.execute(() -> {
             fixture.window.document().replace(Samples.load(Samples.ALL.get(Samples.ALL.size() - 1)), null, "sample");
             return null;
@@ -43,9 +36,7 @@ class DamperTableLargeTextTest {
         fixture.settle();
         List<String> cut = GuiActionRunner.execute(() -> {
             DamperPage page = (DamperPage) fixture.robot.finder().findByName(fixture.window, "dampers.page", false);
-            var tabs = fixture.window.tabs();
-            tabs.setSelectedIndex(tabs.indexOfComponent(tabOf(page)));
-            fixture.window.validate();
+            fixture.showResultsPage(page);
             JTable table = page.table();
             List<String> faults = new ArrayList<>();
             // guards the test itself: the sample's front damper has several points
@@ -67,14 +58,5 @@ class DamperTableLargeTextTest {
             return faults;
         });
         assertThat(cut).isEmpty();
-    }
-
-    /** @return the page's child of the results tabs (the page itself, or the scroll pane holding it) */
-    private Component tabOf(Component page) {
-        Component at = page;
-        while (at.getParent() != null && at.getParent() != fixture.window.tabs()) {
-            at = at.getParent();
-        }
-        return at;
     }
 }

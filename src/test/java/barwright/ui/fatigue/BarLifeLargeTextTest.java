@@ -1,11 +1,11 @@
 package barwright.ui.fatigue;
 
-import barwright.ui.app.Themes;
 import barwright.ui.window.WindowFixture;
+import barwright.ui.window.WindowUnderTest;
 import org.assertj.swing.edt.GuiActionRunner;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import javax.swing.JScrollPane;
 import javax.swing.JViewport;
@@ -20,20 +20,13 @@ import static org.assertj.core.api.Assertions.assertThat;
  */
 @Tag("window")
 class BarLifeLargeTextTest {
-    private WindowFixture fixture;
-
-    @AfterEach
-    void close() {
-        if (fixture != null) {
-            fixture.close();
-        }
-    }
+    @RegisterExtension
+    final WindowUnderTest opened = new WindowUnderTest();
 
     @Test
     void atTheLargestTextOnA1024By768ScreenTheFrontBarPageNeedsNoSidewaysScroll() {
-        fixture = new WindowFixture(1024, 768, Themes.largestTextSize());
-        fixture.frame.tabbedPane("editor.tabs").selectTab("Front bar");
-        fixture.settle();
+        WindowFixture fixture = opened.onProjector();
+        fixture.showEditorPage("Front bar");
         StringBuilder wide = new StringBuilder();
         int[] lifePreferred = new int[1];
         int[] widths = GuiActionRunner.execute(() -> {

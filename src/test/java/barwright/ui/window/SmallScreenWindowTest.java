@@ -2,9 +2,9 @@ package barwright.ui.window;
 
 import barwright.ui.app.Themes;
 import org.assertj.swing.edt.GuiActionRunner;
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import javax.swing.AbstractButton;
 import javax.swing.JComponent;
@@ -21,18 +21,12 @@ import static org.assertj.core.api.Assertions.assertThat;
  */
 @Tag("window")
 class SmallScreenWindowTest {
-    private WindowFixture fixture;
-
-    @AfterEach
-    void close() {
-        if (fixture != null) {
-            fixture.close();
-        }
-    }
+    @RegisterExtension
+    final WindowUnderTest opened = new WindowUnderTest();
 
     @Test
     void atTheLargestTextOnA1024By768ScreenEveryFigureIsShownAtItsFullWidth() {
-        fixture = new WindowFixture(1024, 768, Themes.largestTextSize());
+        WindowFixture fixture = opened.onProjector();
         List<String> clipped = GuiActionRunner.execute(() -> {
             List<String> cut = new ArrayList<>();
             List<AbstractButton> figures = new ArrayList<>();
@@ -53,7 +47,7 @@ class SmallScreenWindowTest {
 
     @Test
     void onASmallScreenTheFiguresMoveBelowAndTheCarPictureKeepsItsRoom() {
-        fixture = new WindowFixture(1024, 768, Themes.largestTextSize());
+        WindowFixture fixture = opened.onProjector();
         boolean beside = GuiActionRunner.execute(() -> {
             fixture.window.validate(); // the layout of the settled results, not one still pending
             return fixture.window.figuresBeside();
@@ -78,8 +72,8 @@ class SmallScreenWindowTest {
     void atEveryTextSizeOnA1024By768ScreenNothingIsCutAndThePictureKeepsItsRoom() {
         List<String> faults = new ArrayList<>();
         for (int size : Themes.offeredTextSizes()) {
-            fixture = new WindowFixture(1024, 768, size);
-            faults.addAll(GuiActionRunner.execute(() -> cutComponents(size)));
+            WindowFixture fixture = opened.open(1024, 768, size);
+            faults.addAll(GuiActionRunner.execute(() -> cutComponents(fixture, size)));
             JComponent picture = GuiActionRunner.execute(() ->
                     (JComponent) fixture.robot.finder().findByName(fixture.window, "carBehind", false));
             int width = GuiActionRunner.execute(picture::getWidth);
@@ -88,14 +82,13 @@ class SmallScreenWindowTest {
             if (width < 400 || height < 350 || height < least) {
                 faults.add("text " + size + ": car picture " + width + " x " + height + " px (least " + least + ")");
             }
-            fixture.close();
-            fixture = null;
+            opened.close();
         }
         assertThat(faults).isEmpty();
     }
 
     /** @return each number field, choice, figure or figure label narrower than its text, on every editor page */
-    private List<String> cutComponents(int size) {
+    private static List<String> cutComponents(WindowFixture fixture, int size) {
         List<String> cut = new ArrayList<>();
         var editor = fixture.window.editor();
         for (int page = 0; page < editor.getTabCount(); page++) {
@@ -137,7 +130,7 @@ class SmallScreenWindowTest {
      */
     @Test
     void atTheLargestTextOnA1024By768ScreenEveryResultsPageShowsItsPictureAtAUsableHeight() {
-        fixture = new WindowFixture(1024, 768, Themes.largestTextSize());
+        WindowFixture fixture = opened.onProjector();
         List<String> faults = new ArrayList<>();
         int pages = GuiActionRunner.execute(() -> fixture.window.tabs().getTabCount());
         assertThat(pages).isGreaterThan(6); // the car, the five charts and the contributed pages
@@ -164,7 +157,7 @@ class SmallScreenWindowTest {
 
     @Test
     void onAWideScreenAtTheSystemTextTheFiguresStayBesideTheCharts() {
-        fixture = new WindowFixture(1280, 880, 0);
+        WindowFixture fixture = opened.open(1280, 880, 0);
         assertThat(GuiActionRunner.execute(() -> {
             fixture.window.validate();
             return fixture.window.figuresBeside();

@@ -69,6 +69,23 @@ public final class WindowFixture implements AutoCloseable {
         robot.waitForIdle();
     }
 
+    /** Selects the editor's page of that title, and waits until the analysis settles. */
+    public void showEditorPage(String title) {
+        frame.tabbedPane("editor.tabs").selectTab(title);
+        settle();
+    }
+
+    /** Selects the results tab holding the page (itself, or a scroll pane around it), laid out. Event thread. */
+    public void showResultsPage(java.awt.Component page) {
+        var tabs = window.tabs();
+        java.awt.Component at = page;
+        while (at.getParent() != null && at.getParent() != tabs) {
+            at = at.getParent();
+        }
+        tabs.setSelectedIndex(tabs.indexOfComponent(at));
+        window.validate();
+    }
+
     String figure(String name) {
         return GuiActionRunner.execute(() -> window.figures().figureText(name));
     }
