@@ -1,16 +1,14 @@
 package barwright.ui.dynamics;
 
-import barwright.ui.action.Settings;
-import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
 import barwright.ui.document.Samples;
+import barwright.ui.tools.ShotWindow;
 
 import javax.swing.JComponent;
 import javax.swing.SwingUtilities;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicBoolean;
-import java.util.concurrent.atomic.AtomicReference;
 
 /**
  * Writes screenshots of the damper page, the turn-in view and the lap view on the invented "club hatchback with
@@ -26,24 +24,13 @@ public final class DynamicsScreenshots {
     public static void main(String[] args) throws Exception {
         Path folder = Path.of(args.length > 0 ? args[0] : "docs/images");
         Files.createDirectories(folder);
-        Settings settings = Settings.inMemory();
         String theme = args.length > 1 ? args[1] : "light";
-        settings.put("theme", theme);
-        if (args.length > 2 && !"0".equals(args[2])) {
-            settings.put("textSize", args[2]);
-        }
+        int textSize = args.length > 2 ? Integer.parseInt(args[2]) : 0;
         String[] size = (args.length > 3 ? args[3] : "1280x880").split("x");
-        AtomicReference<MainWindow> holder = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            MainWindow window = DesktopApp.open(settings, () -> { });
-            window.setLocation(0, 0);
-            window.setSize(Integer.parseInt(size[0]), Integer.parseInt(size[1]));
-            holder.set(window);
-        });
-        String suffix = "-" + theme + (args.length > 2 && !"0".equals(args[2]) ? "-text" + args[2] : "")
-                + "-" + size[0] + "x" + size[1];
-        capture(holder.get(), folder, suffix);
-        SwingUtilities.invokeAndWait(holder.get()::dispose);
+        MainWindow window = ShotWindow.open(theme, textSize, Integer.parseInt(size[0]), Integer.parseInt(size[1]));
+        String suffix = "-" + theme + (textSize != 0 ? "-text" + textSize : "") + "-" + size[0] + "x" + size[1];
+        capture(window, folder, suffix);
+        SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
     }
 

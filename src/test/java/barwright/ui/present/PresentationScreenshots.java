@@ -1,17 +1,11 @@
 package barwright.ui.present;
 
 import barwright.io.KeyPath;
-import barwright.ui.action.Settings;
-import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
+import barwright.ui.tools.ShotWindow;
 import com.fasterxml.jackson.databind.node.DoubleNode;
 
-import javax.imageio.ImageIO;
 import javax.swing.SwingUtilities;
-import java.awt.Point;
-import java.awt.Rectangle;
-import java.awt.Robot;
-import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicReference;
@@ -33,17 +27,11 @@ public final class PresentationScreenshots {
         int textSize = args.length > 3 ? Integer.parseInt(args[3]) : 0;
         int tab = args.length > 4 ? Integer.parseInt(args[4]) : 0;
         Files.createDirectories(folder);
-        Settings settings = Settings.inMemory();
-        settings.put("theme", theme);
-        if (textSize > 0) {
-            settings.put("textSize", Integer.toString(textSize));
-        }
-        AtomicReference<MainWindow> window = new AtomicReference<>();
+        // the main window behind at the same size, as on a screen of that size
+        MainWindow main = ShotWindow.open(theme, textSize, Integer.parseInt(size[0]), Integer.parseInt(size[1]));
         AtomicReference<PresentationFrame> frame = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> window.set(DesktopApp.open(settings, () -> { })));
         Thread.sleep(1500);
         SwingUtilities.invokeAndWait(() -> {
-            MainWindow main = window.get();
             PresentationFrame shown = new PresentationFrame(main.document(), main.view(), main.results());
             shown.setBounds(0, 0, Integer.parseInt(size[0]), Integer.parseInt(size[1]));
             shown.setVisible(true);
@@ -57,16 +45,9 @@ public final class PresentationScreenshots {
             frame.set(shown);
         });
         Thread.sleep(2000);
-        AtomicReference<Rectangle> bounds = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            Point corner = frame.get().getRootPane().getLocationOnScreen();
-            bounds.set(new Rectangle(corner, frame.get().getRootPane().getSize()));
-        });
-        BufferedImage picture = new Robot().createScreenCapture(bounds.get());
         Path file = folder.resolve("presentation-" + theme + "-" + size[0] + "x" + size[1]
                 + (textSize > 0 ? "-" + textSize + "pt" : "") + (tab > 0 ? "-tab" + tab : "") + ".png");
-        ImageIO.write(picture, "png", file.toFile());
-        System.out.println("wrote " + file);
+        ShotWindow.capture(frame.get().getRootPane(), file);
         System.exit(0);
     }
 }

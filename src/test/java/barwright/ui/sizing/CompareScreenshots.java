@@ -1,8 +1,7 @@
 package barwright.ui.sizing;
 
-import barwright.ui.action.Settings;
-import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
+import barwright.ui.tools.ShotWindow;
 
 import javax.swing.JComboBox;
 import javax.swing.JTextField;
@@ -25,25 +24,18 @@ public final class CompareScreenshots {
         String text = args.length > 1 ? args[1] : "0";
         String[] size = (args.length > 2 ? args[2] : "1260x840").split("x");
         Files.createDirectories(folder);
-        Settings settings = Settings.inMemory();
-        settings.put("textSize", text);
-        MainWindow window = SizingScreens.onEdt(() -> {
-            MainWindow opened = DesktopApp.open(settings, () -> { });
-            opened.setLocation(0, 0);
-            opened.setSize(Integer.parseInt(size[0]), Integer.parseInt(size[1]));
-            return opened;
-        });
+        int width = Integer.parseInt(size[0]);
+        int height = Integer.parseInt(size[1]);
+        MainWindow window = ShotWindow.open("light", Integer.parseInt(text), width, height);
         SizingScreens.analysed(window);
-        SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.COMPARE);
+        SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.COMPARE, width, height);
         SizingScreens.onEdt(() -> {
-            views.setLocation(0, 0);
-            views.setSize(Integer.parseInt(size[0]), Integer.parseInt(size[1]));
             fill(views);
             return null;
         });
         SizingScreens.until("the comparison", () -> views.compare().work().isIdle() && views.compare().shown() != null);
         boolean usual = "0".equals(text) && "1260x840".equals(size[0] + "x" + size[1]);
-        SizingScreens.capture(views, folder.resolve(usual ? "sizing-compare.png"
+        ShotWindow.capture(views, folder.resolve(usual ? "sizing-compare.png"
                 : "sizing-compare-" + size[0] + "x" + size[1] + "-text" + text + ".png"));
         SizingScreens.onEdt(() -> {
             views.dispose();

@@ -2,12 +2,7 @@ package barwright.ui.sizing;
 
 import barwright.ui.app.MainWindow;
 
-import javax.imageio.ImageIO;
 import javax.swing.SwingUtilities;
-import java.awt.Rectangle;
-import java.awt.Window;
-import java.awt.image.BufferedImage;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 
@@ -23,6 +18,18 @@ final class SizingScreens {
             views.open(tab);
             return views;
         });
+    }
+
+    /** Opens the sizing window on a tab, at the screen's top left at that size (pixels), laid out. */
+    static SizingWindow open(MainWindow window, SizingWindow.Tab tab, int width, int height) throws Exception {
+        SizingWindow views = open(window, tab);
+        onEdt(() -> {
+            views.setLocation(0, 0);
+            views.setSize(width, height);
+            views.validate();
+            return null;
+        });
+        return views;
     }
 
     static <T> T onEdt(Callable<T> task) throws Exception {
@@ -64,13 +71,5 @@ final class SizingScreens {
     static <T extends java.awt.Component> T find(java.awt.Container root, String name) {
         return (T) org.assertj.swing.core.BasicComponentFinder.finderWithCurrentAwtHierarchy()
                 .findByName(root, name, false);
-    }
-
-    /** Captures a window from the screen as a person sees it (toolchain.md: Robot.createScreenCapture). */
-    static void capture(Window shown, Path file) throws Exception {
-        Rectangle bounds = onEdt(() -> new Rectangle(shown.getLocationOnScreen(), shown.getSize()));
-        BufferedImage picture = new java.awt.Robot().createScreenCapture(bounds);
-        ImageIO.write(picture, "png", file.toFile());
-        System.out.println("wrote " + file);
     }
 }

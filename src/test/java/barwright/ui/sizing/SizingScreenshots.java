@@ -1,8 +1,7 @@
 package barwright.ui.sizing;
 
-import barwright.ui.action.Settings;
-import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
+import barwright.ui.tools.ShotWindow;
 
 import javax.swing.AbstractButton;
 import javax.swing.JComboBox;
@@ -22,19 +21,9 @@ public final class SizingScreenshots {
     public static void main(String[] args) throws Exception {
         Path folder = Path.of(args.length > 0 ? args[0] : "docs/images");
         Files.createDirectories(folder);
-        MainWindow window = SizingScreens.onEdt(() -> {
-            MainWindow opened = DesktopApp.open(Settings.inMemory(), () -> { });
-            opened.setLocation(0, 0);
-            opened.setSize(1280, 880);
-            return opened;
-        });
+        MainWindow window = ShotWindow.open("light", 0, 1280, 880);
         SizingScreens.analysed(window);
-        SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.SEARCH);
-        SizingScreens.onEdt(() -> {
-            views.setLocation(0, 0);
-            views.setSize(1260, 840);
-            return null;
-        });
+        SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.SEARCH, 1260, 840);
 
         // the rear bar sized for a front share of 52 %, its inside wheel to stay down up to the limit
         SizingScreens.onEdt(() -> {
@@ -46,7 +35,7 @@ public final class SizingScreenshots {
             return null;
         });
         SizingScreens.until("the search", () -> views.search().work().isIdle());
-        SizingScreens.capture(views, folder.resolve("sizing-search.png"));
+        ShotWindow.capture(views, folder.resolve("sizing-search.png"));
 
         // tubes of the front bar's rate, in its own steel and in 4130
         SizingScreens.onEdt(() -> {
@@ -56,14 +45,14 @@ public final class SizingScreenshots {
             return null;
         });
         SizingScreens.until("the tubes", () -> views.tubes().work().isIdle());
-        SizingScreens.capture(views, folder.resolve("sizing-tubes.png"));
+        ShotWindow.capture(views, folder.resolve("sizing-tubes.png"));
 
         SizingScreens.onEdt(() -> {
             views.open(SizingWindow.Tab.MAP);
             return null;
         });
         SizingScreens.until("the map", () -> views.map().work().isIdle() && !views.map().cells().isEmpty());
-        SizingScreens.capture(views, folder.resolve("sizing-map.png"));
+        ShotWindow.capture(views, folder.resolve("sizing-map.png"));
 
         // the open car against two variants
         SizingScreens.onEdt(() -> {
@@ -72,14 +61,14 @@ public final class SizingScreenshots {
             return null;
         });
         SizingScreens.until("the comparison", () -> views.compare().work().isIdle() && views.compare().shown() != null);
-        SizingScreens.capture(views, folder.resolve("sizing-compare.png"));
+        ShotWindow.capture(views, folder.resolve("sizing-compare.png"));
 
         SizingScreens.onEdt(() -> {
             views.open(SizingWindow.Tab.PRELOAD);
             return null;
         });
         SizingScreens.until("the preload", () -> views.preload().work().isIdle() && views.preload().shown() != null);
-        SizingScreens.capture(views, folder.resolve("sizing-preload.png"));
+        ShotWindow.capture(views, folder.resolve("sizing-preload.png"));
 
         SizingScreens.onEdt(() -> {
             views.dispose();

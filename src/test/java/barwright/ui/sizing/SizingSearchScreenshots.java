@@ -1,8 +1,7 @@
 package barwright.ui.sizing;
 
-import barwright.ui.action.Settings;
-import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
+import barwright.ui.tools.ShotWindow;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -24,22 +23,11 @@ public final class SizingSearchScreenshots {
         String[] size = (args.length > 2 ? args[2] : "1180x800").split("x");
         String textSize = args.length > 3 ? args[3] : "0";
         Files.createDirectories(folder);
-        Settings settings = Settings.inMemory();
-        settings.put("textSize", textSize);
-        MainWindow window = SizingScreens.onEdt(() -> {
-            MainWindow opened = DesktopApp.open(settings, () -> { });
-            opened.setLocation(0, 0);
-            opened.setSize(Integer.parseInt(size[0]), Integer.parseInt(size[1]));
-            return opened;
-        });
+        int width = Integer.parseInt(size[0]);
+        int height = Integer.parseInt(size[1]);
+        MainWindow window = ShotWindow.open("light", Integer.parseInt(textSize), width, height);
         SizingScreens.analysed(window);
-        SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.SEARCH);
-        SizingScreens.onEdt(() -> {
-            views.setLocation(0, 0);
-            views.setSize(Integer.parseInt(size[0]), Integer.parseInt(size[1]));
-            views.validate();
-            return null;
-        });
+        SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.SEARCH, width, height);
         SearchForm form = views.search().form();
         SizingScreens.until("the reach", () -> form.reachSettled() && !form.reachText().isBlank());
         SizingScreens.onEdt(() -> {
@@ -47,7 +35,7 @@ public final class SizingSearchScreenshots {
             return null;
         });
         SizingScreens.until("the search", () -> views.search().work().isIdle());
-        SizingScreens.capture(views, folder.resolve(name));
+        ShotWindow.capture(views, folder.resolve(name));
         SizingScreens.onEdt(() -> {
             views.dispose();
             window.dispose();

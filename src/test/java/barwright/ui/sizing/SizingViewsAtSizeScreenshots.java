@@ -1,8 +1,7 @@
 package barwright.ui.sizing;
 
-import barwright.ui.action.Settings;
-import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
+import barwright.ui.tools.ShotWindow;
 
 import javax.swing.AbstractButton;
 import java.nio.file.Files;
@@ -27,38 +26,25 @@ public final class SizingViewsAtSizeScreenshots {
         String textSize = args.length > 2 ? args[2] : "0";
         String suffix = "-" + wanted + "-" + textSize + ".png";
         Files.createDirectories(folder);
-        Settings settings = Settings.inMemory();
-        settings.put("textSize", textSize);
         int width = Integer.parseInt(size[0]);
         int height = Integer.parseInt(size[1]);
-        MainWindow window = SizingScreens.onEdt(() -> {
-            MainWindow opened = DesktopApp.open(settings, () -> { });
-            opened.setLocation(0, 0);
-            opened.setSize(width, height);
-            return opened;
-        });
+        MainWindow window = ShotWindow.open("light", Integer.parseInt(textSize), width, height);
         SizingScreens.analysed(window);
-        SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.TUBES);
-        SizingScreens.onEdt(() -> {
-            views.setLocation(0, 0);
-            views.setSize(width, height);
-            views.validate();
-            return null;
-        });
+        SizingWindow views = SizingScreens.open(window, SizingWindow.Tab.TUBES, width, height);
         SizingScreens.onEdt(() -> {
             SizingScreens.<AbstractButton>find(views, "tubes.material.4130 chromoly").setSelected(true);
             views.tubes().find();
             return null;
         });
         SizingScreens.until("the tubes", () -> views.tubes().work().isIdle());
-        SizingScreens.capture(views, folder.resolve("sizing-tubes" + suffix));
+        ShotWindow.capture(views, folder.resolve("sizing-tubes" + suffix));
 
         SizingScreens.onEdt(() -> {
             views.open(SizingWindow.Tab.MAP);
             return null;
         });
         SizingScreens.until("the map", () -> views.map().work().isIdle() && !views.map().cells().isEmpty());
-        SizingScreens.capture(views, folder.resolve("sizing-map" + suffix));
+        ShotWindow.capture(views, folder.resolve("sizing-map" + suffix));
 
         SizingScreens.onEdt(() -> {
             views.open(SizingWindow.Tab.COMPARE);
@@ -66,14 +52,14 @@ public final class SizingViewsAtSizeScreenshots {
             return null;
         });
         SizingScreens.until("the comparison", () -> views.compare().work().isIdle() && views.compare().shown() != null);
-        SizingScreens.capture(views, folder.resolve("sizing-compare" + suffix));
+        ShotWindow.capture(views, folder.resolve("sizing-compare" + suffix));
 
         SizingScreens.onEdt(() -> {
             views.open(SizingWindow.Tab.PRELOAD);
             return null;
         });
         SizingScreens.until("the preload", () -> views.preload().work().isIdle() && views.preload().shown() != null);
-        SizingScreens.capture(views, folder.resolve("sizing-preload" + suffix));
+        ShotWindow.capture(views, folder.resolve("sizing-preload" + suffix));
 
         SizingScreens.onEdt(() -> {
             views.dispose();

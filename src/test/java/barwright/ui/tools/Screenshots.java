@@ -1,7 +1,5 @@
 package barwright.ui.tools;
 
-import barwright.ui.action.Settings;
-import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
 import barwright.ui.app.Themes;
 import barwright.ui.present.PresentationFrame;
@@ -73,17 +71,7 @@ public final class Screenshots {
         }
 
         void all() throws Exception {
-            Settings settings = Settings.inMemory();
-            settings.put("theme", theme);
-            settings.put("textSize", Integer.toString(textSize));
-            AtomicReference<MainWindow> holder = new AtomicReference<>();
-            SwingUtilities.invokeAndWait(() -> {
-                MainWindow opened = DesktopApp.open(settings, () -> { });
-                opened.setLocation(0, 0);
-                opened.setSize(width, height);
-                holder.set(opened);
-            });
-            window = holder.get();
+            window = ShotWindow.open(theme, textSize, width, height);
             settle(1000);
             resultsTabs();
             editorPages();

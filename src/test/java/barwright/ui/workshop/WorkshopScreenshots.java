@@ -2,20 +2,13 @@ package barwright.ui.workshop;
 
 import barwright.model.AxlePosition;
 import barwright.ui.NamedComponents;
-import barwright.ui.action.Settings;
-import barwright.ui.app.DesktopApp;
 import barwright.ui.app.MainWindow;
+import barwright.ui.tools.ShotWindow;
 
-import javax.imageio.ImageIO;
 import javax.swing.JTabbedPane;
 import javax.swing.SwingUtilities;
-import java.awt.Point;
-import java.awt.Rectangle;
-import java.awt.Robot;
-import java.awt.image.BufferedImage;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.atomic.AtomicReference;
 
 /**
  * Writes screenshots of the four workshop pages to docs/images/workshop-*.png, with invented readings on the
@@ -33,22 +26,15 @@ public final class WorkshopScreenshots {
         String text = args.length > 2 ? args[2] : "0";
         String[] size = (args.length > 3 ? args[3] : "1280x880").split("x");
         Files.createDirectories(folder);
-        Settings settings = Settings.inMemory();
-        settings.put("theme", theme);
-        settings.put("textSize", text);
-        AtomicReference<MainWindow> holder = new AtomicReference<>();
+        MainWindow window = ShotWindow.open(theme, Integer.parseInt(text), Integer.parseInt(size[0]),
+                Integer.parseInt(size[1]));
         SwingUtilities.invokeAndWait(() -> {
-            MainWindow window = DesktopApp.open(settings, () -> { });
-            window.setLocation(0, 0);
-            window.setSize(Integer.parseInt(size[0]), Integer.parseInt(size[1]));
             for (int i = 0; i < window.tabs().getTabCount(); i++) {
                 if ("Workshop".equals(window.tabs().getTitleAt(i))) {
                     window.tabs().setSelectedIndex(i);
                 }
             }
-            holder.set(window);
         });
-        MainWindow window = holder.get();
         Thread.sleep(1500);
         String suffix = "-" + theme + ("0".equals(text) ? "" : "-text" + text) + "-" + size[0] + "x" + size[1];
         JTabbedPane pages = (JTabbedPane) NamedComponents.find(window, "workshop.pages");
@@ -68,22 +54,10 @@ public final class WorkshopScreenshots {
             int index = page;
             SwingUtilities.invokeAndWait(() -> pages.setSelectedIndex(index));
             Thread.sleep(800);
-            write(window, folder.resolve(names[page] + suffix + ".png"));
+            ShotWindow.capture(window.getRootPane(), folder.resolve(names[page] + suffix + ".png"));
         }
         SwingUtilities.invokeAndWait(window::dispose);
         System.exit(0);
     }
 
-
-    /** Captures the window from the screen, as a person sees it. */
-    private static void write(MainWindow window, Path file) throws Exception {
-        AtomicReference<Rectangle> bounds = new AtomicReference<>();
-        SwingUtilities.invokeAndWait(() -> {
-            Point corner = window.getRootPane().getLocationOnScreen();
-            bounds.set(new Rectangle(corner, window.getRootPane().getSize()));
-        });
-        BufferedImage picture = new Robot().createScreenCapture(bounds.get());
-        ImageIO.write(picture, "png", file.toFile());
-        System.out.println("wrote " + file);
-    }
 }
