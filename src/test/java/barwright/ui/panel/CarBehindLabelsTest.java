@@ -75,7 +75,7 @@ class CarBehindLabelsTest {
                         check(faults, where, "force label", placed.forceLabel(), placed, size[0]);
                         check(faults, where, "roll centre label", placed.rollCentreName(), placed, size[0]);
                         if (compact) {
-                            overlaps(placed, size[0], size[1]).forEach(fault -> faults.add(where + ": " + fault));
+                            CarPictureChecks.overlaps(placed, size[0], size[1]).forEach(fault -> faults.add(where + ": " + fault));
                             named += placed.labels().isEmpty() ? 0 : 1;
                         } else if (placed.labels().size() != 2) {
                             faults.add(where + ": a name left out of the full picture");
@@ -92,41 +92,6 @@ class CarBehindLabelsTest {
             assertThat(named).isGreaterThan(checked / 4);
         }
         assertThat(faults).isEmpty();
-    }
-
-    /**
-     * @return a line for each pair of the picture's words (the names beside the car, the wheel loads' figures)
-     * that overlap, for a word over the car or off the picture, and for the words above the drawing reaching
-     * down to the car
-     */
-    static List<String> overlaps(CarBehindView.Placement placed, int width, int height) {
-        List<String> faults = new ArrayList<>();
-        List<Rectangle2D> words = new ArrayList<>(placed.labels());
-        words.addAll(placed.loadFigures());
-        for (int i = 0; i < words.size(); i++) {
-            Rectangle2D word = words.get(i);
-            for (int j = i + 1; j < words.size(); j++) {
-                if (word.intersects(words.get(j))) {
-                    faults.add("words " + word + " and " + words.get(j) + " overlap");
-                }
-            }
-            List<Rectangle2D> car = new ArrayList<>(placed.tyres());
-            car.add(placed.body());
-            for (Rectangle2D part : car) {
-                if (part.intersects(word)) {
-                    faults.add("words " + word + " over the car " + part);
-                }
-            }
-            if (word.getX() < 0 || word.getMaxX() > width || word.getY() < 0 || word.getMaxY() > height) {
-                faults.add("words " + word + " off the picture " + width + "x" + height);
-            }
-        }
-        double carTop = Math.min(placed.body().getY(), Math.min(placed.tyres().get(0).getY(),
-                placed.tyres().get(1).getY()));
-        if (placed.wordsBottom() > carTop) {
-            faults.add("the words above the drawing reach " + placed.wordsBottom() + ", the car's top is " + carTop);
-        }
-        return faults;
     }
 
     private static void check(List<String> faults, String where, String what, Rectangle2D label,
