@@ -1,12 +1,10 @@
 package barwright.ui.present;
 
-import barwright.io.KeyPath;
 import barwright.ui.NamedComponents;
 import barwright.ui.app.Themes;
 import barwright.ui.panel.CarBehindView;
 import barwright.ui.panel.CarPictureChecks;
 import barwright.ui.window.WindowFixture;
-import com.fasterxml.jackson.databind.node.DoubleNode;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -44,22 +42,8 @@ class PresentationCarPicturesTest {
     void eachPinnedCarIsDrawnLargeWithNoWordOverAnother(int width, int height, int points, Themes.Theme theme) {
         int textSize = points < 0 ? Themes.largestTextSize() : points;
         try (WindowFixture fixture = new WindowFixture(width, height, textSize)) {
-            PresentationFrame frame = GuiActionRunner.execute(() -> {
-                Themes.apply(theme, textSize);
-                PresentationFrame shown = new PresentationFrame(fixture.window.document(), fixture.window.view(),
-                        fixture.window.results());
-                shown.setBounds(0, 0, width, height);
-                shown.setVisible(true);
-                shown.togglePin();
-                double diameter = fixture.window.document().tree().path("front").path("bar").path("section")
-                        .path("outerDiameterMm").asDouble();
-                fixture.window.document().edit(KeyPath.of("front.bar.section.outerDiameterMm"),
-                        DoubleNode.valueOf(diameter + 2), null, null);
-                return shown;
-            });
+            PresentationFrame frame = PinnedPresentation.open(fixture, width, height, textSize, theme);
             try {
-                fixture.settle();
-                fixture.robot.waitForIdle();
                 List<String> faults = new ArrayList<>();
                 int drawn = 0;
                 for (int turn = 0; turn < 2; turn++) {
@@ -81,10 +65,7 @@ class PresentationCarPicturesTest {
                 assertThat(drawn).isEqualTo(6);
                 assertThat(faults).as("faults in the pinned pictures").isEmpty();
             } finally {
-                GuiActionRunner.execute(() -> {
-                    frame.close();
-                    Themes.apply(Themes.Theme.LIGHT, textSize);
-                });
+                PinnedPresentation.close(frame, textSize);
             }
         }
     }
