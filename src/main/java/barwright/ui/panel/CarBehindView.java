@@ -14,11 +14,11 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Dimension;
 import java.awt.Font;
+import java.awt.FontMetrics;
 import java.awt.Graphics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
-import java.awt.geom.AffineTransform;
-import java.awt.geom.Path2D;
+import java.awt.geom.Rectangle2D;
 import java.awt.geom.RoundRectangle2D;
 
 import java.util.ArrayList;
@@ -30,7 +30,7 @@ import java.util.List;
  */
 public final class CarBehindView extends JComponent {
     /** Body roll is a degree or two: it is drawn this many times larger so that it can be seen. */
-    static final double ROLL_DRAWN_LARGER = 5;
+    public static final double ROLL_DRAWN_LARGER = 5;
     /** The least height of the drawing itself, car and columns (pixels): judged from screenshots at 1024x768. */
     public static final int DRAWING_LEAST_HEIGHT = 240;
     private static final String LEGEND_KEY = "columns: the load each tyre puts on the road";
@@ -41,22 +41,48 @@ public final class CarBehindView extends JComponent {
     private final List<String> drawnFigures = new ArrayList<>();
     /** Where the tyres, the body and the labels were drawn at the last paint, for the tests. */
     private Placement placed;
+    /** Few words: a key beside the picture says what the columns, the dot and the arrow are. */
+    private boolean compact;
 
     /**
-     * Where the parts of the picture were drawn (pixels).
+     * Where the parts of the picture were drawn at one paint (pixels; fresh rectangles each paint).
      *
      * @param tyres          the left and the right tyre
      * @param body           the rolled body's bounds
-     * @param forceLabel     the words "m·a_y, inertial force"
-     * @param rollCentreName the words "rear roll centre"
+     * @param forceLabel     the words "m·a_y, inertial force"; null where the compact picture found no clear place
+     * @param rollCentreName the words "rear roll centre"; null where the compact picture found no clear place
+     * @param loadFigures    the four wheel loads' figures under the columns
+     * @param wordsBottom    the lowest pixel of the words above the drawing (heading, roll, key)
      */
-    record Placement(List<java.awt.geom.Rectangle2D> tyres, java.awt.geom.Rectangle2D body,
-                     java.awt.geom.Rectangle2D forceLabel, java.awt.geom.Rectangle2D rollCentreName) {
+    public record Placement(List<Rectangle2D> tyres, Rectangle2D body, Rectangle2D forceLabel,
+                            Rectangle2D rollCentreName, List<Rectangle2D> loadFigures, double wordsBottom) {
+        /** @return the names written beside the car: the force's and the roll centre's, those drawn */
+        public List<Rectangle2D> labels() {
+            List<Rectangle2D> labels = new ArrayList<>();
+            if (forceLabel != null) {
+                labels.add(forceLabel);
+            }
+            if (rollCentreName != null) {
+                labels.add(rollCentreName);
+            }
+            return labels;
+        }
     }
 
     /** @return where the parts were drawn at the last paint, or null before a result was drawn */
-    Placement placement() {
+    public Placement placement() {
         return placed;
+    }
+
+    /**
+     * Few words in the picture, for presentation mode where one key beside the pictures explains them: above
+     * the car only the body roll and the acceleration, no colour key, and the force's and the roll centre's
+     * names only where they find a place clear of the car as large as it fits.
+     */
+    public void setCompact(boolean compact) {
+        this.compact = compact;
+        revalidate();
+        repaint();
     }
 
     public CarBehindView(ResultsModel results, CorneringProbe probe, FigureFormat format) {
@@ -88,16 +114,22 @@ public final class CarBehindView extends JComponent {
         int lines = 6; // heading, roll and legend once each, and the column key, before there is a result
         if (result != null) {
             List<String> words = words(result);
-            lines = PictureText.lines(bold, words.get(0), width) + PictureText.lines(metrics, words.get(1), width)
-                    + 1 + PictureText.lines(metrics, LEGEND_KEY, width);
+            lines = PictureText.lines(bold, words.get(0), width) + (compact ? 0
+                    : PictureText.lines(metrics, words.get(1), width) + 1 + PictureText.lines(metrics, LEGEND_KEY, width));
         }
         return new Dimension(400, (lines + 2) * metrics.getHeight() + DRAWING_LEAST_HEIGHT);
     }
 
-    /** @return the heading and the body-roll line at the slider's position */
+    /** @return the heading and the body-roll line at the slider's position (compact: one line of both) */
     private List<String> words(AnalysisResult result) {
         TurnResult turnResult = result.turn(probe.turn());
         double accel = acceleration();
+        if (compact) {
+            // no-break spaces: where the line wraps, it wraps before "at", never between a figure and its unit
+            String roll = format.text(turnResult.cornering().rollAngle(accel), Quantity.ANGLE);
+            String at = "at " + format.text(accel, Quantity.ACCELERATION);
+            return List.of(("Roll " + roll).replace(' ', '\u00a0') + " " + at.replace(' ', '\u00a0'));
+        }
         String heading = String.format(format.view().locale(), "%s turn at %s (%.0f %% of the %s grip limit)",
                 probe.turn() == TurnDirection.LEFT ? "Left" : "Right", format.text(accel, Quantity.ACCELERATION),
                 probe.fractionOfLimit() * 100, format.text(turnResult.limit(), Quantity.ACCELERATION));
@@ -169,13 +201,13 @@ public final class CarBehindView extends JComponent {
         // the words first, wrapped at the picture's width so that no figure runs off its edge
         g.setColor(text);
         List<String> words = words(result);
-        String heading = words.get(0);
-        String rollText = words.get(1);
-        drawnFigures.add(heading);
-        drawnFigures.add(rollText);
-        int y = PictureText.wrapped(g, font.deriveFont(Font.BOLD), heading, 12, line, width - 24);
-        y = PictureText.wrapped(g, font, rollText, 12, y + line, width - 24);
-        y = legend(g, y + line, width - 24, font, text);
+        drawnFigures.addAll(words);
+        int y = PictureText.wrapped(g, font.deriveFont(Font.BOLD), words.get(0), 12, line, width - 24);
+        if (!compact) {
+            y = PictureText.wrapped(g, font, words.get(1), 12, y + line, width - 24);
+            y = legend(g, y + line, width - 24, font, text);
+        }
+        int wordsBottom = y + g.getFontMetrics(font).getDescent();
         int top = y + line / 2;
         int bottom = height - 8;
         // the car takes the upper part; the road's push on each tyre hangs below the ground line as columns
@@ -198,19 +230,22 @@ public final class CarBehindView extends JComponent {
         var labelMetrics = g.getFontMetrics(font);
         var smallMetrics = g.getFontMetrics(small);
         String force = "m·a_y, inertial force";
-        java.awt.geom.Rectangle2D forceLabel = null;
+        Rectangle2D forceLabel = null;
         // the car as large as fits; where the force's label then finds no clear place beside or above the car,
-        // the car is drawn a step smaller (at most 8 steps, to 36 % of its size), leaving room above its roof
+        // the car is drawn a step smaller (at most 8 steps, to 36 % of its size), leaving room above its roof;
+        // the compact picture gives up the label rather than the car's size: its key names the arrow
         double largest = scale;
-        for (int attempt = 0; attempt <= 8 && forceLabel == null; attempt++) {
+        int steps = compact ? 0 : 8;
+        for (int attempt = 0; attempt <= steps && forceLabel == null; attempt++) {
             scale = largest * Math.pow(0.88, attempt);
             halfTrack = result.vehicle().rear().track() / 2 * scale;
-            CarShape shape = shape(result, centre, ground, scale, line, roll, left, leftLoadRear <= 0,
+            CarShape shape = CarShape.of(result, centre, ground, scale, line, roll, left, leftLoadRear <= 0,
                     rightLoadRear <= 0);
-            forceLabel = forceLabelPlace(shape, labelMetrics.stringWidth(force), labelMetrics.getAscent(),
+            forceLabel = shape.forceLabelPlace(labelMetrics.stringWidth(force), labelMetrics.getAscent(),
                     labelMetrics.getDescent(), left, width, top, attempt == 8);
         }
-        CarShape car = shape(result, centre, ground, scale, line, roll, left, leftLoadRear <= 0, rightLoadRear <= 0);
+        CarShape car = CarShape.of(result, centre, ground, scale, line, roll, left, leftLoadRear <= 0,
+                rightLoadRear <= 0);
         double tyreWidth = car.tyres.get(0).getWidth();
         Color tyreFill = Palette.colour("Barwright.tyreFill", new Color(0x3A3A3A));
         for (RoundRectangle2D tyre : car.tyres) {
@@ -236,11 +271,41 @@ public final class CarBehindView extends JComponent {
         g.fillOval((int) centre - 3, (int) rollCentre - 3, 6, 6);
         // the roll centre's name on the side away from the arrow, clear of the tyres and the body
         String rollCentreName = "rear roll centre";
-        java.awt.geom.Rectangle2D name = rollCentrePlace(car, smallMetrics.stringWidth(rollCentreName),
-                smallMetrics.getAscent(), smallMetrics.getDescent(), centre, rollCentre, left, width);
+        Rectangle2D name = car.rollCentrePlace(smallMetrics.stringWidth(rollCentreName), smallMetrics.getAscent(),
+                smallMetrics.getDescent(), centre, left, width, forceLabel, !compact);
+        if (name != null) {
+            rollCentreName(g, name, rollCentreName, smallMetrics, centre, rollCentre);
+        }
+
+        arrow(g, cgX, cgY, (left ? 1 : -1) * bodyHalf * (0.3 + 0.5 * probe.fractionOfLimit()), text);
+        g.setFont(font);
+        g.setColor(text);
+        // D'Alembert's inertial force on the sprung mass, pointing to the outside of the turn; its name clear of
+        // the body and the tyres, a thin line leading to the arrow where it stands away from it
+        if (forceLabel != null) {
+            forceLabel(g, forceLabel, force, labelMetrics, cgX, cgY, bodyHalf, left, text);
+        }
+
+        double maxLoad = Math.max(Math.max(atLimit.frontOutside(), atLimit.rearOutside()), 1);
+        double columnHeight = bottom - ground - line * 2.2;
+        // each side's figures stay clear of the other side's, however small the car is drawn
+        g.setFont(font.deriveFont(font.getSize2D() * 0.9f));
+        double spread = Math.max(halfTrack, g.getFontMetrics().stringWidth("00000 lbf") * 0.6);
+        List<Rectangle2D> figures = new ArrayList<>();
+        columns(g, centre - spread, new double[]{leftLoadFront, leftLoadRear}, maxLoad, columnHeight, ground,
+                font, width, figures);
+        columns(g, centre + spread, new double[]{rightLoadFront, rightLoadRear}, maxLoad, columnHeight, ground,
+                font, width, figures);
+        placed = new Placement(List.of(car.tyres.get(0).getBounds2D(), car.tyres.get(1).getBounds2D()),
+                car.body.getBounds2D(), forceLabel, name, figures, wordsBottom);
+    }
+
+    /** Writes the roll centre's name in its place, on a light box, a thin line leading back to the dot. */
+    private static void rollCentreName(Graphics2D g, Rectangle2D name, String words, FontMetrics metrics,
+                                       double centre, double rollCentre) {
         int nameX = (int) name.getX();
-        int nameY = (int) (name.getY() + smallMetrics.getAscent());
-        if (Math.abs(name.getCenterY() - rollCentre) > smallMetrics.getHeight()
+        int nameY = (int) (name.getY() + metrics.getAscent());
+        if (Math.abs(name.getCenterY() - rollCentre) > metrics.getHeight()
                 || Math.abs(name.getCenterX() - centre) > name.getWidth() / 2 + 12) {
             // moved away from its dot: a thin line leads back to it
             g.setStroke(new BasicStroke(1f));
@@ -251,17 +316,12 @@ public final class CarBehindView extends JComponent {
         g.setColor(Palette.colour("Panel.background", Color.WHITE));
         g.fillRect(nameX - 2, (int) name.getY(), (int) name.getWidth() + 4, (int) name.getHeight());
         g.setColor(Palette.muted());
-        g.drawString(rollCentreName, nameX, nameY);
+        g.drawString(words, nameX, nameY);
+    }
 
-        arrow(g, cgX, cgY, (left ? 1 : -1) * bodyHalf * (0.3 + 0.5 * probe.fractionOfLimit()), text);
-        g.setFont(font);
-        g.setColor(text);
-        // D'Alembert's inertial force on the sprung mass, pointing to the outside of the turn; its name clear of
-        // the body and the tyres, a thin line leading to the arrow where it stands away from it
-        if (forceLabel == null) {
-            forceLabel = new java.awt.geom.Rectangle2D.Double(left ? width - 4 - labelMetrics.stringWidth(force) : 4,
-                    top, labelMetrics.stringWidth(force), labelMetrics.getHeight());
-        }
+    /** Writes the force's name in its place, a thin line leading to the middle of the arrow. */
+    private void forceLabel(Graphics2D g, Rectangle2D forceLabel, String force, FontMetrics labelMetrics,
+                            double cgX, double cgY, double bodyHalf, boolean left, Color text) {
         double arrowMiddle = cgX + (left ? 1 : -1) * bodyHalf * (0.15 + 0.25 * probe.fractionOfLimit());
         g.setStroke(new BasicStroke(1f));
         g.setColor(Palette.muted());
@@ -273,18 +333,6 @@ public final class CarBehindView extends JComponent {
         g.draw(new java.awt.geom.Line2D.Double(leadX, leadY, arrowMiddle, cgY - 3));
         g.setColor(text);
         g.drawString(force, (int) forceLabel.getX(), (int) (forceLabel.getY() + labelMetrics.getAscent()));
-        placed = new Placement(List.of(car.tyres.get(0).getBounds2D(), car.tyres.get(1).getBounds2D()),
-                car.body.getBounds2D(), forceLabel, name);
-
-        double maxLoad = Math.max(Math.max(atLimit.frontOutside(), atLimit.rearOutside()), 1);
-        double columnHeight = bottom - ground - line * 2.2;
-        // each side's figures stay clear of the other side's, however small the car is drawn
-        g.setFont(font.deriveFont(font.getSize2D() * 0.9f));
-        double spread = Math.max(halfTrack, g.getFontMetrics().stringWidth("00000 lbf") * 0.6);
-        columns(g, centre - spread, new double[]{leftLoadFront, leftLoadRear}, maxLoad, columnHeight, ground,
-                font, width);
-        columns(g, centre + spread, new double[]{rightLoadFront, rightLoadRear}, maxLoad, columnHeight, ground,
-                font, width);
     }
 
     /**
@@ -294,7 +342,7 @@ public final class CarBehindView extends JComponent {
      * overlaps another or runs off the edge however small the picture.
      */
     private void columns(Graphics2D g, double tyreX, double[] values, double maxLoad, double height, int ground,
-                         Font font, int width) {
+                         Font font, int width, List<Rectangle2D> figures) {
         Font small = font.deriveFont(font.getSize2D() * 0.9f);
         g.setFont(small);
         var metrics = g.getFontMetrics();
@@ -310,7 +358,10 @@ public final class CarBehindView extends JComponent {
             int labelWidth = metrics.stringWidth(label);
             int labelX = (int) Math.round(tyreX - labelWidth / 2.0);
             labelX = Math.max(4, Math.min(labelX, width - 4 - labelWidth));
-            g.drawString(label, labelX, (int) (ground + 4 + height + metrics.getAscent() + i * metrics.getHeight()));
+            int baseline = (int) (ground + 4 + height + metrics.getAscent() + i * metrics.getHeight());
+            g.drawString(label, labelX, baseline);
+            figures.add(new Rectangle2D.Double(labelX, baseline - metrics.getAscent(), labelWidth,
+                    metrics.getAscent() + metrics.getDescent()));
         }
     }
 
@@ -338,127 +389,6 @@ public final class CarBehindView extends JComponent {
         }
         return PictureText.wrapped(g, font, LEGEND_KEY, 12,
                 y + metrics.getHeight(), width);
-    }
-
-    /** The car's outline at a scale: both tyres, the rolled body, its centre of mass and the roll centre. */
-    private static final class CarShape {
-        final List<RoundRectangle2D> tyres;
-        final java.awt.Shape body;
-        final java.awt.geom.Point2D cg;
-        final double rollCentreY;
-
-        CarShape(List<RoundRectangle2D> tyres, java.awt.Shape body, java.awt.geom.Point2D cg, double rollCentreY) {
-            this.tyres = tyres;
-            this.body = body;
-            this.cg = cg;
-            this.rollCentreY = rollCentreY;
-        }
-    }
-
-    private static CarShape shape(AnalysisResult result, double centre, int ground, double scale, int line,
-                                  double roll, boolean left, boolean leftLifted, boolean rightLifted) {
-        double halfTrack = result.vehicle().rear().track() / 2 * scale;
-        double tyreWidth = 0.21 * scale;
-        double tyreHeight = 0.6 * scale;
-        int lift = (int) Math.max(4, line * 0.5);
-        List<RoundRectangle2D> tyres = new ArrayList<>();
-        for (int side = -1; side <= 1; side += 2) {
-            double bottom = ground - ((side < 0 ? leftLifted : rightLifted) ? lift : 0);
-            tyres.add(new RoundRectangle2D.Double(centre + side * halfTrack - tyreWidth / 2, bottom - tyreHeight,
-                    tyreWidth, tyreHeight, tyreWidth * 0.5, tyreWidth * 0.5));
-        }
-        double rollCentre = ground - result.vehicle().rear().rollCentreHeight() * scale;
-        AffineTransform rolled = AffineTransform.getRotateInstance((left ? 1 : -1) * roll * ROLL_DRAWN_LARGER,
-                centre, rollCentre);
-        Path2D body = new Path2D.Double();
-        double bodyHalf = halfTrack - tyreWidth * 0.6;
-        double sill = ground - 0.42 * scale;
-        double waist = ground - 0.95 * scale;
-        double roof = ground - 1.32 * scale;
-        body.moveTo(centre - bodyHalf, sill);
-        body.lineTo(centre - bodyHalf, waist);
-        body.lineTo(centre - bodyHalf * 0.7, roof);
-        body.lineTo(centre + bodyHalf * 0.7, roof);
-        body.lineTo(centre + bodyHalf, waist);
-        body.lineTo(centre + bodyHalf, sill);
-        body.closePath();
-        double cgY = ground - result.masses().sprungCgHeight() * scale;
-        return new CarShape(tyres, rolled.createTransformedShape(body),
-                rolled.transform(new java.awt.geom.Point2D.Double(centre, cgY), null), rollCentre);
-    }
-
-    /** @return whether the words' box keeps a few pixels clear of both tyres and the body, inside the picture */
-    private static boolean clear(java.awt.geom.Rectangle2D words, CarShape car, int width, double top) {
-        java.awt.geom.Rectangle2D padded = new java.awt.geom.Rectangle2D.Double(words.getX() - 3, words.getY() - 3,
-                words.getWidth() + 6, words.getHeight() + 6);
-        if (words.getX() < 2 || words.getMaxX() > width - 2 || words.getY() < top) {
-            return false;
-        }
-        for (RoundRectangle2D tyre : car.tyres) {
-            if (tyre.getBounds2D().intersects(padded)) {
-                return false;
-            }
-        }
-        return !car.body.getBounds2D().intersects(padded); // its bounds: a margin about the rolled corners
-    }
-
-    /**
-     * @return a place for the force's name clear of the body and the tyres: above the roof on the outside of
-     * the turn, beside the outside tyre, or under the words at the top; null where none is clear (with
-     * {@code aboveRoof}, the roof's line is always taken: the car was drawn smaller to leave it)
-     */
-    private static java.awt.geom.Rectangle2D forceLabelPlace(CarShape car, int textWidth, int ascent, int descent,
-                                                             boolean left, int width, double top,
-                                                             boolean aboveRoof) {
-        java.awt.geom.Rectangle2D body = car.body.getBounds2D();
-        double height = ascent + descent;
-        double cgX = car.cg.getX();
-        double outsideX = left ? cgX + 12 : cgX - 12 - textWidth;
-        outsideX = Math.max(4, Math.min(outsideX, width - 4 - textWidth));
-        double roofY = body.getY() - 6 - height;
-        RoundRectangle2D outsideTyre = car.tyres.get(left ? 1 : 0);
-        double besideX = left ? outsideTyre.getMaxX() + 8 : outsideTyre.getX() - 8 - textWidth;
-        java.awt.geom.Rectangle2D[] places = {
-                new java.awt.geom.Rectangle2D.Double(outsideX, roofY, textWidth, height),
-                new java.awt.geom.Rectangle2D.Double(besideX, car.cg.getY() - height - 4, textWidth, height),
-                new java.awt.geom.Rectangle2D.Double(outsideX, top, textWidth, height)};
-        for (java.awt.geom.Rectangle2D place : places) {
-            if (clear(place, car, width, top)) {
-                return place;
-            }
-        }
-        return aboveRoof ? new java.awt.geom.Rectangle2D.Double(outsideX, Math.max(top, roofY), textWidth, height)
-                : null;
-    }
-
-    /**
-     * @return a place for the roll centre's name: beside its dot on the side away from the arrow, or beyond the
-     * tyre on that side, or beyond the other tyre, or under the ground line; the first clear of the tyres and
-     * the body
-     */
-    private static java.awt.geom.Rectangle2D rollCentrePlace(CarShape car, int textWidth, int ascent, int descent,
-                                                             double centre, double rollCentre, boolean left,
-                                                             int width) {
-        double height = ascent + descent;
-        // beside its dot, but above the ground line, clear of the load columns that hang below it
-        double ground = Math.max(car.tyres.get(0).getMaxY(), car.tyres.get(1).getMaxY());
-        double y = Math.min(rollCentre - height / 2, ground - 3 - height);
-        RoundRectangle2D awayTyre = car.tyres.get(left ? 0 : 1);
-        RoundRectangle2D otherTyre = car.tyres.get(left ? 1 : 0);
-        java.awt.geom.Rectangle2D[] places = {
-                new java.awt.geom.Rectangle2D.Double(left ? centre - 8 - textWidth : centre + 8, y, textWidth, height),
-                new java.awt.geom.Rectangle2D.Double(left ? awayTyre.getX() - 8 - textWidth : awayTyre.getMaxX() + 8,
-                        y, textWidth, height),
-                new java.awt.geom.Rectangle2D.Double(left ? otherTyre.getMaxX() + 8 : otherTyre.getX() - 8 - textWidth,
-                        y, textWidth, height)};
-        for (java.awt.geom.Rectangle2D place : places) {
-            if (clear(place, car, width, 0)) {
-                return place;
-            }
-        }
-        double lowest = Math.max(car.tyres.get(0).getMaxY(), car.tyres.get(1).getMaxY());
-        return new java.awt.geom.Rectangle2D.Double(Math.max(4, Math.min(centre - textWidth / 2.0,
-                width - 4 - textWidth)), lowest + 4, textWidth, height);
     }
 
     private static void arrow(Graphics2D g, double x, double y, double length, Color colour) {

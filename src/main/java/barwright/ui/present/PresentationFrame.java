@@ -76,7 +76,11 @@ public final class PresentationFrame extends JFrame {
     private final FigureFormat format;
     private final CorneringProbe probe = new CorneringProbe();
     private final JPanel pictures = new JPanel(new GridLayout(1, 2, 12, 0));
+    /** The car tab: the pictures under their shared key. */
+    private final JPanel carTab = new JPanel(new BorderLayout(0, 4));
     private final JTabbedPane views = new JTabbedPane();
+    /** Each tab's page: its picture or chart, and the figures' column while it is the tab shown. */
+    private final List<JPanel> pages = new ArrayList<>();
     /** The figures' column beside the picture: each name over its value; it takes the width it needs. */
     private final JPanel figures = new JPanel();
     private final List<QuickControl> controls = new ArrayList<>();
@@ -105,27 +109,30 @@ public final class PresentationFrame extends JFrame {
 
         controlsPanel = controls();
         views.setName("presentation.views");
-        views.addTab("Car from behind", pictures);
+        carTab.add(new PictureKey(), BorderLayout.NORTH);
+        carTab.add(pictures, BorderLayout.CENTER);
+        addPage("Car from behind", carTab);
         for (String title : CHART_TITLES) {
-            views.addTab(title, new JPanel());
+            addPage(title, new JPanel());
         }
-        views.addChangeListener(event -> refreshCharts());
+        views.addChangeListener(event -> {
+            figuresBesideShownPage();
+            refreshCharts();
+        });
         figures.setName("presentation.figures");
         figures.setLayout(new BoxLayout(figures, BoxLayout.Y_AXIS));
         figures.setBorder(BorderFactory.createEmptyBorder(4, 12, 4, 12));
         caution.setName("presentation.caution");
         caution.setBorder(BorderFactory.createEmptyBorder(4, 12, 4, 12));
 
-        // the figures' column beside the picture takes the width it needs, the picture the rest; the controls
-        // and the caution run under them both
-        JPanel middle = new JPanel(new BorderLayout(8, 0));
-        middle.add(views, BorderLayout.CENTER);
-        middle.add(figures, BorderLayout.EAST);
+        // the tabs' titles run the whole width, in one row where they fit; under them the figures' column beside
+        // the picture takes the width it needs, the picture the rest; the controls and the caution run under both
+        figuresBesideShownPage();
         JPanel bottom = new JPanel(new BorderLayout());
         bottom.add(controlsPanel, BorderLayout.CENTER);
         bottom.add(scrolledWhereShort(caution), BorderLayout.SOUTH);
         JPanel content = new JPanel(new BorderLayout(8, 4));
-        content.add(middle, BorderLayout.CENTER);
+        content.add(views, BorderLayout.CENTER);
         content.add(bottom, BorderLayout.SOUTH);
         setContentPane(content);
         bindKeys(content);
@@ -147,6 +154,22 @@ public final class PresentationFrame extends JFrame {
         document.addListener(documentChanged);
         refreshControls();
         refresh();
+    }
+
+    private void addPage(String title, JComponent shown) {
+        JPanel page = new JPanel(new BorderLayout(8, 0));
+        page.add(shown, BorderLayout.CENTER);
+        pages.add(page);
+        views.addTab(title, page);
+    }
+
+    /** Moves the figures' column to the page of the tab shown: one column, beside whichever view is up. */
+    private void figuresBesideShownPage() {
+        JPanel page = pages.get(Math.max(0, views.getSelectedIndex()));
+        if (figures.getParent() != page) {
+            page.add(figures, BorderLayout.EAST);
+            page.revalidate();
+        }
     }
 
     /** The large text for the window's height now (before it is shown: 1.6 times the window's text). */
@@ -364,10 +387,10 @@ public final class PresentationFrame extends JFrame {
             }
         }
         refreshCharts();
-        enlarge(pictures);
+        enlarge(carTab);
         if (pinned != null) {
             // two cars side by side: a smaller text keeps each one's headings whole
-            setFontUnder(pictures, large.deriveFont(large.getSize2D() * 0.75f));
+            setFontUnder(carTab, large.deriveFont(large.getSize2D() * 0.75f));
         }
         revalidate();
         repaint();
@@ -377,7 +400,9 @@ public final class PresentationFrame extends JFrame {
         JPanel panel = new JPanel(new BorderLayout());
         JLabel title = new JLabel(caption, SwingConstants.CENTER);
         panel.add(title, BorderLayout.NORTH);
-        panel.add(new CarBehindView(model, probe, format), BorderLayout.CENTER);
+        CarBehindView car = new CarBehindView(model, probe, format);
+        car.setCompact(true); // the key above the pictures says what the columns, the dot and the arrow are
+        panel.add(car, BorderLayout.CENTER);
         return panel;
     }
 
@@ -398,7 +423,10 @@ public final class PresentationFrame extends JFrame {
         Chart chart = Comparison.charts(setups, analysed).get(index - 1);
         JComponent drawn = ComparisonCharts.panel(chart, setups.size(), view, "presentation.chart");
         enlarge(drawn);
-        views.setComponentAt(index, drawn);
+        JPanel page = pages.get(index);
+        page.remove(((BorderLayout) page.getLayout()).getLayoutComponent(BorderLayout.CENTER));
+        page.add(drawn, BorderLayout.CENTER);
+        page.revalidate();
     }
 
     /** Sets the large text on every component under {@code root} (the car picture scales its own drawing with it). */

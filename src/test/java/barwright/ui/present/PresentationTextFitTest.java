@@ -1,9 +1,7 @@
 package barwright.ui.present;
 
-import barwright.io.KeyPath;
 import barwright.ui.app.Themes;
 import barwright.ui.window.WindowFixture;
-import com.fasterxml.jackson.databind.node.DoubleNode;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -40,22 +38,8 @@ class PresentationTextFitTest {
     void everyTextIsShownWhole(int width, int height, int points, Themes.Theme theme) {
         int textSize = points < 0 ? Themes.largestTextSize() : points;
         try (WindowFixture fixture = new WindowFixture(width, height, textSize)) {
-            PresentationFrame frame = GuiActionRunner.execute(() -> {
-                Themes.apply(theme, textSize);
-                PresentationFrame shown = new PresentationFrame(fixture.window.document(), fixture.window.view(),
-                        fixture.window.results());
-                shown.setBounds(0, 0, width, height);
-                shown.setVisible(true);
-                shown.togglePin();
-                double diameter = fixture.window.document().tree().path("front").path("bar").path("section")
-                        .path("outerDiameterMm").asDouble();
-                fixture.window.document().edit(KeyPath.of("front.bar.section.outerDiameterMm"),
-                        DoubleNode.valueOf(diameter + 2), null, null);
-                return shown;
-            });
+            PresentationFrame frame = PinnedPresentation.open(fixture, width, height, textSize, theme);
             try {
-                fixture.settle();
-                fixture.robot.waitForIdle();
                 List<String> cut = GuiActionRunner.execute(() -> {
                     frame.validate();
                     List<String> found = new ArrayList<>();
@@ -66,10 +50,7 @@ class PresentationTextFitTest {
                 assertThat(lines).hasSize(6).allSatisfy(line -> assertThat(line).contains(" \u2192 "));
                 assertThat(cut).as("texts not shown whole").isEmpty();
             } finally {
-                GuiActionRunner.execute(() -> {
-                    frame.close();
-                    Themes.apply(Themes.Theme.LIGHT, textSize);
-                });
+                PinnedPresentation.close(frame, textSize);
             }
         }
     }
