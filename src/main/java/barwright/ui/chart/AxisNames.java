@@ -1,14 +1,16 @@
 package barwright.ui.chart;
 
-import org.jfree.chart.ChartPanel;
+import org.jfree.chart.ChartRenderingInfo;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.Axis;
-import org.jfree.chart.event.ChartProgressEvent;
 import org.jfree.chart.plot.CategoryPlot;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.Plot;
+import org.jfree.chart.plot.PlotOrientation;
+import org.jfree.chart.plot.PlotRenderingInfo;
 import org.jfree.chart.plot.XYPlot;
 
+import java.awt.Component;
 import java.awt.Font;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
@@ -17,78 +19,77 @@ import java.util.Map;
 import java.util.WeakHashMap;
 
 /**
- * Keeps each vertical axis's name no longer than the plot it stands beside. JFreeChart centres the name on the
- * plot and lets a longer one run past it, over the chart's title; with the largest text on a short chart
- * ("Vertical load on the wheel (N)" beside 280 px of plot) it did. After each drawing the name's font is made
- * just small enough to fit (never under {@link #SMALLEST_POINTS}), and back to the theme's size where there is
- * room again. Event thread.
+ * Keeps each axis's name within the room the chart has for it. JFreeChart centres the name on the plot and lets a
+ * longer one run past it: a vertical axis's over the chart's title or off its top ("Vertical load on the wheel (N)"
+ * beside 280 px of plot), a horizontal axis's off the chart's sides. After each drawing the name's font is made just
+ * small enough to fit (never under {@link #SMALLEST_POINTS}), and back to the theme's size where there is room
+ * again; a name too long even at that size gives way to its unit alone ("(deg/g)"), the words being in the
+ * chart's title or legend. Which axes stand upright depends on the plot's orientation: a horizontal bar chart's value axis lies
+ * along the bottom and is measured against the plot's width. Event thread.
  */
-final class VerticalAxisLabels {
+final class AxisNames {
     static final int SMALLEST_POINTS = 9;
-    /** The share of the plot's height the name may take. */
+    /** The share of the plot's height a vertical axis's name may take. */
     private static final double SHARE_OF_PLOT = 0.95;
+    /** Room kept free at either end of a horizontal axis's name (pixels). */
+    private static final int END_ROOM = 4;
 
-    /** Each axis's own font as the theme set it, and the font this class set last. */
-    private final Map<Axis, Font[]> fonts = new WeakHashMap<>();
-    private final ChartPanel panel;
+    /**
+     * Each axis's own name and font as its chart and the theme set them, and what this class set last: one record
+     * for the chart on screen and the same chart written to a file at another size.
+     */
+    private static final Map<Axis, Own> OWN = new WeakHashMap<>();
 
-    private VerticalAxisLabels(ChartPanel panel) {
-        this.panel = panel;
+    private AxisNames() {
     }
 
-    /** Fits the panel's chart after each drawing, and any chart put in the panel later. */
-    static void fitAfterEachDrawing(ChartPanel panel) {
-        VerticalAxisLabels fitter = new VerticalAxisLabels(panel);
-        org.jfree.chart.event.ChartProgressListener listener = event -> {
-            if (event.getType() == ChartProgressEvent.DRAWING_FINISHED) {
-                fitter.fit();
-            }
-        };
-        if (panel.getChart() != null) {
-            panel.getChart().addProgressListener(listener);
-        }
-        panel.addPropertyChangeListener("chart", change -> {
-            if (change.getOldValue() instanceof JFreeChart old) {
-                old.removeProgressListener(listener);
-            }
-            if (change.getNewValue() instanceof JFreeChart chart) {
-                chart.addProgressListener(listener);
-            }
-        });
+    /** An axis and the length its name may have. */
+    private record Room(Axis axis, double length) {
     }
 
-    private void fit() {
-        JFreeChart chart = panel.getChart();
-        if (chart == null || panel.getChartRenderingInfo() == null) {
-            return;
-        }
-        Rectangle2D plotArea = panel.getChartRenderingInfo().getPlotInfo().getDataArea();
-        if (plotArea == null || plotArea.getHeight() <= 0) {
-            return;
-        }
-        List<Axis> vertical = verticalAxes(chart.getPlot());
-        // subplots share the height: each name stands beside its own part
-        double room = SHARE_OF_PLOT * plotArea.getHeight() / Math.max(1, vertical.size());
-        for (Axis axis : vertical) {
-            String label = axis.getLabel();
-            if (label == null || label.isBlank()) {
+    /** An axis's name and font as its chart set them; and the name and font this class gave it last. */
+    private static final class Own {
+        String name;
+        Font font;
+        String shownName;
+        Font shownFont;
+    }
+
+    /** @param metrics a component whose font metrics measure the names (the chart's panel) */
+    static void fit(JFreeChart chart, ChartRenderingInfo info, Component metrics) {
+        for (Room room : rooms(chart.getPlot(), info)) {
+            Axis axis = room.axis();
+            if (axis.getLabel() == null || axis.getLabel().isBlank()) {
                 continue;
             }
-            Font[] known = fonts.get(axis);
-            if (known == null || !axis.getLabelFont().equals(known[1])) {
-                known = new Font[]{axis.getLabelFont(), null}; // the theme set it anew
-                fonts.put(axis, known);
+            Own known = OWN.computeIfAbsent(axis, key -> new Own());
+            if (!axis.getLabel().equals(known.shownName)) {
+                known.name = axis.getLabel(); // the chart named it anew
             }
-            Font wanted = fitted(known[0], label, room);
-            known[1] = wanted;
+            if (!axis.getLabelFont().equals(known.shownFont)) {
+                known.font = axis.getLabelFont(); // the theme set it anew
+            }
+            String name = known.name;
+            Font wanted = fitted(metrics, known.font, name, room.length());
+            String unit = unit(name);
+            if (metrics.getFontMetrics(wanted).stringWidth(name) > room.length() && unit != null) {
+                // too long even at the smallest size: the unit alone, the words being in the title or legend
+                name = unit;
+                wanted = fitted(metrics, known.font, name, room.length());
+            }
+            known.shownName = name;
+            known.shownFont = wanted;
+            if (!name.equals(axis.getLabel())) {
+                axis.setLabel(name);
+            }
             if (!wanted.equals(axis.getLabelFont())) {
-                axis.setLabelFont(wanted); // redraws once; the plot's height does not depend on this font
+                axis.setLabelFont(wanted); // redraws once; the plot's size does not depend on this font
             }
         }
     }
 
-    private Font fitted(Font own, String label, double room) {
-        double width = panel.getFontMetrics(own).stringWidth(label);
+    private static Font fitted(Component metrics, Font own, String label, double room) {
+        double width = metrics.getFontMetrics(own).stringWidth(label);
         if (width <= room) {
             return own;
         }
@@ -96,25 +97,63 @@ final class VerticalAxisLabels {
         return own.deriveFont(Math.min(size, own.getSize2D()));
     }
 
-    private static List<Axis> verticalAxes(Plot plot) {
-        List<Axis> axes = new ArrayList<>();
-        if (plot instanceof CombinedDomainXYPlot combined) {
-            for (XYPlot part : combined.getSubplots()) {
-                addRangeAxes(part, axes);
-            }
-        } else if (plot instanceof XYPlot xy) {
-            addRangeAxes(xy, axes);
-        } else if (plot instanceof CategoryPlot category && category.getRangeAxis() != null) {
-            axes.add(category.getRangeAxis());
-        }
-        return axes;
+    /** @return the name's unit with its brackets, "(deg/g)" of "Roll gradient (deg/g)"; null where it has none */
+    static String unit(String name) {
+        int open = name.lastIndexOf('(');
+        int close = name.indexOf(')', open);
+        return open > 0 && close > open ? name.substring(open, close + 1) : null;
     }
 
-    private static void addRangeAxes(XYPlot plot, List<Axis> axes) {
-        for (int i = 0; i < plot.getRangeAxisCount(); i++) {
-            if (plot.getRangeAxis(i) != null) {
-                axes.add(plot.getRangeAxis(i));
+    /** @return each named axis of the plot with the length its name may take */
+    private static List<Room> rooms(Plot plot, ChartRenderingInfo info) {
+        List<Room> rooms = new ArrayList<>();
+        PlotRenderingInfo plotInfo = info.getPlotInfo();
+        Rectangle2D chartArea = info.getChartArea();
+        Rectangle2D dataArea = plotInfo.getDataArea();
+        if (plot instanceof CombinedDomainXYPlot combined) {
+            boolean upright = combined.getOrientation() == PlotOrientation.VERTICAL;
+            add(rooms, combined.getDomainAxis(), !upright, dataArea, chartArea);
+            List<XYPlot> parts = combined.getSubplots();
+            for (int i = 0; i < parts.size(); i++) {
+                // each part's name stands beside its own part of the plot
+                Rectangle2D partArea = i < plotInfo.getSubplotCount() ? plotInfo.getSubplotInfo(i).getDataArea()
+                        : dataArea;
+                for (int axis = 0; axis < parts.get(i).getRangeAxisCount(); axis++) {
+                    add(rooms, parts.get(i).getRangeAxis(axis), upright, partArea, chartArea);
+                }
             }
+        } else if (plot instanceof XYPlot xy) {
+            boolean upright = xy.getOrientation() == PlotOrientation.VERTICAL;
+            for (int axis = 0; axis < xy.getDomainAxisCount(); axis++) {
+                add(rooms, xy.getDomainAxis(axis), !upright, dataArea, chartArea);
+            }
+            for (int axis = 0; axis < xy.getRangeAxisCount(); axis++) {
+                add(rooms, xy.getRangeAxis(axis), upright, dataArea, chartArea);
+            }
+        } else if (plot instanceof CategoryPlot category) {
+            boolean upright = category.getOrientation() == PlotOrientation.VERTICAL;
+            add(rooms, category.getDomainAxis(), !upright, dataArea, chartArea);
+            add(rooms, category.getRangeAxis(), upright, dataArea, chartArea);
         }
+        return rooms;
+    }
+
+    /**
+     * @param vertical whether the axis is drawn upright: its name then runs along the plot's height; a
+     *                 horizontal axis's name is centred under (or over) the plot and may use the chart's width
+     *                 on both sides of the plot as far as the narrower side allows
+     */
+    private static void add(List<Room> rooms, Axis axis, boolean vertical, Rectangle2D plot, Rectangle2D chart) {
+        if (axis == null || plot == null) {
+            return;
+        }
+        double length;
+        if (vertical) {
+            length = SHARE_OF_PLOT * plot.getHeight();
+        } else {
+            double side = Math.min(plot.getMinX() - chart.getMinX(), chart.getMaxX() - plot.getMaxX());
+            length = plot.getWidth() + 2 * Math.max(0, side - END_ROOM);
+        }
+        rooms.add(new Room(axis, length));
     }
 }

@@ -127,10 +127,12 @@ public final class ChartStyle {
         axis.setTickMarkPaint(text);
     }
 
-    /** @return the text colour of the theme, for annotations */
-    /** @return the chart in a panel that redraws at any size (no buffer, no zoom, no pop-up menu) */
+    /**
+     * @return the chart in a panel that redraws at any size (no buffer, no zoom, no pop-up menu) and fits the
+     *         chart's words to each size: axis names, legend lines and marker labels stay inside the chart
+     */
     public static ChartPanel panel(JFreeChart chart, String name) {
-        ChartPanel panel = new ChartPanel(chart, false, false, false, true, true);
+        ChartPanel panel = new FittingChartPanel(chart);
         panel.setName(name);
         panel.setMouseWheelEnabled(false);
         panel.setPopupMenu(null);
@@ -138,7 +140,6 @@ public final class ChartStyle {
         panel.setMinimumDrawHeight(150);
         panel.setMaximumDrawWidth(4000);
         panel.setMaximumDrawHeight(3000);
-        VerticalAxisLabels.fitAfterEachDrawing(panel);
         return panel;
     }
 
@@ -186,6 +187,7 @@ public final class ChartStyle {
         }
     }
 
+    /** @return the text colour of the theme, for annotations */
     public static Color text() {
         return colour("Label.foreground", Color.BLACK);
     }

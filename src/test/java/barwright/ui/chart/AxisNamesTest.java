@@ -20,8 +20,8 @@ import static org.assertj.core.api.Assertions.assertThat;
  * A vertical axis's name no longer than the plot beside it: JFreeChart draws a longer one past the plot, over
  * the title. Runs headless: the panel is painted into an image.
  */
-class VerticalAxisLabelsTest {
-    private static final String LONG_NAME = "Vertical load on the wheel (N), a long name";
+class AxisNamesTest {
+    private static final String LONG_NAME = "Vertical load on the wheel, a long name for a test (N)";
 
     private static JFreeChart chart(float points) {
         XYSeries line = new XYSeries("line");
@@ -54,15 +54,31 @@ class VerticalAxisLabelsTest {
 
     @Test
     void aLongNameBesideAShortPlotIsMadeSmallerToFitIt() throws Exception {
-        Object[] painted = paintedAt(600, 260, 28);
+        Object[] painted = paintedAt(600, 480, 28);
         ChartPanel panel = (ChartPanel) painted[0];
         Axis axis = (Axis) painted[1];
         Rectangle2D plot = panel.getChartRenderingInfo().getPlotInfo().getDataArea();
-        double nameLength = panel.getFontMetrics(axis.getLabelFont()).stringWidth(LONG_NAME);
-        assertThat(axis.getLabelFont().getSize2D()).isLessThan(28f);
-        // the name fits the plot's height, unless the smallest size allowed is reached
-        assertThat(nameLength <= plot.getHeight()
-                || axis.getLabelFont().getSize() == VerticalAxisLabels.SMALLEST_POINTS).isTrue();
+        // guards the test itself: at its own 28 pt the name is longer than the plot is high
+        assertThat(panel.getFontMetrics(axis.getLabelFont().deriveFont(28f)).stringWidth(LONG_NAME))
+                .isGreaterThan((int) plot.getHeight());
+        assertThat(axis.getLabel()).isEqualTo(LONG_NAME);
+        assertThat(axis.getLabelFont().getSize2D()).isLessThan(28f).isGreaterThanOrEqualTo(AxisNames.SMALLEST_POINTS);
+        assertThat(panel.getFontMetrics(axis.getLabelFont()).stringWidth(LONG_NAME)).isLessThanOrEqualTo(
+                (int) plot.getHeight());
+    }
+
+    @Test
+    void aNameTooLongEvenAtTheSmallestSizeGivesWayToItsUnit() throws Exception {
+        Object[] painted = paintedAt(600, 200, 28);
+        ChartPanel panel = (ChartPanel) painted[0];
+        Axis axis = (Axis) painted[1];
+        Rectangle2D plot = panel.getChartRenderingInfo().getPlotInfo().getDataArea();
+        // guards the test itself: at the smallest size the whole name is longer than the plot is high
+        assertThat(panel.getFontMetrics(axis.getLabelFont().deriveFont((float) AxisNames.SMALLEST_POINTS))
+                .stringWidth(LONG_NAME)).isGreaterThan((int) plot.getHeight());
+        assertThat(axis.getLabel()).isEqualTo("(N)");
+        assertThat(panel.getFontMetrics(axis.getLabelFont()).stringWidth("(N)")).isLessThanOrEqualTo(
+                (int) plot.getHeight());
     }
 
     @Test
