@@ -27,6 +27,7 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
+import javax.swing.SwingUtilities;
 import javax.swing.UIManager;
 import javax.swing.table.AbstractTableModel;
 import java.awt.BorderLayout;
@@ -103,8 +104,19 @@ public final class DamperPage extends JPanel {
         // on a narrow page the chart goes under the table (FitOrScroll turns the split): the table then keeps
         // the height of its rows and the chart takes the rest, instead of a sideways-scrolled column beside a
         // chart with no room for its plot
-        split.addPropertyChangeListener(JSplitPane.ORIENTATION_PROPERTY, change -> split.setResizeWeight(
-                split.getOrientation() == JSplitPane.VERTICAL_SPLIT ? 0 : SIDE_BY_SIDE_TABLE_SHARE));
+        // rows taller (a larger text) or more of them (another axle): the divider moves to the table's new height.
+        // Set, not reset to the preferred sizes: on a short page the split squeezed the table to its header then
+        Runnable fitRows = () -> {
+            if (split.getOrientation() == JSplitPane.VERTICAL_SPLIT) {
+                split.setDividerLocation(tableScroll.getPreferredSize().height);
+            }
+        };
+        split.addPropertyChangeListener(JSplitPane.ORIENTATION_PROPERTY, change -> {
+            split.setResizeWeight(split.getOrientation() == JSplitPane.VERTICAL_SPLIT ? 0 : SIDE_BY_SIDE_TABLE_SHARE);
+            SwingUtilities.invokeLater(fitRows); // after FitOrScroll has reset the split to the preferred sizes
+        });
+        table.addPropertyChangeListener("rowHeight", change -> SwingUtilities.invokeLater(fitRows));
+        points.addTableModelListener(change -> SwingUtilities.invokeLater(fitRows));
         setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
         // the motion ratio's sentence and the help across the whole page, not in the top row or under the table:
         // at a large text, in a row or a narrow column, they took the table's rows
