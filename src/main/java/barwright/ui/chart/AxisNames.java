@@ -13,10 +13,9 @@ import org.jfree.chart.plot.XYPlot;
 import java.awt.Component;
 import java.awt.Font;
 import java.awt.geom.Rectangle2D;
+import java.lang.ref.WeakReference;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
-import java.util.WeakHashMap;
 
 /**
  * Keeps each axis's name within the room the chart has for it. JFreeChart centres the name on the plot and lets a
@@ -24,7 +23,7 @@ import java.util.WeakHashMap;
  * beside 280 px of plot), a horizontal axis's off the chart's sides. After each drawing the name's font is made just
  * small enough to fit (never under {@link #SMALLEST_POINTS}), and back to the theme's size where there is room
  * again; a name too long even at that size gives way to its unit alone ("(deg/g)"), the words being in the
- * chart's title or legend. Which axes stand upright depends on the plot's orientation: a horizontal bar chart's value axis lies
+ * chart's title or legend. The size to fit from is the one {@link ChartStyle} gives every axis name. Which axes stand upright depends on the plot's orientation: a horizontal bar chart's value axis lies
  * along the bottom and is measured against the plot's width. Event thread.
  */
 final class AxisNames {
@@ -34,12 +33,6 @@ final class AxisNames {
     /** Room kept free at either end of a horizontal axis's name (pixels). */
     private static final int END_ROOM = 4;
 
-    /**
-     * Each axis's own name and font as its chart and the theme set them, and what this class set last: one record
-     * for the chart on screen and the same chart written to a file at another size.
-     */
-    private static final Map<Axis, Own> OWN = new WeakHashMap<>();
-
     private AxisNames() {
     }
 
@@ -47,45 +40,69 @@ final class AxisNames {
     private record Room(Axis axis, double length) {
     }
 
-    /** An axis's name and font as its chart set them; and the name and font this class gave it last. */
-    private static final class Own {
-        String name;
-        Font font;
-        String shownName;
-        Font shownFont;
-    }
-
-    /** @param metrics a component whose font metrics measure the names (the chart's panel) */
+    /**
+     * @param metrics a component whose font metrics measure the names (the chart's panel)
+     */
     static void fit(JFreeChart chart, ChartRenderingInfo info, Component metrics) {
+        Font own = ChartStyle.axisNameFont(); // every chart's axis names, as ChartStyle dresses them
         for (Room room : rooms(chart.getPlot(), info)) {
             Axis axis = room.axis();
-            if (axis.getLabel() == null || axis.getLabel().isBlank()) {
+            String name = ownName(axis);
+            if (name == null || name.isBlank()) {
                 continue;
             }
-            Own known = OWN.computeIfAbsent(axis, key -> new Own());
-            if (!axis.getLabel().equals(known.shownName)) {
-                known.name = axis.getLabel(); // the chart named it anew
-            }
-            if (!axis.getLabelFont().equals(known.shownFont)) {
-                known.font = axis.getLabelFont(); // the theme set it anew
-            }
-            String name = known.name;
-            Font wanted = fitted(metrics, known.font, name, room.length());
+            Font wanted = fitted(metrics, own, name, room.length());
+            String shown = name;
             String unit = unit(name);
             if (metrics.getFontMetrics(wanted).stringWidth(name) > room.length() && unit != null) {
                 // too long even at the smallest size: the unit alone, the words being in the title or legend
-                name = unit;
-                wanted = fitted(metrics, known.font, name, room.length());
+                // (and the whole name where the pointer rests on the axis)
+                shown = unit;
+                wanted = fitted(metrics, own, shown, room.length());
             }
-            known.shownName = name;
-            known.shownFont = wanted;
-            if (!name.equals(axis.getLabel())) {
-                axis.setLabel(name);
+            keep(axis, shown.equals(name) ? null : name);
+            if (!shown.equals(axis.getLabel())) {
+                axis.setLabel(shown);
             }
             if (!wanted.equals(axis.getLabelFont())) {
                 axis.setLabelFont(wanted); // redraws once; the plot's size does not depend on this font
             }
         }
+    }
+
+    /** The whole names of the axes showing their unit alone, by the axis itself (not its equal), held weakly. */
+    private static final List<Kept> KEPT = new ArrayList<>();
+
+    private record Kept(WeakReference<Axis> axis, String name) {
+    }
+
+    /**
+     * @return the axis's name as its chart gave it: the label, or where this class showed the unit alone (and the
+     *         chart has not named the axis anew since), the whole name it kept
+     */
+    private static synchronized String ownName(Axis axis) {
+        KEPT.removeIf(kept -> kept.axis().get() == null);
+        for (Kept kept : KEPT) {
+            if (kept.axis().get() == axis && axis.getLabel() != null && axis.getLabel().equals(unit(kept.name()))) {
+                return kept.name();
+            }
+        }
+        return axis.getLabel();
+    }
+
+    /** Keeps the axis's whole name while its unit alone is shown; forgets it with null. */
+    private static synchronized void keep(Axis axis, String name) {
+        KEPT.removeIf(kept -> kept.axis().get() == null || kept.axis().get() == axis);
+        if (name != null) {
+            KEPT.add(new Kept(new WeakReference<>(axis), name));
+        }
+    }
+
+    /** @return the name's unit with its brackets, "(deg/g)" of "Roll gradient (deg/g)"; null where it has none */
+    static String unit(String name) {
+        int open = name.lastIndexOf('(');
+        int close = name.indexOf(')', open);
+        return open > 0 && close > open ? name.substring(open, close + 1) : null;
     }
 
     private static Font fitted(Component metrics, Font own, String label, double room) {
@@ -95,13 +112,6 @@ final class AxisNames {
         }
         float size = (float) Math.max(SMALLEST_POINTS, Math.floor(own.getSize2D() * room / width));
         return own.deriveFont(Math.min(size, own.getSize2D()));
-    }
-
-    /** @return the name's unit with its brackets, "(deg/g)" of "Roll gradient (deg/g)"; null where it has none */
-    static String unit(String name) {
-        int open = name.lastIndexOf('(');
-        int close = name.indexOf(')', open);
-        return open > 0 && close > open ? name.substring(open, close + 1) : null;
     }
 
     /** @return each named axis of the plot with the length its name may take */

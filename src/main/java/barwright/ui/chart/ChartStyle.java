@@ -81,7 +81,7 @@ public final class ChartStyle {
         Plot plot = chart.getPlot();
         plot.setBackgroundPaint(colour("Barwright.chart.plotBackground", background));
         plot.setOutlinePaint(grid);
-        Font axisFont = new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size));
+        Font axisFont = axisNameFont();
         Font tickFont = labelFont();
         if (plot instanceof XYPlot xy) {
             xyPlot(xy, grid, text, axisFont, tickFont);
@@ -141,6 +141,11 @@ public final class ChartStyle {
         panel.setMaximumDrawWidth(4000);
         panel.setMaximumDrawHeight(3000);
         return panel;
+    }
+
+    /** @return the font of the axes' names: the window's text size */
+    static Font axisNameFont() {
+        return new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(baseSize()));
     }
 
     /**

@@ -2,7 +2,6 @@ package barwright.ui.chart;
 
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
-import org.jfree.chart.plot.Marker;
 import org.jfree.chart.plot.Plot;
 import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.plot.PlotRenderingInfo;
@@ -21,20 +20,16 @@ import java.awt.image.BufferedImage;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
-import java.util.Map;
-import java.util.WeakHashMap;
 
 /**
  * Keeps the labels of a plot's markers inside the plot and clear of one another. JFreeChart puts a label where its
  * chart asked, and on a short plot with a large text a level line's label near the top ran off it ("static front
  * weight" cut at the top, over "on the car now"). After each drawing each label's box is worked out as JFreeChart
- * draws it; where the chart's own placement leaves a label outside the plot or over another, the labels move to
+ * draws it; where the present placement leaves a label outside the plot or over another, the labels move to
  * the first of the other sides of their lines (left or right of a vertical line, above or below a horizontal one,
  * at either end) that keeps them all inside and apart. Event thread.
  */
 final class MarkerLabels {
-    /** Each marker's placement as its chart made it: tried first every time, so it comes back when there is room. */
-    private static final Map<Marker, Placement> OWN = new WeakHashMap<>();
     private static final Graphics2D MEASURE = new BufferedImage(1, 1, BufferedImage.TYPE_INT_ARGB).createGraphics();
     /** More combinations than this are not searched: the chart's own placement stays. */
     private static final int MOST_TRIES = 4096;
@@ -89,7 +84,6 @@ final class MarkerLabels {
                     if (each instanceof ValueMarker marker && marker.getLabel() != null && !marker.getLabel().isBlank()
                             && axis(plot, domain) != null
                             && axis(plot, domain).getRange().contains(marker.getValue())) {
-                        OWN.putIfAbsent(marker, new Placement(marker.getLabelAnchor(), marker.getLabelTextAnchor()));
                         into.add(new Labelled(plot, marker, domain, area));
                     }
                 }
@@ -98,14 +92,17 @@ final class MarkerLabels {
     }
 
     /**
-     * @return a placement for each label: the charts' own where they are all inside and apart, else the first
-     *         combination (each label's own placement tried first) that is; else the one with the fewest faults
+     * @return a placement for each label: where they are now if they are all inside and apart (the chart's own
+     *         placement, the charts making their markers anew with their data), else the first combination that
+     *         is, each label's present place tried first; else the one with the fewest faults
      */
     private static List<Placement> best(List<Labelled> labels) {
         List<List<Placement>> choices = new ArrayList<>();
         long combinations = 1;
         for (Labelled label : labels) {
-            List<Placement> own = new ArrayList<>(List.of(OWN.get(label.marker())));
+            ValueMarker marker = label.marker();
+            List<Placement> own = new ArrayList<>(List.of(new Placement(marker.getLabelAnchor(),
+                    marker.getLabelTextAnchor())));
             for (Placement other : sides(label.domain(), label.plot().getOrientation())) {
                 if (!own.contains(other)) {
                     own.add(other);

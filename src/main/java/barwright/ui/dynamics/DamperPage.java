@@ -27,7 +27,6 @@ import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
-import javax.swing.SwingUtilities;
 import javax.swing.UIManager;
 import javax.swing.table.AbstractTableModel;
 import java.awt.BorderLayout;
@@ -99,24 +98,42 @@ public final class DamperPage extends JPanel {
                 + "the last two are the same point at the wheel): bump positive, rebound negative, through 0 at 0. "
                 + "Each change is one step of Edit &gt; Undo.</html>");
         help.setForeground(Palette.muted());
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, tableScroll, chart.component());
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, tableScroll, chart.component()) {
+            /**
+             * With the chart under the table, the divider stays at the table's height (its header and rows at
+             * the current text size) whenever that height changes: reset to the preferred sizes, a short page
+             * squeezed the table to its header, and a text size changed after the page was made left rows hidden.
+             * A divider the user drags stays where it is put.
+             */
+            private int placedAt = -1;
+
+            @Override
+            public void doLayout() {
+                int wanted = tableScroll.getPreferredSize().height;
+                if (getOrientation() == VERTICAL_SPLIT && wanted != placedAt) {
+                    placedAt = wanted;
+                    setDividerLocation(wanted);
+                }
+                super.doLayout();
+            }
+
+            @Override
+            public void resetToPreferredSizes() {
+                super.resetToPreferredSizes();
+                placedAt = -1; // turned (FitOrScroll): placed anew at the next layout
+            }
+        };
         split.setResizeWeight(SIDE_BY_SIDE_TABLE_SHARE);
         // on a narrow page the chart goes under the table (FitOrScroll turns the split): the table then keeps
         // the height of its rows and the chart takes the rest, instead of a sideways-scrolled column beside a
         // chart with no room for its plot
-        // rows taller (a larger text) or more of them (another axle): the divider moves to the table's new height.
-        // Set, not reset to the preferred sizes: on a short page the split squeezed the table to its header then
-        Runnable fitRows = () -> {
-            if (split.getOrientation() == JSplitPane.VERTICAL_SPLIT) {
-                split.setDividerLocation(tableScroll.getPreferredSize().height);
-            }
-        };
-        split.addPropertyChangeListener(JSplitPane.ORIENTATION_PROPERTY, change -> {
-            split.setResizeWeight(split.getOrientation() == JSplitPane.VERTICAL_SPLIT ? 0 : SIDE_BY_SIDE_TABLE_SHARE);
-            SwingUtilities.invokeLater(fitRows); // after FitOrScroll has reset the split to the preferred sizes
-        });
-        table.addPropertyChangeListener("rowHeight", change -> SwingUtilities.invokeLater(fitRows));
-        points.addTableModelListener(change -> SwingUtilities.invokeLater(fitRows));
+        split.addPropertyChangeListener(JSplitPane.ORIENTATION_PROPERTY, change -> split.setResizeWeight(
+                split.getOrientation() == JSplitPane.VERTICAL_SPLIT ? 0 : SIDE_BY_SIDE_TABLE_SHARE));
+        // the table's scroll pane is a validate root: taller rows, a larger header or other rows lay the split out
+        // again, so that its divider follows the table's height
+        table.addPropertyChangeListener("rowHeight", change -> split.revalidate());
+        table.getTableHeader().addPropertyChangeListener("font", change -> split.revalidate());
+        points.addTableModelListener(change -> split.revalidate());
         setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
         // the motion ratio's sentence and the help across the whole page, not in the top row or under the table:
         // at a large text, in a row or a narrow column, they took the table's rows

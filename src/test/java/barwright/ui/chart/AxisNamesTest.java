@@ -9,6 +9,8 @@ import org.jfree.data.xy.XYSeriesCollection;
 import org.junit.jupiter.api.Test;
 
 import javax.swing.SwingUtilities;
+import javax.swing.UIManager;
+import javax.swing.plaf.FontUIResource;
 import java.awt.Font;
 import java.awt.Graphics2D;
 import java.awt.geom.Rectangle2D;
@@ -29,7 +31,13 @@ class AxisNamesTest {
         line.add(1, 5000);
         JFreeChart chart = ChartFactory.createXYLineChart("A title", "a_y (g)", LONG_NAME,
                 new XYSeriesCollection(line));
-        chart.getXYPlot().getRangeAxis().setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(points)));
+        Object before = UIManager.get("defaultFont");
+        UIManager.put("defaultFont", new FontUIResource(Font.SANS_SERIF, Font.PLAIN, Math.round(points)));
+        try {
+            ChartStyle.apply(chart); // the axis names at the window's text size, as every chart's are
+        } finally {
+            UIManager.put("defaultFont", before);
+        }
         return chart;
     }
 
@@ -37,14 +45,13 @@ class AxisNamesTest {
     private static Object[] paintedAt(int width, int height, float points) throws Exception {
         Object[] result = new Object[2];
         SwingUtilities.invokeAndWait(() -> {
+            Object before = UIManager.get("defaultFont");
+            UIManager.put("defaultFont", new FontUIResource(Font.SANS_SERIF, Font.PLAIN, Math.round(points)));
             ChartPanel panel = ChartStyle.panel(chart(points), "test");
-            panel.setSize(width, height);
-            panel.doLayout();
-            BufferedImage image = new BufferedImage(width, height, BufferedImage.TYPE_INT_ARGB);
-            for (int i = 0; i < 2; i++) {
-                Graphics2D g = image.createGraphics();
-                panel.paint(g);
-                g.dispose();
+            try {
+                paint(panel, width, height);
+            } finally {
+                UIManager.put("defaultFont", before);
             }
             result[0] = panel;
             result[1] = panel.getChart().getXYPlot().getRangeAxis();
@@ -52,9 +59,20 @@ class AxisNamesTest {
         return result;
     }
 
+    private static void paint(ChartPanel panel, int width, int height) {
+        panel.setSize(width, height);
+        panel.doLayout();
+        BufferedImage image = new BufferedImage(width, height, BufferedImage.TYPE_INT_ARGB);
+        for (int i = 0; i < 2; i++) {
+            Graphics2D g = image.createGraphics();
+            panel.paint(g);
+            g.dispose();
+        }
+    }
+
     @Test
     void aLongNameBesideAShortPlotIsMadeSmallerToFitIt() throws Exception {
-        Object[] painted = paintedAt(600, 480, 28);
+        Object[] painted = paintedAt(600, 700, 28);
         ChartPanel panel = (ChartPanel) painted[0];
         Axis axis = (Axis) painted[1];
         Rectangle2D plot = panel.getChartRenderingInfo().getPlotInfo().getDataArea();
@@ -79,6 +97,18 @@ class AxisNamesTest {
         assertThat(axis.getLabel()).isEqualTo("(N)");
         assertThat(panel.getFontMetrics(axis.getLabelFont()).stringWidth("(N)")).isLessThanOrEqualTo(
                 (int) plot.getHeight());
+        // with room again the whole name comes back, at the size it had
+        SwingUtilities.invokeAndWait(() -> {
+            Object before = UIManager.get("defaultFont");
+            UIManager.put("defaultFont", new FontUIResource(Font.SANS_SERIF, Font.PLAIN, 28));
+            try {
+                paint(panel, 1600, 1400);
+            } finally {
+                UIManager.put("defaultFont", before);
+            }
+        });
+        assertThat(axis.getLabel()).isEqualTo(LONG_NAME);
+        assertThat(axis.getLabelFont().getSize2D()).isEqualTo(28f);
     }
 
     @Test
