@@ -20,13 +20,33 @@ public final class ChartExport {
     }
 
     public static void png(JFreeChart chart, Path target) throws FileWriteException {
+        fitWords(chart);
         AtomicFileWriter.write(target, out -> ChartUtils.writeChartAsPNG(out, chart, WIDTH, HEIGHT));
     }
 
     public static void svg(JFreeChart chart, Path target) throws FileWriteException {
+        fitWords(chart);
         SVGGraphics2D graphics = new SVGGraphics2D(WIDTH, HEIGHT);
         chart.draw(graphics, new Rectangle(0, 0, WIDTH, HEIGHT));
         AtomicFileWriter.writeText(target, graphics.getSVGDocument());
+    }
+
+    /**
+     * Draws the chart once at the file's size and fits its words to that drawing, as a panel on screen does
+     * ({@link FittingChartPanel}): names shrunk for a small window are drawn at their own size in the file. The
+     * window's panel fits them to the screen again at its next drawing.
+     */
+    private static void fitWords(JFreeChart chart) {
+        java.awt.image.BufferedImage scratch = new java.awt.image.BufferedImage(WIDTH, HEIGHT,
+                java.awt.image.BufferedImage.TYPE_INT_RGB);
+        java.awt.Graphics2D graphics = scratch.createGraphics();
+        try {
+            org.jfree.chart.ChartRenderingInfo info = new org.jfree.chart.ChartRenderingInfo();
+            chart.draw(graphics, new Rectangle(0, 0, WIDTH, HEIGHT), info);
+            FittingChartPanel.fitWords(chart, info, new javax.swing.JPanel());
+        } finally {
+            graphics.dispose();
+        }
     }
 
     /** Writes PNG or SVG by the file name's ending (.svg: SVG; anything else: PNG). */

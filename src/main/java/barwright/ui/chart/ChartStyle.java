@@ -81,7 +81,7 @@ public final class ChartStyle {
         Plot plot = chart.getPlot();
         plot.setBackgroundPaint(colour("Barwright.chart.plotBackground", background));
         plot.setOutlinePaint(grid);
-        Font axisFont = new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(size));
+        Font axisFont = axisNameFont();
         Font tickFont = labelFont();
         if (plot instanceof XYPlot xy) {
             xyPlot(xy, grid, text, axisFont, tickFont);
@@ -127,10 +127,12 @@ public final class ChartStyle {
         axis.setTickMarkPaint(text);
     }
 
-    /** @return the text colour of the theme, for annotations */
-    /** @return the chart in a panel that redraws at any size (no buffer, no zoom, no pop-up menu) */
+    /**
+     * @return the chart in a panel that redraws at any size (no buffer, no zoom, no pop-up menu) and fits the
+     *         chart's words to each size: axis names, legend lines and marker labels stay inside the chart
+     */
     public static ChartPanel panel(JFreeChart chart, String name) {
-        ChartPanel panel = new ChartPanel(chart, false, false, false, true, true);
+        ChartPanel panel = new FittingChartPanel(chart);
         panel.setName(name);
         panel.setMouseWheelEnabled(false);
         panel.setPopupMenu(null);
@@ -138,8 +140,12 @@ public final class ChartStyle {
         panel.setMinimumDrawHeight(150);
         panel.setMaximumDrawWidth(4000);
         panel.setMaximumDrawHeight(3000);
-        VerticalAxisLabels.fitAfterEachDrawing(panel);
         return panel;
+    }
+
+    /** @return the font of the axes' names: the window's text size */
+    static Font axisNameFont() {
+        return new Font(Font.SANS_SERIF, Font.PLAIN, Math.round(baseSize()));
     }
 
     /**
@@ -186,6 +192,7 @@ public final class ChartStyle {
         }
     }
 
+    /** @return the text colour of the theme, for annotations */
     public static Color text() {
         return colour("Label.foreground", Color.BLACK);
     }

@@ -30,6 +30,8 @@ import javax.swing.JTable;
 import javax.swing.UIManager;
 import javax.swing.table.AbstractTableModel;
 import java.awt.BorderLayout;
+import java.awt.Dimension;
+import java.awt.Insets;
 import java.awt.FlowLayout;
 import java.util.List;
 import java.util.Locale;
@@ -51,6 +53,14 @@ public final class DamperPage extends JPanel {
     private final Points points = new Points();
     private final JTable table;
 
+    /** The table's share of the width with the chart beside it. */
+    private static final double SIDE_BY_SIDE_TABLE_SHARE = 0.42;
+    /**
+     * The page's least height at the normal text size (doubled on a narrow page, where the chart is under the
+     * table): below it the page scrolls rather than squeezing the chart's plot away.
+     */
+    private static final int LEAST_HEIGHT = 260;
+
     public DamperPage(OpenDocument document, ViewSettings view) {
         super(new BorderLayout(8, 8));
         setName("dampers.page");
@@ -69,24 +79,73 @@ public final class DamperPage extends JPanel {
         top.add(new JLabel("Dampers on the"));
         top.add(axle);
         top.add(new JLabel("axle"));
-        top.add(ratio);
-        JPanel left = new JPanel(new BorderLayout(4, 4));
-        left.add(new JScrollPane(table), BorderLayout.CENTER);
+        JScrollPane tableScroll = new JScrollPane(table) {
+            /**
+             * As tall as the header and the rows (room for three at least) and no more, at the current text
+             * size: with the chart under it, the table does not take the chart's height with empty rows.
+             */
+            @Override
+            public Dimension getPreferredSize() {
+                Dimension wanted = super.getPreferredSize();
+                Insets border = getInsets();
+                int rows = Math.max(3, table.getRowCount()) * table.getRowHeight();
+                int header = table.getTableHeader().getPreferredSize().height;
+                int scrollBar = getHorizontalScrollBar().isVisible() ? getHorizontalScrollBar().getHeight() : 0;
+                return new Dimension(wanted.width, border.top + header + rows + scrollBar + border.bottom + 2);
+            }
+        };
         JLabel help = new JLabel("<html>Type a point's velocity or force at the damper (the first two columns; "
                 + "the last two are the same point at the wheel): bump positive, rebound negative, through 0 at 0. "
                 + "Each change is one step of Edit &gt; Undo.</html>");
         help.setForeground(Palette.muted());
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, chart.component());
-        split.setResizeWeight(0.42);
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, tableScroll, chart.component()) {
+            /**
+             * With the chart under the table, the divider stays at the table's height (its header and rows at
+             * the current text size) whenever that height changes: reset to the preferred sizes, a short page
+             * squeezed the table to its header, and a text size changed after the page was made left rows hidden.
+             * A divider the user drags stays where it is put.
+             */
+            private int placedAt = -1;
+
+            @Override
+            public void doLayout() {
+                int wanted = tableScroll.getPreferredSize().height;
+                if (getOrientation() == VERTICAL_SPLIT && wanted != placedAt) {
+                    placedAt = wanted;
+                    setDividerLocation(wanted);
+                }
+                super.doLayout();
+            }
+
+            @Override
+            public void resetToPreferredSizes() {
+                super.resetToPreferredSizes();
+                placedAt = -1; // turned (FitOrScroll): placed anew at the next layout
+            }
+        };
+        split.setResizeWeight(SIDE_BY_SIDE_TABLE_SHARE);
+        // on a narrow page the chart goes under the table (FitOrScroll turns the split): the table then keeps
+        // the height of its rows and the chart takes the rest, instead of a sideways-scrolled column beside a
+        // chart with no room for its plot
+        split.addPropertyChangeListener(JSplitPane.ORIENTATION_PROPERTY, change -> split.setResizeWeight(
+                split.getOrientation() == JSplitPane.VERTICAL_SPLIT ? 0 : SIDE_BY_SIDE_TABLE_SHARE));
+        // the table's scroll pane is a validate root: taller rows, a larger header or other rows lay the split out
+        // again, so that its divider follows the table's height
+        table.addPropertyChangeListener("rowHeight", change -> split.revalidate());
+        table.getTableHeader().addPropertyChangeListener("font", change -> split.revalidate());
+        points.addTableModelListener(change -> split.revalidate());
         setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        add(top, BorderLayout.NORTH);
-        add(split, BorderLayout.CENTER);
-        // the help across the whole page, not under the table: at a large text, as a narrow column, it took the
-        // table's rows
+        // the motion ratio's sentence and the help across the whole page, not in the top row or under the table:
+        // at a large text, in a row or a narrow column, they took the table's rows
         JPanel bottom = new JPanel(new BorderLayout(4, 4));
+        bottom.add(ratio, BorderLayout.NORTH);
         bottom.add(help, BorderLayout.CENTER);
         bottom.add(message, BorderLayout.SOUTH);
-        add(bottom, BorderLayout.SOUTH);
+        JPanel content = new JPanel(new BorderLayout(8, 8));
+        content.add(top, BorderLayout.NORTH);
+        content.add(split, BorderLayout.CENTER);
+        content.add(bottom, BorderLayout.SOUTH);
+        add(FitOrScroll.of(content, LEAST_HEIGHT, split), BorderLayout.CENTER);
         document.addListener(event -> refresh());
         view.addListener(this::refresh);
         refresh();
@@ -115,8 +174,9 @@ public final class DamperPage extends JPanel {
             return;
         }
         chart.show(axleWords(), damper, view.units());
-        ratio.setText(String.format(view.locale(), "Motion ratio %.2f (damper travel / wheel travel): at the "
-                + "wheel the velocity is divided by it and the force multiplied by it", damper.motionRatio()));
+        ratio.setText("<html>" + TurnInFigures.escape(String.format(view.locale(), "Motion ratio %.2f (damper "
+                + "travel / wheel travel): at the wheel the velocity is divided by it and the force multiplied by it",
+                damper.motionRatio())) + "</html>");
         say(" ", false);
     }
 
@@ -209,11 +269,16 @@ public final class DamperPage extends JPanel {
             String speed = velocity().symbol() + "/s";
             String push = force().symbol();
             return switch (column) {
-                case 0 -> "Velocity (" + speed + ")";
-                case 1 -> "Force (" + push + ")";
-                case 2 -> "Wheel (" + speed + ")";
-                default -> "Wheel (" + push + ")";
+                // the unit under the name: four columns side by side on a narrow page at the largest text
+                case 0 -> twoLines("Velocity", speed);
+                case 1 -> twoLines("Force", push);
+                case 2 -> twoLines("At wheel", speed);
+                default -> twoLines("At wheel", push);
             };
+        }
+
+        private static String twoLines(String name, String unit) {
+            return "<html><center>" + name + "<br>(" + unit + ")</center></html>";
         }
 
         @Override
