@@ -14,6 +14,8 @@ import java.awt.Insets;
 final class FormText extends WrappingText {
     /** The look's key of the heading font (bold, as the look's fourth heading level). */
     private static final String HEADING_FONT = "h4.font";
+    /** Spare width on a line (pixels), see lineWidth. */
+    private static final int SPARE = 2;
     private final boolean heading;
     private boolean wraps;
 
@@ -39,15 +41,23 @@ final class FormText extends WrappingText {
         this.wraps = heading || wraps;
     }
 
-    /** @return the width of the text on one line (pixels), borders included */
+    /** @return whether the text may wrap (above its field, or a heading), or keeps one line (beside its field) */
+    boolean wraps() {
+        return wraps;
+    }
+
+    /**
+     * @return the width of the text on one line (pixels), borders included, with a little to spare: the text view
+     * adds up its glyphs' widths its own way, and a label given exactly the measured width could wrap its last word
+     */
     int lineWidth() {
         FontMetrics metrics = getFontMetrics(getFont());
-        int widest = 0;
+        double widest = 0;
         for (String line : getText().split("\n", -1)) {
-            widest = Math.max(widest, metrics.stringWidth(line));
+            widest = Math.max(widest, getFont().getStringBounds(line, metrics.getFontRenderContext()).getWidth());
         }
         Insets insets = getInsets();
-        return widest + insets.left + insets.right;
+        return (int) Math.ceil(widest) + SPARE + insets.left + insets.right;
     }
 
     /** @return the width of the longest word (pixels), borders included: the text never breaks inside it */
