@@ -19,12 +19,9 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.node.TextNode;
 
-import javax.swing.Box;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
-import javax.swing.JPanel;
-import java.awt.FlowLayout;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -42,7 +39,8 @@ import static barwright.io.VehicleKeys.YOUNGS_MODULUS_GPA;
 
 /** One axle's anti-roll bar: fitted or not, material, section, lengths, arm holes and the link. */
 final class BarPage extends EditorPage {
-    static final String CUSTOM = "Custom (your own values)";
+    /** The material choice for values of your own (short: the choice keeps its width at a large text). */
+    static final String CUSTOM = "Your own values";
     private final AxlePosition axle;
     private final String bar;
     private JsonNode removedBar;
@@ -68,10 +66,13 @@ final class BarPage extends EditorPage {
 
     @Override
     protected void build(Form form) {
-        JCheckBox fitted = new JCheckBox("This axle has an anti-roll bar", isObject(bar));
+        // a short box text beside a label that wraps: the page keeps its width at a large text
+        JCheckBox fitted = new JCheckBox("Fitted on this axle", isObject(bar));
         fitted.setName(bar + ".fitted");
+        fitted.setToolTipText("Clear it to take the bar off this axle (the file keeps no bar here); tick it to put "
+                + "one back");
         fitted.addActionListener(event -> setFitted(fitted.isSelected()));
-        form.note(fitted);
+        form.field("Anti-roll bar", fitted, null, null);
         if (!isObject(bar)) {
             form.note(new WrappingText("No " + axle.key() + " bar: only the springs and tyres resist roll at this "
                     + "end."));
@@ -165,27 +166,23 @@ final class BarPage extends EditorPage {
         remove.setName(bar + ".removeHole");
         remove.setEnabled(count > 1);
         remove.addActionListener(event -> removeHole());
-        JPanel buttons = new JPanel(new FlowLayout(FlowLayout.LEFT, 0, 0));
-        buttons.setOpaque(false);
-        buttons.add(add);
-        buttons.add(Box.createHorizontalStrut(6));
-        buttons.add(remove);
-        form.note(buttons);
+        form.note(new ButtonRow(add, remove));
     }
 
     private void selectedHole(Form form) {
         int count = holeCount();
         List<String> names = new ArrayList<>();
         for (int hole = 0; hole < count; hole++) {
-            names.add("Hole " + (hole + 1) + (hole == 0 ? " (nearest the bar's axis)" : ""));
+            // short, so that the choice keeps its width at a large text; the tip says which end is which
+            names.add("Hole " + (hole + 1) + (hole == 0 ? " (innermost)" : ""));
         }
         JComboBox<String> choice = new JComboBox<>(names.toArray(String[]::new));
         choice.setName(bar + ".selectedArm");
         JsonNode selected = document.value(KeyPath.of(bar + ".selectedArm"));
         int index = selected != null && selected.canConvertToInt() ? selected.intValue() : 0;
         choice.setSelectedIndex(Math.max(0, Math.min(count - 1, index)));
-        choice.setToolTipText(Tooltips.wrap("The hole the drop link is bolted to. A hole nearer the bar's axis "
-                + "(a shorter arm) makes the bar stiffer at the wheel.", 300));
+        choice.setToolTipText(Tooltips.wrap("The hole the drop link is bolted to, counted from the innermost (nearest "
+                + "the bar's axis). A hole nearer the axis (a shorter arm) makes the bar stiffer at the wheel.", 300));
         choice.addActionListener(event -> {
             if (choice.getSelectedIndex() >= 0) {
                 document.edit(KeyPath.of(bar + ".selectedArm"), IntNode.valueOf(choice.getSelectedIndex()), null,

@@ -2,7 +2,6 @@ package barwright.ui.panel;
 
 import javax.swing.BorderFactory;
 import javax.swing.JComponent;
-import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JSeparator;
 import java.awt.GridBagConstraints;
@@ -22,6 +21,9 @@ final class Form extends PagePanel {
     /** Each labelled row: the label, the field, the unit (or null). */
     private final List<JComponent[]> rows = new ArrayList<>();
     private boolean stacked;
+    /** Times in a row the form has asked for a new height after a layout pass. */
+    private int heightAsks;
+    private static final int MOST_HEIGHT_ASKS = 4;
     private int row;
 
     Form() {
@@ -31,8 +33,7 @@ final class Form extends PagePanel {
 
     /** Starts a group with a heading and a line under it. */
     void group(String title) {
-        JLabel heading = new JLabel(title);
-        heading.putClientProperty("FlatLaf.styleClass", "h4");
+        FormText heading = FormText.heading(title);
         GridBagConstraints at = at(0, row++, 3);
         at.insets = new Insets(row == 1 ? 2 : 12, 0, 2, 0);
         add(heading, at);
@@ -60,9 +61,13 @@ final class Form extends PagePanel {
             keepWhole(component);
             component.addPropertyChangeListener("font", event -> keepWhole(component));
         }
-        JLabel name = new JLabel(label);
-        name.setLabelFor(component);
+        // a label that wraps at words when it goes above its field (a large text on a small screen): a name the
+        // assistive tools read from the field itself, as a plain label's "label for" would give it
+        FormText name = FormText.label(label);
         name.setToolTipText(component.getToolTipText());
+        if (component.getAccessibleContext().getAccessibleName() == null) {
+            component.getAccessibleContext().setAccessibleName(label);
+        }
         // two grid rows a field: the upper one stays empty until a narrow form puts the label there
         row++;
         GridBagConstraints labelAt = at(0, row, 1);
@@ -137,6 +142,22 @@ final class Form extends PagePanel {
             javax.swing.SwingUtilities.invokeLater(this::revalidate);
         }
         super.doLayout();
+        askAgainIfTextsWrapped();
+    }
+
+    /**
+     * A wrapped text's height follows the width it was just given, which the grid did not know when it shared out
+     * the heights: if the form's height no longer fits, it asks its scroll pane again once this pass is over (a
+     * few times at most, in case a scroll bar coming and going keeps changing the width).
+     */
+    private void askAgainIfTextsWrapped() {
+        int wanted = getLayout().preferredLayoutSize(this).height;
+        if (wanted == getHeight()) {
+            heightAsks = 0;
+        } else if (heightAsks < MOST_HEIGHT_ASKS) {
+            heightAsks++;
+            javax.swing.SwingUtilities.invokeLater(this::revalidate);
+        }
     }
 
     /** Sets every labelled row's constraints: each label above its field (stacked) or beside it. */
@@ -151,6 +172,7 @@ final class Form extends PagePanel {
             labelAt.insets = stackedLayout ? new Insets(4, 0, 0, 0) : new Insets(2, 0, 2, 8);
             fieldAt.gridx = stackedLayout ? 0 : 1;
             fieldAt.gridwidth = (stackedLayout ? 1 : 0) + (hasUnit ? 1 : 2);
+            ((FormText) labelled[0]).setWraps(stackedLayout);
             layout.setConstraints(labelled[0], labelAt);
             layout.setConstraints(labelled[1], fieldAt);
         }
