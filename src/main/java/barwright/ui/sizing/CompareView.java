@@ -82,10 +82,11 @@ final class CompareView extends JPanel {
         JScrollPane list = new JScrollPane(setupTable) {
             @Override
             public Dimension getPreferredSize() {
-                // four rows under the header, and some twenty characters wide, at any text size
+                // four rows under the header, and some fourteen lines of text wide (it scrolls sideways), so that
+                // at full size the results beside the setups keep the room for their columns
                 int line = setupTable.getFontMetrics(setupTable.getFont()).getHeight();
                 Insets border = getInsets();
-                return new Dimension(20 * line, setupTable.getTableHeader().getPreferredSize().height
+                return new Dimension(14 * line, setupTable.getTableHeader().getPreferredSize().height
                         + 4 * setupTable.getRowHeight() + border.top + border.bottom + 2);
             }
         };
@@ -349,7 +350,7 @@ final class CompareView extends JPanel {
         @Override
         public Object getValueAt(int row, int column) {
             if (row == shown.rows().size()) {
-                return column == 0 ? "balance at the limit (left / right turn)" : shown.balances().get(column - 1);
+                return column == 0 ? "balance at the limit, left / right" : shown.balances().get(column - 1);
             }
             FigureRow figure = shown.rows().get(row);
             return column == 0 ? figure.label() : cell(figure, column - 1);
