@@ -46,13 +46,7 @@ class CompareSmallScreenWindowTest {
     @Test
     void withTheLargestTextAt1024By768ThreeSetupsShowWholeHeadersAndAChartWithItsLegend() {
         fixture = new SizingWindowFixture(1024, 768, Themes.largestTextSize());
-        DialogFixture sizing = fixture.openTool("Compare setups…");
-        GuiActionRunner.execute(() -> {
-            SizingWindow views = fixture.views();
-            views.setSize(1024, 768);
-            views.validate();
-            return null;
-        });
+        DialogFixture sizing = fixture.openToolAtScreenSize("Compare setups…");
         fixture.robot.waitForIdle();
         CompareView view = fixture.views().compare();
         assertThat(GuiActionRunner.execute(view::setupsAndResultsTabbed)).isTrue();

@@ -33,13 +33,7 @@ class SizingSmallScreenWindowTest {
     @Test
     void withTheLargestTextAt1024By768TheTubesAreTabsAndSeveralRowsAndTheDecidingColumnsShow() {
         fixture = new SizingWindowFixture(1024, 768, Themes.largestTextSize());
-        DialogFixture sizing = fixture.openTool("Tube or solid bar of the same rate…");
-        GuiActionRunner.execute(() -> {
-            SizingWindow views = fixture.views();
-            views.setSize(1024, 768);
-            views.validate();
-            return null;
-        });
+        DialogFixture sizing = fixture.openToolAtScreenSize("Tube or solid bar of the same rate…");
         fixture.robot.waitForIdle();
         TubeView view = fixture.views().tubes();
         // side by side the settings took the width and left the results no rows at all
@@ -67,13 +61,7 @@ class SizingSmallScreenWindowTest {
     @Test
     void withTheLargestTextAt1024By768TheMapShowsTwoWholeRowsAndTwoWholeColumnsOfCells() {
         fixture = new SizingWindowFixture(1024, 768, Themes.largestTextSize());
-        fixture.openTool("Arm-hole map…");
-        GuiActionRunner.execute(() -> {
-            SizingWindow views = fixture.views();
-            views.setSize(1024, 768);
-            views.validate();
-            return null;
-        });
+        fixture.openToolAtScreenSize("Arm-hole map…");
         MapView map = fixture.views().map();
         // the club hatchback has three front holes and four rear ones
         fixture.waitFor("the map", () -> map.work().isIdle() && map.cells().size() == 12);
