@@ -7,6 +7,7 @@ import org.jfree.chart.ChartFactory;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.ui.RectangleInsets;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
@@ -59,6 +60,8 @@ public final class ComparisonCharts {
         }
         drawn.getXYPlot().setRenderer(renderer);
         ChartStyle.apply(drawn);
+        // room after each setup's name, so that a line's sample does not read as part of the name before it
+        drawn.getLegend().setItemLabelPadding(new RectangleInsets(2, 2, 2, 18));
         return drawn;
     }
 

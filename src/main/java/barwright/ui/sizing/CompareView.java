@@ -17,10 +17,10 @@ import barwright.units.Quantity;
 
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
+import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
 import javax.swing.JTextField;
 import javax.swing.UIManager;
@@ -30,8 +30,7 @@ import java.awt.Dimension;
 import java.awt.FlowLayout;
 import java.awt.Font;
 import java.awt.GridLayout;
-import java.awt.event.ComponentAdapter;
-import java.awt.event.ComponentEvent;
+import java.awt.Insets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -47,8 +46,6 @@ final class CompareView extends JPanel {
     record Entry(String name, String source, Vehicle vehicle) {
     }
 
-    /** The least height kept for the figures and charts where the view has room for the setups above them. */
-    private static final int RESULTS_HEIGHT = 260;
     private final SizingContext context;
     private final FigureFormat format;
     private final List<Entry> entries = new ArrayList<>();
@@ -63,6 +60,8 @@ final class CompareView extends JPanel {
             + "Each setup's figures show their difference from the first in brackets, in the same unit.");
     private final WorkStrip work = new WorkStrip("compare");
     private final VariantBuilder variant;
+    private final CompareResults results;
+    private final SettingsBeside layout;
     private Comparison shown;
 
     CompareView(SizingContext context) {
@@ -74,13 +73,23 @@ final class CompareView extends JPanel {
         setupTable = new FigureTable("compare.setups", setups, new String[]{"What the setup is called",
             "Where it came from"}, new int[]{fit(170, "front bar 25 mm (reference)"), 760});
         figureTable = new FigureTable("compare.figures", figures, new String[0], new int[]{180, 170, 170, 170, 170});
+        figureTable.fitColumnsToTexts(); // each setup's name in full over its column, at any text size
         charts.setName("compare.charts");
 
         JPanel buttonColumn = column(button("compare.addOpen", "Add the open car as it is now", this::addOpenCar),
                 button("compare.addFile", "Add a saved vehicle file…", this::addFile),
                 button("compare.remove", "Remove the chosen setup", this::removeChosen));
-        JScrollPane list = new JScrollPane(setupTable);
-        list.setPreferredSize(new Dimension(800, 110));
+        JScrollPane list = new JScrollPane(setupTable) {
+            @Override
+            public Dimension getPreferredSize() {
+                // four rows under the header, and some fourteen lines of text wide (it scrolls sideways), so that
+                // at full size the results beside the setups keep the room for their columns
+                int line = setupTable.getFontMetrics(setupTable.getFont()).getHeight();
+                Insets border = getInsets();
+                return new Dimension(14 * line, setupTable.getTableHeader().getPreferredSize().height
+                        + 4 * setupTable.getRowHeight() + border.top + border.bottom + 2);
+            }
+        };
         JPanel setupList = new JPanel(new BorderLayout(6, 0));
         setupList.add(list, BorderLayout.CENTER);
         setupList.add(buttonColumn, BorderLayout.EAST);
@@ -91,48 +100,28 @@ final class CompareView extends JPanel {
         JPanel controls = new JPanel(new BorderLayout());
         controls.add(naming, BorderLayout.NORTH);
         controls.add(variant, BorderLayout.CENTER);
-        PagePanel top = new PagePanel(new BorderLayout(0, 4));
+        PagePanel top = new PagePanel(new BorderLayout(0, 4)) {
+            @Override
+            public Dimension getPreferredSize() {
+                // as wide as the list with its buttons and the variant builder need: not the hint in one line
+                Insets border = getInsets();
+                int width = Math.max(list.getPreferredSize().width + 6 + buttonColumn.getPreferredSize().width,
+                        controls.getPreferredSize().width);
+                return new Dimension(width + border.left + border.right, super.getPreferredSize().height);
+            }
+        };
         top.setBorder(BorderFactory.createEmptyBorder(4, 8, 4, 8));
         top.add(hint, BorderLayout.NORTH);
         top.add(setupList, BorderLayout.CENTER);
         top.add(controls, BorderLayout.SOUTH);
-        JScrollPane topScroll = new JScrollPane(top);
-        topScroll.setBorder(null);
-        topScroll.getVerticalScrollBar().setUnitIncrement(16);
         JScrollPane figureScroll = new JScrollPane(figureTable);
-        figureScroll.setPreferredSize(new Dimension(640, 400));
+        figureScroll.setName("compare.figures.scroll");
         charts.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
-        charts.setPreferredSize(new Dimension(520, 400));
-        JSplitPane results = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, figureScroll, charts);
-        results.setResizeWeight(0.6);
-        results.setBorder(null);
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, topScroll, results);
-        split.setResizeWeight(0.5);
-        split.setBorder(null);
-        topScroll.setMinimumSize(new Dimension(0, 60));
-        results.setMinimumSize(new Dimension(0, 60));
-        placeDividerOnce(split, top);
-        add(split, BorderLayout.CENTER);
+        results = new CompareResults(figureScroll, charts);
+        layout = new SettingsBeside("compare", "Setups", SettingsBeside.settingsScroll(top, 500), results);
+        add(layout, BorderLayout.CENTER);
         add(work, BorderLayout.SOUTH);
         context.view().addListener(this::redraw);
-    }
-
-    /**
-     * The setups and the variant builder get their full height where the view has room for them and
-     * {@link #RESULTS_HEIGHT} of figures, and at most half of it where it has not (a large text size on a small
-     * screen): they scroll, and the figures and charts stay in view.
-     */
-    private static void placeDividerOnce(JSplitPane split, JPanel top) {
-        split.addComponentListener(new ComponentAdapter() {
-            @Override
-            public void componentResized(ComponentEvent event) {
-                if (split.getHeight() > 0) {
-                    split.removeComponentListener(this);
-                    split.setDividerLocation(Math.min(top.getPreferredSize().height + 2,
-                            Math.max(split.getHeight() / 2, split.getHeight() - RESULTS_HEIGHT)));
-                }
-            }
-        });
     }
 
     /** @return the width given, or wider where a large text size needs it for the sample text */
@@ -244,24 +233,22 @@ final class CompareView extends JPanel {
                 comparison -> {
                     shown = comparison;
                     redraw();
+                    layout.showResults(); // where the setups and the results are two tabs
                 });
     }
 
     private void redraw() {
         figures.fireTableStructureChanged();
-        for (int i = 0; i < figureTable.getColumnCount(); i++) {
-            figureTable.getColumnModel().getColumn(i).setPreferredWidth(i == 0
-                    ? fit(180, "front share of roll stiffness") : fit(170, "1823 N·m/deg  (+240)"));
-        }
-        int selected = Math.max(0, charts.getSelectedIndex());
-        charts.removeAll();
+        List<String> titles = new ArrayList<>();
+        List<JComponent> panels = new ArrayList<>();
         if (shown != null) {
             for (Chart chart : shown.charts()) {
-                charts.addTab(chart.title().replaceFirst(",.*", ""), ComparisonCharts.panel(chart,
-                        shown.configurations().size(), context.view(), "compare.chart." + charts.getTabCount()));
+                titles.add(chart.title().replaceFirst(",.*", ""));
+                panels.add(ComparisonCharts.panel(chart, shown.configurations().size(), context.view(),
+                        "compare.chart." + panels.size()));
             }
-            charts.setSelectedIndex(Math.min(selected, charts.getTabCount() - 1));
         }
+        results.showCharts(titles, panels);
     }
 
     /** @return the text of a figure for a setup, with its difference from the first after it */
@@ -315,6 +302,15 @@ final class CompareView extends JPanel {
         return charts;
     }
 
+    CompareResults results() {
+        return results;
+    }
+
+    /** @return true where the setups and the results are two tabs */
+    boolean setupsAndResultsTabbed() {
+        return layout.tabbed();
+    }
+
     /** The setups added, one per row. */
     private final class Setups extends TextTableModel {
         Setups() {
@@ -354,7 +350,7 @@ final class CompareView extends JPanel {
         @Override
         public Object getValueAt(int row, int column) {
             if (row == shown.rows().size()) {
-                return column == 0 ? "balance at the limit (left / right turn)" : shown.balances().get(column - 1);
+                return column == 0 ? "balance at the limit, left / right" : shown.balances().get(column - 1);
             }
             FigureRow figure = shown.rows().get(row);
             return column == 0 ? figure.label() : cell(figure, column - 1);

@@ -9,13 +9,14 @@ import barwright.ui.panel.FigureFormat;
 import barwright.units.Quantity;
 
 import javax.swing.BorderFactory;
+import javax.swing.BoxLayout;
+import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.UIManager;
 import javax.swing.border.Border;
 import java.awt.Color;
 import java.awt.Font;
-import java.awt.GridLayout;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -34,7 +35,9 @@ final class MapCellView extends JPanel {
     private boolean selected;
 
     MapCellView(MapCell cell, int row, int column) {
-        super(new GridLayout(0, 1, 0, 0));
+        super(null);
+        // lines at their own heights (a grid of equal rows gave each the large first line's height)
+        setLayout(new BoxLayout(this, BoxLayout.Y_AXIS));
         this.cell = cell;
         setName("map.cell." + row + "." + column);
         share.setName(getName() + ".share");
@@ -45,10 +48,10 @@ final class MapCellView extends JPanel {
         top.setOpaque(false);
         top.add(share, java.awt.BorderLayout.WEST);
         top.add(tag, java.awt.BorderLayout.EAST);
-        add(top);
-        add(roll);
-        add(limit);
-        add(lift);
+        for (JComponent line : new JComponent[]{top, roll, limit, lift}) {
+            line.setAlignmentX(LEFT_ALIGNMENT);
+            add(line);
+        }
         setFocusable(true);
     }
 
@@ -66,6 +69,7 @@ final class MapCellView extends JPanel {
             roll.setText("");
             limit.setText("");
             lift.setText("");
+            lift.setVisible(false);
             setToolTipText(cell.problem());
         } else {
             setBackground(MapColours.tint(figures.frontLoadTransferShare() - referenceShare));
@@ -76,6 +80,7 @@ final class MapCellView extends JPanel {
             limit.setText("limit " + format.text(figures.limit(), Quantity.ACCELERATION) + ", "
                     + figures.balance().key());
             lift.setText(liftWords(format, figures));
+            lift.setVisible(!lift.getText().isBlank()); // no empty line where no wheel lifts
             setToolTipText(details(format, figures));
         }
         frame();
@@ -127,7 +132,7 @@ final class MapCellView extends JPanel {
                 ? BorderFactory.createCompoundBorder(BorderFactory.createEmptyBorder(1, 1, 1, 1),
                 BorderFactory.createDashedBorder(MapColours.lift(), 1.5f, 4, 3, false))
                 : BorderFactory.createEmptyBorder(3, 3, 3, 3);
-        int pad = cell.current() ? 3 : 5;
+        int pad = cell.current() ? 1 : 3;
         setBorder(BorderFactory.createCompoundBorder(outer, BorderFactory.createCompoundBorder(mark,
                 BorderFactory.createEmptyBorder(pad, pad + 2, pad, pad))));
     }

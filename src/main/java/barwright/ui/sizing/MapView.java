@@ -43,7 +43,9 @@ final class MapView extends JPanel {
     private final JPanel grid = new JPanel(new GridBagLayout());
     private final QuantityField reference;
     private final WrappingText legend = new WrappingText(" ");
-    private final JButton useHoles = new JButton("Put the chosen holes in the car");
+    private final MapKey key = new MapKey();
+    private final JScrollPane scroll;
+    private final JButton useHoles = new JButton("Use the chosen holes");
     private final WorkStrip work = new WorkStrip("map");
     private final List<MapCellView> cells = new ArrayList<>();
     private final JComboBox<String> centre = new JComboBox<>(new String[]{"the car's setting now",
@@ -75,41 +77,59 @@ final class MapView extends JPanel {
         useHoles.setName("map.useHoles");
         useHoles.setToolTipText("Moves both bars' links to the chosen cell's holes; Edit > Undo takes it back");
         useHoles.addActionListener(event -> useChosen());
-        JButton csv = new JButton("Save the map as CSV…");
+        JButton csv = new JButton("Map as CSV…");
         csv.setName("map.csv");
+        csv.setToolTipText("Saves every front hole against every rear hole as a table for a spreadsheet");
         csv.addActionListener(event -> exports.mapCsv(message -> work.say(message, false)));
-        JButton sheet = new JButton("Export the setup sheet as PDF…");
+        JButton sheet = new JButton("Setup sheet as PDF…");
         sheet.setName("map.sheet");
+        sheet.setToolTipText("Writes the setup sheet of the car as it stands, with this map, to take to the track");
         sheet.addActionListener(event -> exports.setupSheet(message -> work.say(message, false)));
         exports.useReference(this::sheetReference);
         reference.setVisible(false);
         reference.unitLabel().setVisible(false);
 
-        JPanel top = new JPanel(new WrappingFlow(6, 4)); // wraps onto a second line with large text
-        top.add(new JLabel("Tint the cells by their front share against"));
+        JPanel top = new JPanel(new WrappingFlow(6, 2)); // one line at 1024 px with the largest text
+        JLabel tintLabel = new JLabel("Tint centred on");
+        tintLabel.setToolTipText("Each cell is tinted by how far its front share of load transfer lies from this");
+        top.add(tintLabel);
         top.add(centre);
         top.add(reference);
         top.add(reference.unitLabel());
-        JPanel buttons = new JPanel(new WrappingFlow(6, 2));
+        JPanel buttons = new JPanel(new WrappingFlow(6, 2)); // one row where the width allows
         buttons.add(useHoles);
         buttons.add(csv);
         buttons.add(sheet);
-        JPanel under = new JPanel(new BorderLayout());
         legend.setName("map.legend");
         // new words show from their start: setting them moves no scroll pane to their end
         ((javax.swing.text.DefaultCaret) legend.getCaret()).setUpdatePolicy(javax.swing.text.DefaultCaret.NEVER_UPDATE);
         legend.setBorder(BorderFactory.createEmptyBorder(2, 8, 2, 8));
-        under.add(SearchView.capped(legend, this, 22), BorderLayout.NORTH); // scrolls: the map keeps its room
+        key.setBorder(BorderFactory.createEmptyBorder(0, 4, 0, 4));
+        JPanel north = new JPanel(new BorderLayout());
+        north.add(top, BorderLayout.NORTH);
+        north.add(key, BorderLayout.CENTER);
+        JScrollPane explanation = SearchView.capped(legend, this, 22); // scrolls: the map keeps its room
+        north.add(explanation, BorderLayout.SOUTH);
+        key.explains(explanation);
+        addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent event) {
+                key.fitTo(getHeight());
+            }
+        });
+        JPanel under = new JPanel(new BorderLayout());
         under.add(buttons, BorderLayout.CENTER);
         under.add(work, BorderLayout.SOUTH);
         grid.setName("map.grid");
-        grid.setBorder(BorderFactory.createEmptyBorder(6, 8, 6, 8));
+        grid.setBorder(BorderFactory.createEmptyBorder(2, 4, 2, 4));
         JPanel holder = new JPanel(new BorderLayout());
         holder.add(grid, BorderLayout.NORTH);
-        JScrollPane scroll = new JScrollPane(holder);
+        scroll = new JScrollPane(holder);
         scroll.setBorder(null);
         scroll.getVerticalScrollBar().setUnitIncrement(16);
-        add(top, BorderLayout.NORTH);
+        scroll.getHorizontalScrollBar().setUnitIncrement(16);
+        scroll.setName("map.scroll");
+        add(north, BorderLayout.NORTH);
         add(scroll, BorderLayout.CENTER);
         add(under, BorderLayout.SOUTH);
         WhileShown updates = new WhileShown(this, this::carChanged);
@@ -200,7 +220,8 @@ final class MapView extends JPanel {
         chosen = null;
         cells.clear();
         grid.removeAll();
-        JLabel corner = header("<html><b>front hole</b> (rows)<br>against <b>rear hole</b> (columns)</html>");
+        JLabel corner = header("<html>rows: <b>front</b><br>columns: <b>rear</b></html>");
+        corner.setToolTipText("Each row is a front arm hole, each column a rear one; each cell the car with that pair");
         grid.add(corner, at(0, 0));
         for (int c = 0; c < map.columns().size(); c++) {
             grid.add(optionHeader(AxlePosition.REAR, map.columns().get(c)), at(c + 1, 0));
@@ -254,6 +275,7 @@ final class MapView extends JPanel {
                 label.setText(optionWords((AxlePosition) key[0], (BarOption) key[1]));
             }
         }
+        key.show(format.text(centreShare, Quantity.SHARE));
         legend.setText("Tint: the front axle's colour where the front share of load transfer is above "
                 + referenceWords(centreShare) + ", towards understeer; the rear axle's where it is below, towards "
                 + "oversteer; fuller the further it lies (full at 5 points). Red dashes and red text: an inside wheel "
@@ -272,13 +294,19 @@ final class MapView extends JPanel {
                 && context.document().lastValid().vehicle().equals(shown.vehicle());
     }
 
+    /**
+     * @return a row's (front) header on two or three short lines, a column's (rear) on two: "rear hole 2 (in use)"
+     *     over its arm length, so that the headers take little of the map's room at a large text size
+     */
     private String optionWords(AxlePosition axle, BarOption option) {
         if (option.bar() == null) {
             return "<html><b>no " + axle.key() + " bar</b></html>";
         }
         String arm = Double.isNaN(option.armLength()) ? "" : "<br>arm " + format.text(option.armLength(), Quantity.LENGTH);
-        return "<html><b>" + axle.key() + " hole " + (option.hole() + 1) + "</b>" + arm
-                + (option.current() ? "<br>(in use)" : "") + "</html>";
+        String inUse = option.current() ? (axle == AxlePosition.FRONT ? "<br>(in use)" : " (in use)") : "";
+        return axle == AxlePosition.FRONT
+                ? "<html><b>" + axle.key() + " hole " + (option.hole() + 1) + "</b>" + arm + inUse + "</html>"
+                : "<html><b>" + axle.key() + " hole " + (option.hole() + 1) + "</b>" + inUse + arm + "</html>";
     }
 
     private JLabel optionHeader(AxlePosition axle, BarOption option) {
@@ -289,7 +317,7 @@ final class MapView extends JPanel {
 
     private JLabel header(String text) {
         JLabel label = new JLabel(text, SwingConstants.CENTER);
-        label.setBorder(BorderFactory.createEmptyBorder(2, 6, 2, 6));
+        label.setBorder(BorderFactory.createEmptyBorder(1, 4, 1, 4));
         return label;
     }
 
@@ -330,7 +358,7 @@ final class MapView extends JPanel {
         at.gridy = y;
         at.weightx = x == 0 ? 0 : 1;
         at.fill = GridBagConstraints.BOTH;
-        at.insets = new Insets(3, 3, 3, 3);
+        at.insets = new Insets(2, 2, 2, 2);
         return at;
     }
 

@@ -20,6 +20,7 @@ final class SettingsBeside extends JPanel {
     /** The results want at least this many times the font's height of width beside the settings. */
     private static final int RESULTS_WIDTH_IN_LINES = 24;
 
+    private final String settingsTitle;
     private final JComponent settings;
     private final JComponent results;
     private final JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT);
@@ -27,8 +28,14 @@ final class SettingsBeside extends JPanel {
     private Boolean tabbed;
 
     SettingsBeside(String name, JComponent settings, JComponent results) {
+        this(name, "Settings", settings, results);
+    }
+
+    /** @param settingsTitle the settings' tab title where they are a tab, e.g. "Setups" */
+    SettingsBeside(String name, String settingsTitle, JComponent settings, JComponent results) {
         super(new BorderLayout());
         setName(name + ".layout");
+        this.settingsTitle = settingsTitle;
         this.settings = settings;
         this.results = results;
         split.setBorder(null);
@@ -92,7 +99,7 @@ final class SettingsBeside extends JPanel {
         removeAll();
         if (wantTabs) {
             tabs.removeAll();
-            tabs.addTab("Settings", settings);
+            tabs.addTab(settingsTitle, settings);
             tabs.addTab("Results", results);
             if (resultsWereChosen) {
                 tabs.setSelectedComponent(results);

@@ -15,8 +15,9 @@ import java.util.List;
 import static org.assertj.core.api.Assertions.assertThat;
 
 /**
- * The tube view on a 1024x768 screen with the largest text size (club hatchback sample, invented data): its
- * settings and results as two tabs, and after a find several tubes in view with the columns a choice turns on.
+ * The sizing window on a 1024x768 screen with the largest text size (club hatchback sample, invented data): the
+ * tube view's settings and results as two tabs, and after a find several tubes in view with the columns a choice
+ * turns on; the arm-hole map with at least two whole rows and two whole columns of cells in view.
  */
 @Tag("window")
 class SizingSmallScreenWindowTest {
@@ -32,13 +33,7 @@ class SizingSmallScreenWindowTest {
     @Test
     void withTheLargestTextAt1024By768TheTubesAreTabsAndSeveralRowsAndTheDecidingColumnsShow() {
         fixture = new SizingWindowFixture(1024, 768, Themes.largestTextSize());
-        DialogFixture sizing = fixture.openTool("Tube or solid bar of the same rate…");
-        GuiActionRunner.execute(() -> {
-            SizingWindow views = fixture.views();
-            views.setSize(1024, 768);
-            views.validate();
-            return null;
-        });
+        DialogFixture sizing = fixture.openToolAtScreenSize("Tube or solid bar of the same rate…");
         fixture.robot.waitForIdle();
         TubeView view = fixture.views().tubes();
         // side by side the settings took the width and left the results no rows at all
@@ -61,5 +56,34 @@ class SizingSmallScreenWindowTest {
             return cut;
         });
         assertThat(faults).isEmpty();
+    }
+
+    @Test
+    void withTheLargestTextAt1024By768TheMapShowsTwoWholeRowsAndTwoWholeColumnsOfCells() {
+        fixture = new SizingWindowFixture(1024, 768, Themes.largestTextSize());
+        fixture.openToolAtScreenSize("Arm-hole map…");
+        MapView map = fixture.views().map();
+        // the club hatchback has three front holes and four rear ones
+        fixture.waitFor("the map", () -> map.work().isIdle() && map.cells().size() == 12);
+        fixture.robot.waitForIdle();
+        int[] whole = GuiActionRunner.execute(() -> {
+            javax.swing.JViewport viewport = (javax.swing.JViewport) javax.swing.SwingUtilities.getAncestorOfClass(
+                    javax.swing.JViewport.class, map.cells().get(0));
+            Rectangle inView = new Rectangle(viewport.getExtentSize());
+            java.util.Set<Integer> rows = new java.util.TreeSet<>();
+            java.util.Set<Integer> columns = new java.util.TreeSet<>();
+            for (MapCellView cell : map.cells()) {
+                Rectangle bounds = javax.swing.SwingUtilities.convertRectangle(cell.getParent(), cell.getBounds(),
+                        viewport);
+                if (inView.contains(bounds)) {
+                    String[] place = cell.getName().split("\\.");
+                    rows.add(Integer.parseInt(place[2]));
+                    columns.add(Integer.parseInt(place[3]));
+                }
+            }
+            return new int[]{rows.size(), columns.size()};
+        });
+        assertThat(whole[0]).as("whole rows of cells in view").isGreaterThanOrEqualTo(2);
+        assertThat(whole[1]).as("whole columns of cells in view").isGreaterThanOrEqualTo(2);
     }
 }

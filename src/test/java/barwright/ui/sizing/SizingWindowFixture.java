@@ -53,6 +53,22 @@ final class SizingWindowFixture implements AutoCloseable {
         return dialog;
     }
 
+    /**
+     * Opens the sizing views through Tools > item at the main window's size, as on a screen of that size (the
+     * window is no larger than the screen), and returns their window.
+     */
+    DialogFixture openToolAtScreenSize(String item) {
+        DialogFixture dialog = openTool(item);
+        GuiActionRunner.execute(() -> {
+            SizingWindow views = views();
+            views.setSize(window.getSize());
+            views.validate();
+            return null;
+        });
+        robot.waitForIdle();
+        return dialog;
+    }
+
     /** Sizes the rear bar for a front share of 52 % with the form as it opens otherwise, and waits for the rows. */
     DialogFixture searchRearFor52() {
         DialogFixture sizing = openTool("Size a bar to a target…");

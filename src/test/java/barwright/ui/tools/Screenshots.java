@@ -240,10 +240,72 @@ public final class Screenshots {
                     SwingUtilities.invokeAndWait(button::doClick);
                     waitForRows("tubes.results");
                 }
-                write(dialog("sizing.window"), "sizing-" + slug(onEdt(() -> tabs.getTitleAt(index))));
+                String view = "sizing-" + slug(onEdt(() -> tabs.getTitleAt(index)));
+                if (find(dialog("sizing.window"), "compare.addOpen") instanceof AbstractButton add && add.isShowing()) {
+                    compareThreeSetups(view);
+                }
+                write(dialog("sizing.window"), view);
             }
             SwingUtilities.invokeAndWait(() -> SwingUtilities.getWindowAncestor(dialog("sizing.window"))
                     .setVisible(false));
+        }
+
+        /**
+         * Compares the open car with two variants built in the variant builder, as a person would; writes the
+         * setups and a chart where they have tabs of their own, and leaves the figures in view.
+         */
+        private void compareThreeSetups(String view) throws Exception {
+            JComponent sizing = dialog("sizing.window");
+            SwingUtilities.invokeAndWait(() -> {
+                text(sizing, "compare.name", "as it is");
+                ((AbstractButton) find(sizing, "compare.addOpen")).doClick();
+                choose(sizing, "compare.what", "Rear bar — Arm hole in use");
+                ((javax.swing.JComboBox<?>) find(sizing, "compare.hole")).setSelectedIndex(0);
+                ((AbstractButton) find(sizing, "compare.addChange")).doClick();
+                text(sizing, "compare.name", "rear bar hole 1");
+                ((AbstractButton) find(sizing, "compare.addVariant")).doClick();
+                choose(sizing, "compare.what", "Front bar — Outside diameter");
+                text(sizing, "compare.value", "25");
+                ((AbstractButton) find(sizing, "compare.addChange")).doClick();
+                choose(sizing, "compare.what", "Front axle — Spring rate");
+                text(sizing, "compare.value", "80");
+                ((AbstractButton) find(sizing, "compare.addChange")).doClick();
+                text(sizing, "compare.name", "front bar 25 mm, springs 80");
+                ((AbstractButton) find(sizing, "compare.addVariant")).doClick();
+            });
+            for (int i = 0; i < 300 && onEdt(() -> ((javax.swing.JTable) find(sizing, "compare.figures"))
+                    .getColumnCount() < 4); i++) {
+                Thread.sleep(100);
+            }
+            settle(800);
+            if (find(sizing, "compare.settingsOrResults") instanceof JTabbedPane pair && pair.isShowing()) {
+                SwingUtilities.invokeAndWait(() -> pair.setSelectedIndex(0));
+                settle(300);
+                write(sizing, view + "-setups");
+                SwingUtilities.invokeAndWait(() -> pair.setSelectedIndex(1));
+            }
+            JTabbedPane charts = (JTabbedPane) find(sizing, "compare.charts");
+            int figures = onEdt(charts::getSelectedIndex);
+            SwingUtilities.invokeAndWait(() -> charts.setSelectedIndex(charts.indexOfTab("Inside wheel loads")));
+            settle(500);
+            write(sizing, view + "-chart");
+            SwingUtilities.invokeAndWait(() -> charts.setSelectedIndex(figures));
+            settle(300);
+        }
+
+        private static void text(JComponent root, String name, String text) {
+            ((javax.swing.text.JTextComponent) find(root, name)).setText(text);
+        }
+
+        private static void choose(JComponent root, String name, String item) {
+            javax.swing.JComboBox<?> box = (javax.swing.JComboBox<?>) find(root, name);
+            for (int i = 0; i < box.getItemCount(); i++) {
+                if (item.equals(String.valueOf(box.getItemAt(i)))) {
+                    box.setSelectedIndex(i);
+                    return;
+                }
+            }
+            throw new IllegalStateException("no " + item + " in " + name);
         }
 
         private void waitForRows(String table) throws Exception {
