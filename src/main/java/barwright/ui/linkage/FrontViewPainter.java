@@ -278,7 +278,7 @@ final class FrontViewPainter {
         double beside = Math.min((area.width - 2 * labelRoom) / (2 * half), (area.height - under) / (top - bottom));
         // in the band: the two cambers side by side on one line, the two swing arms on the next, their words a little
         // smaller where that lets them share the line (never under ARM_LEAST_SCALE); else each side on lines of its own
-        int room = area.width - 2 * MARGIN - 2 * metrics.getHeight(); // two lines' width between the sides
+        int room = area.width - 2 * MARGIN - metrics.getHeight(); // a line's height of room between the sides
         int arms = armWidth(metrics, cambers.leftArm()) + armWidth(metrics, cambers.rightArm());
         float armScale = arms <= room ? 1f : (float) room / arms;
         boolean sideBySide = bold.stringWidth(cambers.leftCamber()) + bold.stringWidth(cambers.rightCamber()) <= room
