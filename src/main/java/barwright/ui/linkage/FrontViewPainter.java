@@ -285,7 +285,7 @@ final class FrontViewPainter {
                 && armScale >= ARM_LEAST_SCALE;
         int bandLines = sideBySide ? 2 : 4;
         armScale = sideBySide ? armScale : 1f;
-        double band = bandLines / 2.0 * (bold.getHeight() + armScale * metrics.getHeight()) + 4;
+        double band = bandLines / 2.0 * (bold.getHeight() + (arms == 0 ? 0 : armScale * metrics.getHeight())) + 4;
         double above = Math.min((area.width - 2 * MARGIN) / (2 * half),
                 (area.height - band - under) / (top - bottom));
         boolean cambersAbove = above > beside;
@@ -537,7 +537,7 @@ final class FrontViewPainter {
             DoubleUnaryOperator x; // the label's left edge for its width
             if (placement.cambersAbove()) {
                 boolean stacked = placement.bandLines() > 2;
-                y = area.y + g.getFontMetrics(bold).getAscent() + 2 + (stacked && !left ? boldLine + line : 0);
+                y = area.y + g.getFontMetrics(bold).getAscent() + 2 + (stacked && !left ? boldLine + (arm == null ? 0 : line) : 0);
                 x = wide -> left ? MARGIN : width - MARGIN - wide;
             } else {
                 Point2D.Double contact = mapping.toPixels(side.contact());
