@@ -258,7 +258,7 @@ final class FrontViewDrawing extends JComponent {
                 scene, new FrontViewPainter.Style(font, view.units(), view.locale(), null, true));
     }
 
-    /** The key under the drawing: as tall as its lines at the drawing's width, painted by the drawing's painter. */
+    /** The key under the drawing: as tall as its lines at the drawing's width, laid out as in the drawing. */
     private final class KeyBelow extends JComponent {
         private final FrontViewPainter painter = new FrontViewPainter();
 
