@@ -2,30 +2,32 @@ package barwright.ui.linkage;
 
 import javax.swing.JComponent;
 import javax.swing.JPanel;
-import javax.swing.JTabbedPane;
 import java.awt.BorderLayout;
 import java.awt.event.ComponentAdapter;
 import java.awt.event.ComponentEvent;
 
 /**
  * The front-view drawing with the table of points beside it where the width allows (the drawing keeps at least
- * sixteen lines of text's width), and in a tab of its own behind the drawing where it does not (a small screen, a
- * large text): the drawing is a picture, so it takes the room it is given and is never cut or scrolled.
+ * sixteen lines of text's width), and under it where it does not (a small screen, a large text): the drawing then
+ * fills the page's view and the table follows below, with the words, where the page scrolls. The drawing is a
+ * picture, so it takes the room it is given and is never cut or scrolled. (A pair of tabs, drawing and points,
+ * took a line of the drawing's height at 28 points, which the picture could not spare.)
  */
 final class DrawingAndPoints extends JPanel {
     /** The drawing's least width beside the table, in lines of text (judged from the screenshots). */
     private static final int DRAWING_LINES_BESIDE = 16;
     private final JComponent drawing;
     private final JComponent points;
-    private final JTabbedPane tabs = new JTabbedPane();
     private Boolean beside;
+    /** Whether the axle has points to show (an axle without a linkage has none). */
+    private boolean hasPoints = true;
+    private boolean arrangedWithPoints = true;
 
     DrawingAndPoints(JComponent drawing, JComponent points) {
         super(new BorderLayout(6, 6));
         this.drawing = drawing;
         this.points = points;
         setName("linkage.drawingAndPoints");
-        tabs.setName("linkage.tabs");
         arrange(true);
         addComponentListener(new ComponentAdapter() {
             @Override
@@ -35,35 +37,46 @@ final class DrawingAndPoints extends JPanel {
         });
     }
 
-    /** Puts the table beside the drawing or in a tab, as the width now allows. */
+    /** Decides at once, with the new width: a resize event comes later, after a layout at the old arrangement. */
+    @Override
+    public void setBounds(int x, int y, int width, int height) {
+        boolean resized = width != getWidth();
+        super.setBounds(x, y, width, height);
+        if (resized) {
+            rearrange();
+        }
+    }
+
+    /** Puts the table beside the drawing or under it, as the width now allows. */
     void rearrange() {
         java.awt.Font text = javax.swing.UIManager.getFont("Label.font"); // the text size chosen
         int line = getFontMetrics(text != null ? text : getFont()).getHeight();
-        arrange(!points.isVisible() || getWidth() >= DRAWING_LINES_BESIDE * line + points.getPreferredSize().width);
+        arrange(!hasPoints || getWidth() >= DRAWING_LINES_BESIDE * line + points.getPreferredSize().width);
     }
 
-    /** @return true where the table is beside the drawing */
-    boolean beside() {
-        return Boolean.TRUE.equals(beside);
+    /** Shows the table of points, or the drawing alone for an axle without a linkage. */
+    void setHasPoints(boolean has) {
+        hasPoints = has;
+        rearrange();
     }
 
     private void arrange(boolean side) {
-        if (beside != null && beside == side) {
+        if (beside != null && beside == side && arrangedWithPoints == hasPoints) {
             return;
         }
         beside = side;
+        arrangedWithPoints = hasPoints;
         removeAll();
-        tabs.removeAll();
-        if (side) {
-            add(drawing, BorderLayout.CENTER);
-            add(points, BorderLayout.EAST);
-        } else {
-            tabs.addTab("Drawing", drawing);
-            tabs.addTab("Points", points);
-            tabs.setToolTipTextAt(1, "The measured points of this axle's linkage, in the units shown: type to change");
-            add(tabs, BorderLayout.CENTER);
+        add(drawing, BorderLayout.CENTER);
+        if (hasPoints) {
+            add(points, side ? BorderLayout.EAST : BorderLayout.SOUTH);
         }
         revalidate();
         repaint();
+        // the page measured this column in the old arrangement: lay it out again once this pass is done
+        javax.swing.SwingUtilities.invokeLater(() -> {
+            revalidate();
+            repaint();
+        });
     }
 }

@@ -30,7 +30,10 @@ final class FrontViewDrawing extends JComponent {
         void released(Pickup pickup, FrontViewPoint pressed, FrontViewPoint now);
     }
 
+    /** The most lines the key takes at the drawing's foot; where it needs more, it goes under the drawing. */
+    private static final int KEY_LINES_INSIDE = 3;
     private final FrontViewPainter painter = new FrontViewPainter();
+    private final KeyBelow keyBelow = new KeyBelow();
     private final ViewSettings view;
     private final Function<Pickup, String> pointName;
     private DragListener dragListener;
@@ -83,6 +86,54 @@ final class FrontViewDrawing extends JComponent {
         view.addListener(this::repaint);
     }
 
+    /** The key's place under the drawing, shown where the drawing has no room for it (a large text, a narrow view). */
+    JComponent keyBelow() {
+        return keyBelow;
+    }
+
+    /** @return whether the key fits the drawing's foot in a few lines at its present width and text size */
+    boolean keyInside() {
+        java.awt.FontMetrics metrics = getFontMetrics(font());
+        int width = getWidth() > 0 ? getWidth() : getPreferredSize().width;
+        return FrontViewText.height(keyPieces(width)) <= KEY_LINES_INSIDE * metrics.getHeight();
+    }
+
+    /** @return the boxes of the key's words at the last paint, in the drawing's or the strip's pixels */
+    List<java.awt.Rectangle> keyBoxes() {
+        return keyBelow.isVisible() ? keyBelow.painter.keyBoxes() : painter.keyBoxes();
+    }
+
+    /** @return the box of every text written inside the drawing at the last paint (pixels) */
+    List<java.awt.Rectangle> textBoxes() {
+        return painter.textBoxes();
+    }
+
+    /** @return the key laid out across a width at the drawing's text size */
+    private List<FrontViewText.Piece> keyPieces(int width) {
+        return FrontViewPainter.keyPieces(getFontMetrics(font()), getFontMetrics(font().deriveFont(Font.BOLD)), 0,
+                width, scene);
+    }
+
+    /** Shows the key under the drawing or in it, as the width and text size now allow. */
+    private void placeKey() {
+        boolean below = !keyInside();
+        if (keyBelow.isVisible() != below) {
+            keyBelow.setVisible(below);
+        }
+        keyBelow.revalidate();
+        keyBelow.repaint();
+    }
+
+    @Override
+    public void setBounds(int x, int y, int width, int height) {
+        boolean resized = width != getWidth();
+        super.setBounds(x, y, width, height);
+        if (resized) {
+            // after this layout pass: a component invalidated while its parents are laid out is not laid out again
+            javax.swing.SwingUtilities.invokeLater(this::placeKey);
+        }
+    }
+
     /**
      * @return as wide as a chart at the system text (fourteen lines at a large one: wider made the page wider
      *         than a small screen's tab), and tall enough for the picture to read at the current text size: the four lines
@@ -122,6 +173,7 @@ final class FrontViewDrawing extends JComponent {
 
     void show(LinkageScene newScene) {
         scene = newScene;
+        placeKey();
         repaint();
     }
 
@@ -185,10 +237,13 @@ final class FrontViewDrawing extends JComponent {
 
     @Override
     protected void paintComponent(Graphics graphics) {
+        if (keyBelow.isVisible() == keyInside()) {
+            javax.swing.SwingUtilities.invokeLater(this::placeKey); // the text size changed since the last layout
+        }
         Graphics2D g = (Graphics2D) graphics.create();
         try {
-            painter.paint(g, getWidth(), getHeight(), scene,
-                    new FrontViewPainter.Style(font(), view.units(), view.locale(), held != null ? held : hovered));
+            painter.paint(g, getWidth(), getHeight(), scene, new FrontViewPainter.Style(font(), view.units(),
+                    view.locale(), held != null ? held : hovered, !keyBelow.isVisible()));
         } finally {
             g.dispose();
         }
@@ -200,6 +255,38 @@ final class FrontViewDrawing extends JComponent {
     /** Paints the scene as it is on screen into an export's graphics, at the charts' export size. */
     void paintExport(Graphics2D g, Font font) {
         new FrontViewPainter().paint(g, barwright.ui.chart.ChartExport.WIDTH, barwright.ui.chart.ChartExport.HEIGHT,
-                scene, new FrontViewPainter.Style(font, view.units(), view.locale(), null));
+                scene, new FrontViewPainter.Style(font, view.units(), view.locale(), null, true));
+    }
+
+    /** The key under the drawing: as tall as its lines at the drawing's width, laid out as in the drawing. */
+    private final class KeyBelow extends JComponent {
+        private final FrontViewPainter painter = new FrontViewPainter();
+
+        KeyBelow() {
+            setName("linkage.key");
+            setVisible(false);
+        }
+
+        @Override
+        public Dimension getPreferredSize() {
+            int width = FrontViewDrawing.this.getWidth() > 0 ? FrontViewDrawing.this.getWidth()
+                    : FrontViewDrawing.this.getPreferredSize().width;
+            return new Dimension(100, FrontViewText.height(keyPieces(width)) + 8);
+        }
+
+        @Override
+        public Dimension getMinimumSize() {
+            return getPreferredSize();
+        }
+
+        @Override
+        protected void paintComponent(Graphics graphics) {
+            Graphics2D g = (Graphics2D) graphics.create();
+            try {
+                painter.paintKey(g, getWidth(), getHeight(), scene, font());
+            } finally {
+                g.dispose();
+            }
+        }
     }
 }

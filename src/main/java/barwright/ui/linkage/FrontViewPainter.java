@@ -32,6 +32,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleFunction;
+import java.util.function.DoubleUnaryOperator;
 
 /**
  * Draws one axle's linkage seen from behind (the car's left on the picture's left, as the car picture), to scale:
@@ -61,12 +62,38 @@ final class FrontViewPainter {
         }
     }
 
-    /** What the painter is given besides the scene. */
-    record Style(Font font, UnitSystem units, Locale locale, Pickup highlighted) {
+    /**
+     * What the painter is given besides the scene.
+     *
+     * @param keyInside whether the key is drawn at the drawing's foot (false: the page shows it under the drawing)
+     */
+    record Style(Font font, UnitSystem units, Locale locale, Pickup highlighted, boolean keyInside) {
     }
+
+    /** The camber labels' words: each side's camber and, for an independent linkage, its swing arm (or null). */
+    private record CamberWords(String leftCamber, String leftArm, String rightCamber, String rightArm) {
+    }
+
+    /**
+     * Where the figure goes: its mapping, and whether the camber labels sit in a band above the figure (a narrow
+     * drawing with a large text: beside the wheels they left the figure no width) in {@code bandLines} lines, the
+     * swing arms' words there at {@code armScale} of the text size.
+     */
+    private record Placement(Mapping mapping, boolean cambersAbove, int bandLines, float armScale) {
+    }
+
+    /**
+     * The least size of the swing arms' words in the band above the figure, as a share of the text size: a little
+     * smaller than the cambers' bold words so that both sides share one line (judged from the 28-point screenshots).
+     */
+    private static final float ARM_LEAST_SCALE = 0.75f;
+    /** The room left and right of the words written across the drawing (pixels). */
+    private static final int MARGIN = 10;
 
     private final List<Handle> handles = new ArrayList<>();
     private final List<String> drawnText = new ArrayList<>();
+    private final List<Rectangle> textBoxes = new ArrayList<>();
+    private final List<Rectangle> keyBoxes = new ArrayList<>();
     private Mapping mapping;
 
     /** @return the pickups drawn at the last paint, for hit testing */
@@ -79,6 +106,16 @@ final class FrontViewPainter {
         return List.copyOf(drawnText);
     }
 
+    /** @return the box of every text written at the last paint (pixels), for the window tests */
+    List<Rectangle> textBoxes() {
+        return List.copyOf(textBoxes);
+    }
+
+    /** @return the boxes of the key's words at the last paint (pixels), for the window tests; empty if not drawn */
+    List<Rectangle> keyBoxes() {
+        return List.copyOf(keyBoxes);
+    }
+
     /** @return the mapping of the last paint, or null before the first */
     Mapping mapping() {
         return mapping;
@@ -87,6 +124,8 @@ final class FrontViewPainter {
     void paint(Graphics2D g, int width, int height, LinkageScene scene, Style style) {
         handles.clear();
         drawnText.clear();
+        textBoxes.clear();
+        keyBoxes.clear();
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
         g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
@@ -99,21 +138,41 @@ final class FrontViewPainter {
         float size = font.getSize2D();
         int line = g.getFontMetrics(font).getHeight();
         Color text = colour("Label.foreground", Color.BLACK);
+        int wrapWidth = Math.max(1, width - 2 * MARGIN);
 
-        // the heading, two lines at the top
+        // the heading and the situation at the top, wrapped to the width
         g.setColor(text);
         g.setFont(font.deriveFont(Font.BOLD));
-        int y = line;
-        write(g, heading(scene), 10, y);
+        int y = 0;
+        for (String words : FrontViewText.wrap(heading(scene, g.getFontMetrics(), width), g.getFontMetrics(),
+                wrapWidth)) {
+            y += line;
+            write(g, words, MARGIN, y);
+        }
         g.setFont(font);
-        y += line;
-        write(g, situation(scene, style), 10, y);
+        for (String words : FrontViewText.wrap(situation(scene, style), g.getFontMetrics(), wrapWidth)) {
+            y += line;
+            write(g, words, MARGIN, y);
+        }
 
-        // the legend, three lines at the bottom
-        int legendTop = height - 2 * line - 6;
-        Rectangle area = new Rectangle(0, y + line / 2, width, Math.max(40, legendTop - y - line));
+        // the key at the bottom, unless it is shown under the drawing
+        int keyTop = height;
+        List<FrontViewText.Piece> key = List.of();
+        if (style.keyInside()) {
+            FontMetrics bold = g.getFontMetrics(font.deriveFont(Font.BOLD));
+            key = keyPieces(g.getFontMetrics(font), bold, 0, width, scene);
+            keyTop = height - FrontViewText.height(key) - 6;
+            key = keyPieces(g.getFontMetrics(font), bold, keyTop, width, scene);
+        }
+        Rectangle area = new Rectangle(0, y + line / 2, width, Math.max(40, keyTop - y - line / 2));
         Figure figure = scene.figure();
-        mapping = fit(figure, area, g.getFontMetrics(font));
+        CamberWords cambers = camberWords(figure, style);
+        Font big = rollCentreFont(style);
+        List<String> rollCentreLines = FrontViewText.wrap(rollCentreWords(figure, style), g.getFontMetrics(big),
+                wrapWidth);
+        Placement placement = fit(figure, area, g.getFontMetrics(font), g.getFontMetrics(font.deriveFont(Font.BOLD)),
+                cambers, rollCentreLines.size() * g.getFontMetrics(big).getHeight(), g.getFontMetrics(big).getHeight());
+        mapping = placement.mapping();
 
         Shape clip = g.getClip();
         g.clip(area);
@@ -124,15 +183,62 @@ final class FrontViewPainter {
         construction(g, figure, size);
         members(g, figure, scene.axle(), size);
         pickups(g, figure, scene.axle(), size, style.highlighted());
-        rollCentre(g, scene, style, size);
+        rollCentre(g, figure, rollCentreLines, big, size, width);
         g.setClip(clip);
-        camberLabels(g, figure, style, font, text);
-        legend(g, legendTop, font, text, width, scene);
+        camberLabels(g, figure, cambers, placement, area, font, text, width);
+        paintKey(g, key, font, text);
     }
 
-    private String heading(LinkageScene scene) {
-        String axle = scene.axle() == AxlePosition.FRONT ? "Front axle" : "Rear axle";
-        return axle + ": " + LinkagePage.typeWords(scene.type()) + ", seen from behind, to scale";
+    /**
+     * Paints the key alone, across the width given, for the strip under the drawing where the drawing has no room
+     * for it (a large text on a small screen).
+     */
+    void paintKey(Graphics2D g, int width, int height, LinkageScene scene, Font font) {
+        keyBoxes.clear();
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setColor(colour("Panel.background", Color.WHITE));
+        g.fillRect(0, 0, width, height);
+        if (scene == null || scene.figure() == null) {
+            return;
+        }
+        paintKey(g, keyPieces(g.getFontMetrics(font), g.getFontMetrics(font.deriveFont(Font.BOLD)), 0, width, scene),
+                font, colour("Label.foreground", Color.BLACK));
+    }
+
+    /** @return the key laid out across a width, its first line's top at {@code top} (pixels) */
+    static List<FrontViewText.Piece> keyPieces(FontMetrics metrics, FontMetrics bold, int top, int width,
+                                               LinkageScene scene) {
+        boolean drawn = scene != null && scene.figure() != null;
+        boolean beam = drawn && scene.figure().left().instantCentre() == null;
+        boolean view = drawn && !fullHeadingFits(scene, bold, width);
+        return FrontViewText.layoutKey(FrontViewText.keyEntries(beam, view), metrics, MARGIN, top + 2,
+                Math.max(1, width - 2 * MARGIN), sampleWidth(metrics.getFont()));
+    }
+
+    private static int sampleWidth(Font font) {
+        return (int) (font.getSize2D() * 2.4);
+    }
+
+    /**
+     * @return the heading: the axle, its linkage, and how it is seen where that fits one line; on a narrow drawing
+     *         the axle and its linkage alone (the key then says how it is seen), which leaves the figure a line more
+     */
+    private static String heading(LinkageScene scene, FontMetrics bold, int width) {
+        return fullHeadingFits(scene, bold, width) ? fullHeading(scene) : shortHeading(scene);
+    }
+
+    private static boolean fullHeadingFits(LinkageScene scene, FontMetrics bold, int width) {
+        return bold.stringWidth(fullHeading(scene)) <= width - 2 * MARGIN;
+    }
+
+    private static String fullHeading(LinkageScene scene) {
+        return shortHeading(scene) + ", seen from behind, to scale";
+    }
+
+    private static String shortHeading(LinkageScene scene) {
+        return (scene.axle() == AxlePosition.FRONT ? "Front axle" : "Rear axle") + ": "
+                + LinkagePage.typeWords(scene.type());
     }
 
     private String situation(LinkageScene scene, Style style) {
@@ -144,8 +250,15 @@ final class FrontViewPainter {
                 format(scene.acceleration(), Quantity.ACCELERATION, style, 2), Math.toDegrees(Math.abs(scene.roll())));
     }
 
-    /** Fits the axle, its wheels and the roll centre into the area, leaving room for the camber labels beside. */
-    private static Mapping fit(Figure figure, Rectangle area, FontMetrics metrics) {
+    /**
+     * Fits the axle, its wheels and the roll centre into the area, with room under the ground for the roll centre's
+     * label and room for the camber labels: beside the wheels, or in a band above the figure where that draws it
+     * larger (a narrow drawing with a large text).
+     *
+     * @param rollCentreHeight the height of the roll centre's label lines (pixels)
+     */
+    private static Placement fit(Figure figure, Rectangle area, FontMetrics metrics, FontMetrics bold,
+                                 CamberWords cambers, int rollCentreHeight, int rollCentreLine) {
         double half = Math.max(Math.abs(figure.left().contact().y()), Math.abs(figure.right().contact().y()))
                 + DRAWN_TYRE_WIDTH;
         double top = DRAWN_TYRE_DIAMETER + 0.05;
@@ -160,13 +273,32 @@ final class FrontViewPainter {
             bottom = Math.min(bottom, centre.height() - 0.08);
         }
         double labelRoom = metrics.stringWidth("IC 12345 mm outboard") + 16;
-        // two lines under the ground for the roll centre's label
-        double under = 2.2 * metrics.getHeight();
-        double scale = Math.min((area.width - 2 * labelRoom) / (2 * half), (area.height - under) / (top - bottom));
-        scale = Math.max(scale, 1);
-        double spare = Math.max(0, area.height - under - (top - bottom) * scale);
-        double groundY = area.y + spare / 2 + top * scale;
-        return new Mapping(area.x + area.width / 2.0, groundY, scale);
+        // the roll centre's label under the ground, its first baseline 1.2 lines down, and its descent
+        double under = rollCentreHeight + 0.5 * rollCentreLine;
+        double beside = Math.min((area.width - 2 * labelRoom) / (2 * half), (area.height - under) / (top - bottom));
+        // in the band: the two cambers side by side on one line, the two swing arms on the next, their words a little
+        // smaller where that lets them share the line (never under ARM_LEAST_SCALE); else each side on lines of its own
+        int room = area.width - 2 * MARGIN - metrics.getHeight(); // a line's height of room between the sides
+        int arms = armWidth(metrics, cambers.leftArm()) + armWidth(metrics, cambers.rightArm());
+        float armScale = arms <= room ? 1f : (float) room / arms;
+        boolean sideBySide = bold.stringWidth(cambers.leftCamber()) + bold.stringWidth(cambers.rightCamber()) <= room
+                && armScale >= ARM_LEAST_SCALE;
+        int bandLines = sideBySide ? 2 : 4;
+        armScale = sideBySide ? armScale : 1f;
+        double band = bandLines / 2.0 * (bold.getHeight() + (arms == 0 ? 0 : armScale * metrics.getHeight())) + 4;
+        double above = Math.min((area.width - 2 * MARGIN) / (2 * half),
+                (area.height - band - under) / (top - bottom));
+        boolean cambersAbove = above > beside;
+        double scale = Math.max(cambersAbove ? above : beside, 1);
+        double figureTop = area.y + (cambersAbove ? band : 0);
+        double spare = Math.max(0, area.y + area.height - figureTop - under - (top - bottom) * scale);
+        double groundY = figureTop + spare / 2 + top * scale;
+        return new Placement(new Mapping(area.x + area.width / 2.0, groundY, scale), cambersAbove, bandLines,
+                cambersAbove ? armScale : 1f);
+    }
+
+    private static int armWidth(FontMetrics metrics, String arm) {
+        return arm == null ? 0 : metrics.stringWidth(arm);
     }
 
     private void ground(Graphics2D g, Rectangle area, float size) {
@@ -328,58 +460,96 @@ final class FrontViewPainter {
         }
     }
 
-    private void rollCentre(Graphics2D g, LinkageScene scene, Style style, float size) {
-        Figure figure = scene.figure();
+    /** @return the roll centre's label, a little larger than the text */
+    private static Font rollCentreFont(Style style) {
+        return style.font().deriveFont(Font.BOLD, style.font().getSize2D() * 1.15f);
+    }
+
+    /** @return the roll centre's height and offset in words, or why there is none */
+    private static String rollCentreWords(Figure figure, Style style) {
         RollCentre centre = figure.state().rollCentre();
-        Font big = style.font().deriveFont(Font.BOLD, size * 1.15f);
-        g.setFont(big);
-        FontMetrics metrics = g.getFontMetrics();
-        Color red = onBackground(new Color(0xC6, 0x28, 0x28), new Color(0xFF, 0x7A, 0x7A));
         if (centre == null) {
-            String words = "No roll centre: the lines are parallel";
-            Point2D.Double mid = mapping.toPixels(new FrontViewPoint(0, 0.25));
-            label(g, words, mid.x - metrics.stringWidth(words) / 2.0, mid.y, red);
-            return;
+            return "No roll centre: the lines are parallel";
         }
-        Point2D.Double p = mapping.toPixels(new FrontViewPoint(centre.offset(), centre.height()));
-        double r = Math.max(6, size * 0.6);
-        g.setColor(red);
-        g.fill(new Ellipse2D.Double(p.x - r, p.y - r, 2 * r, 2 * r));
         String words = "Roll centre " + format(centre.height(), Quantity.LENGTH, style, 0)
                 + (centre.height() < 0 ? " below the ground" : " above the ground");
         if (Math.abs(centre.offset()) >= 0.0005) {
             words += ", " + format(Math.abs(centre.offset()), Quantity.LENGTH, style, 0)
                     + (centre.offset() > 0 ? " to the left" : " to the right");
         }
-        // the label sits under the ground line, below the point, joined to it by a thin leader
-        double labelWidth = metrics.stringWidth(words);
-        double x = Math.max(4, Math.min(p.x - labelWidth / 2, mapping.centreX() * 2 - labelWidth - 4));
-        double y = Math.max(p.y + r, mapping.groundY()) + metrics.getHeight() * 1.2;
-        g.setStroke(new BasicStroke(Math.max(1f, size * 0.08f)));
-        g.draw(new Line2D.Double(p.x, p.y + r, p.x, y - metrics.getAscent()));
-        label(g, words, x, y, red);
+        return words;
     }
 
-    private void camberLabels(Graphics2D g, Figure figure, Style style, Font font, Color text) {
+    /** The roll centre's dot, and its label (wrapped to the drawing's width) under the ground, joined by a leader. */
+    private void rollCentre(Graphics2D g, Figure figure, List<String> lines, Font big, float size, int width) {
+        RollCentre centre = figure.state().rollCentre();
+        g.setFont(big);
+        FontMetrics metrics = g.getFontMetrics();
+        Color red = onBackground(new Color(0xC6, 0x28, 0x28), new Color(0xFF, 0x7A, 0x7A));
+        Point2D.Double p;
+        double y;
+        if (centre == null) {
+            p = mapping.toPixels(new FrontViewPoint(0, 0.25));
+            y = p.y;
+        } else {
+            p = mapping.toPixels(new FrontViewPoint(centre.offset(), centre.height()));
+            double r = Math.max(6, size * 0.6);
+            g.setColor(red);
+            g.fill(new Ellipse2D.Double(p.x - r, p.y - r, 2 * r, 2 * r));
+            y = Math.max(p.y + r, mapping.groundY()) + metrics.getHeight() * 1.2;
+            g.setStroke(new BasicStroke(Math.max(1f, size * 0.08f)));
+            g.draw(new Line2D.Double(p.x, p.y + r, p.x, y - metrics.getAscent()));
+        }
+        for (String words : lines) {
+            double labelWidth = metrics.stringWidth(words);
+            double x = Math.max(4, Math.min(p.x - labelWidth / 2, width - labelWidth - 4));
+            label(g, words, x, y, red);
+            y += metrics.getHeight();
+        }
+    }
+
+    private CamberWords camberWords(Figure figure, Style style) {
+        return new CamberWords(camber(figure.left(), style), swingArm(figure.left(), style),
+                camber(figure.right(), style), swingArm(figure.right(), style));
+    }
+
+    private static String camber(Side side, Style style) {
+        double degrees = Math.toDegrees(side.camber());
+        return Math.abs(degrees) < 0.005 ? String.format(style.locale(), "camber %.2f\u00B0", 0.0)
+                : String.format(style.locale(), "camber %+.2f\u00B0", degrees).replace('-', '\u2212');
+    }
+
+    /**
+     * Each wheel's camber and swing arm: beside the wheel (the left wheel's further left, as seen from behind), or
+     * in the band above the figure, the left wheel's at the left edge and the right wheel's at the right.
+     */
+    private void camberLabels(Graphics2D g, Figure figure, CamberWords cambers, Placement placement, Rectangle area,
+                              Font font, Color text, int width) {
         Font bold = font.deriveFont(Font.BOLD);
+        Font armFont = font.deriveFont(font.getSize2D() * placement.armScale());
+        int boldLine = g.getFontMetrics(bold).getHeight();
+        int line = g.getFontMetrics(armFont).getHeight();
         for (boolean left : new boolean[] {true, false}) {
             Side side = left ? figure.left() : figure.right();
-            double degrees = Math.toDegrees(side.camber());
-            String camber = Math.abs(degrees) < 0.005 ? String.format(style.locale(), "camber %.2f\u00B0", 0.0)
-                    : String.format(style.locale(), "camber %+.2f\u00B0", degrees).replace('-', '\u2212');
-            String arm = swingArm(side, style);
-            Point2D.Double contact = mapping.toPixels(side.contact());
-            double outside = (DRAWN_TYRE_WIDTH / 2 + 0.03) * mapping.scale();
-            double y = contact.y - DRAWN_TYRE_DIAMETER / 2 * mapping.scale();
-            // seen from behind the left wheel is on the picture's left: its labels go further left
+            String camber = left ? cambers.leftCamber() : cambers.rightCamber();
+            String arm = left ? cambers.leftArm() : cambers.rightArm();
+            double y;
+            DoubleUnaryOperator x; // the label's left edge for its width
+            if (placement.cambersAbove()) {
+                boolean stacked = placement.bandLines() > 2;
+                y = area.y + g.getFontMetrics(bold).getAscent() + 2 + (stacked && !left ? boldLine + (arm == null ? 0 : line) : 0);
+                x = wide -> left ? MARGIN : width - MARGIN - wide;
+            } else {
+                Point2D.Double contact = mapping.toPixels(side.contact());
+                double outside = (DRAWN_TYRE_WIDTH / 2 + 0.03) * mapping.scale();
+                y = contact.y - DRAWN_TYRE_DIAMETER / 2 * mapping.scale();
+                x = wide -> left ? contact.x - outside - wide : contact.x + outside;
+            }
             g.setFont(bold);
-            FontMetrics metrics = g.getFontMetrics();
-            label(g, camber, left ? contact.x - outside - metrics.stringWidth(camber) : contact.x + outside, y, text);
+            label(g, camber, x.applyAsDouble(g.getFontMetrics().stringWidth(camber)), y, text);
             if (arm != null) {
-                g.setFont(font);
-                metrics = g.getFontMetrics();
-                label(g, arm, left ? contact.x - outside - metrics.stringWidth(arm) : contact.x + outside,
-                        y + metrics.getHeight(), text);
+                g.setFont(armFont);
+                label(g, arm, x.applyAsDouble(g.getFontMetrics().stringWidth(arm)), y + line, text);
             }
         }
     }
@@ -400,32 +570,25 @@ final class FrontViewPainter {
         return "IC " + format(length, Quantity.LENGTH, style, 0) + " " + across;
     }
 
-    private void legend(Graphics2D g, int top, Font font, Color text, int width, LinkageScene scene) {
+    /** Paints the key's pieces: each entry's sample line, then its words. */
+    private void paintKey(Graphics2D g, List<FrontViewText.Piece> pieces, Font font, Color text) {
         g.setFont(font);
         FontMetrics metrics = g.getFontMetrics();
-        int line = metrics.getHeight();
-        int x = 10;
-        int y = top + metrics.getAscent() + 2;
         float size = font.getSize2D();
-        int sample = (int) (size * 2.4);
-        boolean beam = scene.figure().left().instantCentre() == null;
-        if (!beam) {
-            g.setColor(colour("Label.disabledForeground", Color.GRAY));
-            g.setStroke(dashed(Math.max(1.5f, size * 0.12f), size * 0.6f));
-            g.drawLine(x, y - metrics.getAscent() / 2, x + sample, y - metrics.getAscent() / 2);
-            x += sample + 6;
-            x = write(g, "arm lines to each side's instant centre (IC)", x, y, text) + 18;
-            g.setColor(constructionColour());
-            g.setStroke(dashed(Math.max(2f, size * 0.16f), size * 0.9f));
-            g.drawLine(x, y - metrics.getAscent() / 2, x + sample, y - metrics.getAscent() / 2);
-            x += sample + 6;
-            write(g, "contact point through the IC: the two meet at the roll centre", x, y, text);
-        } else {
-            write(g, "A beam axle: the roll centre is where its sideways locator meets the body's centreline "
-                    + "(dashed).", x, y, text);
+        for (FrontViewText.Piece piece : pieces) {
+            int middle = piece.baseline() - metrics.getAscent() / 2;
+            if (piece.sample() == FrontViewText.Sample.ARM_LINE) {
+                g.setColor(colour("Label.disabledForeground", Color.GRAY));
+                g.setStroke(dashed(Math.max(1.5f, size * 0.12f), size * 0.6f));
+                g.drawLine(piece.sampleX(), middle, piece.sampleX() + sampleWidth(font), middle);
+            } else if (piece.sample() == FrontViewText.Sample.CONTACT_LINE) {
+                g.setColor(constructionColour());
+                g.setStroke(dashed(Math.max(2f, size * 0.16f), size * 0.9f));
+                g.drawLine(piece.sampleX(), middle, piece.sampleX() + sampleWidth(font), middle);
+            }
+            write(g, piece.words(), piece.box().x, piece.baseline(), text);
+            keyBoxes.add(piece.box());
         }
-        write(g, "Camber to the road (SAE J670): top of the wheel leaning away from the car is positive. "
-                + "Drag a circle to move a point.", 10, y + line, text);
     }
 
     private int write(Graphics2D g, String words, int x, int y, Color colour) {
@@ -437,6 +600,8 @@ final class FrontViewPainter {
     private void write(Graphics2D g, String words, int x, int y) {
         g.drawString(words, x, y);
         drawnText.add(words);
+        FontMetrics metrics = g.getFontMetrics();
+        textBoxes.add(new Rectangle(x, y - metrics.getAscent(), metrics.stringWidth(words), metrics.getHeight()));
     }
 
     /** Text on a box of the background colour, so that it reads over lines. */
@@ -447,6 +612,8 @@ final class FrontViewPainter {
         g.setColor(colour);
         g.drawString(words, (float) x, (float) y);
         drawnText.add(words);
+        textBoxes.add(new Rectangle((int) Math.floor(x), (int) Math.floor(y) - metrics.getAscent(),
+                metrics.stringWidth(words) + 1, metrics.getHeight()));
     }
 
     private void cross(Graphics2D g, FrontViewPoint at, float size, Color colour) {

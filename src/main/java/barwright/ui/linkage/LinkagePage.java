@@ -101,7 +101,11 @@ public final class LinkagePage extends JPanel {
         noLinkage.setOpaque(false);
         neverScrollTo(noLinkage);
         noLinkage.setBorder(BorderFactory.createEmptyBorder(16, 16, 16, 16));
-        cards.add(drawing, DRAWING);
+        // the key under the drawing where the drawing has no room for it: below the fold, with the words under it
+        JPanel drawingAndKey = new JPanel(new BorderLayout());
+        drawingAndKey.add(drawing, BorderLayout.CENTER);
+        drawingAndKey.add(drawing.keyBelow(), BorderLayout.SOUTH);
+        cards.add(drawingAndKey, DRAWING);
         cards.add(new JScrollPane(noLinkage), NONE);
         message.setName("linkage.message");
         neverScrollTo(message);
@@ -139,8 +143,8 @@ public final class LinkagePage extends JPanel {
         scroller.getViewport().addComponentListener(new java.awt.event.ComponentAdapter() {
             @Override
             public void componentResized(java.awt.event.ComponentEvent event) {
-                int overhead = split.beside() ? 0 : split.getHeight() - cards.getHeight();
-                drawing.fitHeight(scroller.getViewport().getHeight() - Math.max(0, overhead) - 8);
+                // the drawing is at the top of the page: its key, the table (where narrow) and the words follow below
+                drawing.fitHeight(scroller.getViewport().getHeight() - 8);
             }
         });
         setBorder(BorderFactory.createEmptyBorder(4, 4, 4, 4));
@@ -263,11 +267,8 @@ public final class LinkagePage extends JPanel {
         int line = table.getFontMetrics(table.getFont()).getHeight();
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(Math.max(420, 12 * line),
                 table.getRowHeight() * Math.max(1, points.getRowCount()) + 2));
-        if (tableScroll != null) {
-            tableScroll.setVisible(points.getRowCount() > 0); // an axle without a linkage has no points
-        }
         if (split != null) {
-            split.rearrange();
+            split.setHasPoints(points.getRowCount() > 0); // an axle without a linkage has no points
         }
         table.revalidate();
     }
