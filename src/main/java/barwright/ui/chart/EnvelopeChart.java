@@ -102,7 +102,7 @@ public final class EnvelopeChart {
                 data.addSeries(axleSeries("inside front, " + comparedLabel, compared, AxlePosition.FRONT));
                 data.addSeries(axleSeries("inside rear, " + comparedLabel, compared, AxlePosition.REAR));
             } else {
-                data.addSeries(new XYSeries("(no " + comparedLabel + " yet)", false, true));
+                data.addSeries(new XYSeries(comparedLabel + ": none yet", false, true));
                 data.addSeries(new XYSeries(" ", false, true));
             }
             data.addSeries(rolloverSeries(current));

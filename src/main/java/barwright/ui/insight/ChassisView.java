@@ -7,8 +7,6 @@ import barwright.ui.field.ViewSettings;
 
 import javax.swing.JComponent;
 import javax.swing.JPanel;
-import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
 import javax.swing.JTextArea;
 import java.awt.BorderLayout;
 import java.util.Locale;
@@ -19,6 +17,11 @@ import java.util.Locale;
  * and no-stiffness limits, this car, and the stiffness at which a bar change keeps 80 % of its effect.
  */
 public final class ChassisView extends JPanel {
+    /**
+     * The chart's least height in lines of text: a title line, a legend of three, the stiffness axis's two, and a
+     * plot of some nine lines for the markers' labels.
+     */
+    static final int LEAST_LINES = 15;
     private final ViewSettings view;
     private final ChassisChart chart;
     private final JTextArea statement = InsightCharts.sentences("insight.chassis.statement");
@@ -29,10 +32,7 @@ public final class ChassisView extends JPanel {
         setName("insight.chassis");
         chart = new ChassisChart(view);
         JComponent panel = chart.panel("insight.chassis.chart");
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, panel, new JScrollPane(statement));
-        split.setResizeWeight(0.75);
-        split.setBorder(null);
-        add(split, BorderLayout.CENTER);
+        add(ChartOverWords.of(panel, statement, LEAST_LINES), BorderLayout.CENTER);
     }
 
     void show(ChassisStudyResult study) {

@@ -11,14 +11,11 @@ import barwright.ui.field.ViewSettings;
 import barwright.ui.task.BackgroundWork;
 
 import javax.swing.JComponent;
-import javax.swing.BorderFactory;
 import javax.swing.JButton;
 import javax.swing.JComboBox;
 import javax.swing.JFileChooser;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
-import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
 import javax.swing.JTextArea;
 import javax.swing.UIManager;
 import javax.swing.filechooser.FileNameExtensionFilter;
@@ -32,6 +29,11 @@ import java.nio.file.Path;
  */
 public final class EnvelopeView extends JPanel {
     static final String PREVIOUS = "the previous setting";
+    /**
+     * The chart's least height in lines of text: a title of two lines, a legend of three or four, the axes' two
+     * and a plot of some eight lines (at 28 points some 260 px of plot).
+     */
+    static final int LEAST_LINES = 16;
     private final ViewSettings view;
     private final EnvelopeChart chart = new EnvelopeChart();
     private final JTextArea sentences = InsightCharts.sentences("insight.envelope.sentences");
@@ -48,18 +50,17 @@ public final class EnvelopeView extends JPanel {
         this.view = view;
         setName("insight.envelope");
         JComponent panel = chart.panel("insight.envelope.chart");
-        JScrollPane text = new JScrollPane(sentences);
-        text.setBorder(BorderFactory.createEmptyBorder());
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, panel, text);
-        split.setResizeWeight(0.72);
-        split.setBorder(null);
-        add(split, BorderLayout.CENTER);
-        add(controls(), BorderLayout.SOUTH);
+        JPanel words = new JPanel(new BorderLayout());
+        words.add(controls(), BorderLayout.NORTH);
+        words.add(sentences, BorderLayout.CENTER);
+        add(ChartOverWords.of(panel, words, LEAST_LINES), BorderLayout.CENTER);
         fileWorker = BackgroundWork.newestOnly(EnvelopeView::envelopeOf, this::fileArrived, this::fileFailed);
     }
 
+    /** The choice of what is drawn dashed, then the file button and what became of the file, on a row below. */
     private JPanel controls() {
         JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
+        JPanel file = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
         JLabel label = new JLabel("Dashed lines:");
         label.setLabelFor(compareWith);
         compareWith.setName("insight.envelope.compareWith");
@@ -74,9 +75,12 @@ public final class EnvelopeView extends JPanel {
         compareNote.setName("insight.envelope.compareNote");
         bar.add(label);
         bar.add(compareWith);
-        bar.add(chooseFile);
-        bar.add(compareNote);
-        return bar;
+        file.add(chooseFile);
+        file.add(compareNote);
+        JPanel rows = new JPanel(new BorderLayout());
+        rows.add(bar, BorderLayout.NORTH);
+        rows.add(file, BorderLayout.SOUTH);
+        return rows;
     }
 
     private void choose() {
@@ -129,7 +133,7 @@ public final class EnvelopeView extends JPanel {
         }
         boolean file = compareWith.getSelectedIndex() == 1;
         LiftEnvelopeResult compared = file ? fromFile : previous;
-        String label = file ? (fromFile == null ? "file" : fromFile.vehicleName()) : PREVIOUS;
+        String label = file ? (fromFile == null ? "a vehicle file" : fromFile.vehicleName()) : PREVIOUS;
         chart.show(current, compared, label);
         EnvelopeText text = new EnvelopeText(view.units());
         StringBuilder words = new StringBuilder();

@@ -10,7 +10,13 @@ final class InsightCharts {
 
     /** @return a read-only text area that wraps at words, for the figures in sentences */
     static JTextArea sentences(String name) {
-        JTextArea text = new JTextArea();
+        JTextArea text = new JTextArea() {
+            @Override
+            public void scrollRectToVisible(java.awt.Rectangle shown) {
+                // the words sit under their chart in a page that scrolls: a new text must not scroll the page
+                // down to its caret, away from the chart
+            }
+        };
         text.setName(name);
         text.setEditable(false);
         text.setLineWrap(true);

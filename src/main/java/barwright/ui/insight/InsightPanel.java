@@ -44,6 +44,7 @@ public final class InsightPanel extends JPanel {
         sensitivity = new SensitivityView(view);
         chassis = new ChassisView(view);
         tabs.setName("insight.tabs");
+        tabs.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT); // one row of tabs, whatever the text size
         tabs.addTab("Where a wheel lifts", envelope);
         tabs.setToolTipTextAt(0, "The lateral acceleration at which each inside wheel lifts, under braking and power");
         tabs.addTab("What moves the balance", sensitivity);
@@ -71,6 +72,7 @@ public final class InsightPanel extends JPanel {
 
     private void resultsChanged() {
         status.setText(results.isStale() ? "Out of date: " + results.staleReason() : " ");
+        status.setVisible(results.isStale()); // no empty line of the text's height above the tabs
         whileShown.request();
     }
 
@@ -96,6 +98,7 @@ public final class InsightPanel extends JPanel {
 
     private void failed(String message) {
         status.setText("These views could not be computed for this car: " + message);
+        status.setVisible(true);
     }
 
     private void redraw() {

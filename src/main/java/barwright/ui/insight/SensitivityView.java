@@ -14,11 +14,12 @@ import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
+import javax.swing.UIManager;
 import javax.swing.JTable;
+import javax.swing.JTextArea;
 import javax.swing.table.DefaultTableModel;
 import java.awt.BorderLayout;
-import java.awt.FlowLayout;
+import java.awt.Dimension;
 import java.awt.event.MouseEvent;
 import java.util.ArrayList;
 import java.util.List;
@@ -47,6 +48,13 @@ public final class SensitivityView extends JPanel {
 
     static final String[] COLUMNS = {"Change", "Step", "Front share", "Roll gradient", "Limit margin",
         "First inside lift", "Balance"};
+    /**
+     * The chart's least height in lines of text: a title of two lines, a legend of three, the value axis's two
+     * and a bar a line high for each of the dozen or so changes.
+     */
+    static final int LEAST_LINES = 20;
+    /** The table's rows in view; the rest scroll within it. */
+    private static final int TABLE_ROWS = 6;
     private final ViewSettings view;
     private final SensitivityChart chart = new SensitivityChart();
     private final DefaultTableModel table = new DefaultTableModel(COLUMNS, 0) {
@@ -56,7 +64,7 @@ public final class SensitivityView extends JPanel {
         }
     };
     private final JComboBox<String> measure = new JComboBox<>();
-    private final JLabel basis = new JLabel(" ");
+    private final JTextArea basis = InsightCharts.sentences("insight.sensitivity.basis");
     private SensitivityResult shown;
 
     SensitivityView(ViewSettings view) {
@@ -75,14 +83,13 @@ public final class SensitivityView extends JPanel {
         rows.setAutoResizeMode(JTable.AUTO_RESIZE_OFF);
         rows.setName("insight.sensitivity.table");
         rows.setAutoCreateRowSorter(false);
+        // widths for the system text size, widened with the text: the table scrolls sideways within its box
+        float scale = textScale();
         int[] widths = {240, 300, 90, 110, 100, 110, 420};
         for (int i = 0; i < widths.length; i++) {
-            rows.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
+            rows.getColumnModel().getColumn(i).setPreferredWidth(Math.round(widths[i] * scale));
         }
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, panel, new JScrollPane(rows));
-        split.setResizeWeight(0.6);
-        split.setBorder(null);
-        add(split, BorderLayout.CENTER);
+        rows.setPreferredScrollableViewportSize(new Dimension(400, TABLE_ROWS * rows.getRowHeight()));
         for (Measure choice : Measure.values()) {
             measure.addItem(choice.words);
         }
@@ -92,15 +99,19 @@ public final class SensitivityView extends JPanel {
                 show(shown);
             }
         });
-        JPanel bar = new JPanel(new FlowLayout(FlowLayout.LEFT, 6, 2));
         JLabel label = new JLabel("Bars show the change of the");
         label.setLabelFor(measure);
-        bar.add(label);
-        bar.add(measure);
-        basis.setName("insight.sensitivity.basis");
-        bar.add(basis);
-        bar.setBorder(BorderFactory.createEmptyBorder(0, 2, 0, 2));
-        add(bar, BorderLayout.SOUTH);
+        // one above the other: the longest figure's name is as wide as the view at 28 points
+        JPanel bar = new JPanel(new BorderLayout(0, 2));
+        bar.add(label, BorderLayout.NORTH);
+        bar.add(measure, BorderLayout.CENTER);
+        bar.add(basis, BorderLayout.SOUTH);
+        bar.setBorder(BorderFactory.createEmptyBorder(2, 8, 2, 8));
+        basis.setOpaque(false);
+        JPanel words = new JPanel(new BorderLayout(0, 4));
+        words.add(bar, BorderLayout.NORTH);
+        words.add(new JScrollPane(rows), BorderLayout.CENTER);
+        add(ChartOverWords.of(panel, words, LEAST_LINES), BorderLayout.CENTER);
     }
 
     void show(SensitivityResult result) {
@@ -144,6 +155,12 @@ public final class SensitivityView extends JPanel {
     private String signed(double si, Quantity quantity, int decimals) {
         String figure = Figures.format(si, quantity, view.units(), decimals);
         return figure.startsWith("-") ? figure : "+" + figure;
+    }
+
+    /** @return the text size against the system's 13 points, at least 1 */
+    private static float textScale() {
+        java.awt.Font font = UIManager.getFont("Label.font");
+        return font == null ? 1f : Math.max(1f, font.getSize2D() / 13f);
     }
 
     DefaultTableModel table() {

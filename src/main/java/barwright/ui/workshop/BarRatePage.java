@@ -27,7 +27,6 @@ import javax.swing.JComboBox;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.UIManager;
 import javax.swing.table.DefaultTableModel;
@@ -49,12 +48,17 @@ import static barwright.ui.workshop.ReadingCells.number;
  */
 public final class BarRatePage extends JPanel {
     private static final int ROWS = 12;
+    /**
+     * The chart's least size in lines of text, where it sits under the readings: its title, the axes' names and
+     * ticks, and a plot of some eight lines.
+     */
+    private static final int CHART_LINES = 14;
     private final OpenDocument document;
     private final ViewSettings view;
     private final DefaultTableModel readings;
     private final JTable table;
     private final JComboBox<String> axle = new JComboBox<>(new String[] {"front", "rear"});
-    private final JLabel summary = new JLabel(" ");
+    private final Words summary = new Words("workshop.summary", " ");
     private final JButton use = new JButton("Use this in the car");
     private final BarRateChart chart = new BarRateChart();
     private final BackgroundWork<Request, Outcome> worker;
@@ -69,7 +73,7 @@ public final class BarRatePage extends JPanel {
     }
 
     public BarRatePage(OpenDocument document, ViewSettings view) {
-        super(new BorderLayout(8, 8));
+        super(new BorderLayout());
         setName("workshop.page");
         this.document = document;
         this.view = view;
@@ -79,7 +83,8 @@ public final class BarRatePage extends JPanel {
                 return column < 2;
             }
         };
-        table = new JTable(readings);
+        // the widest content of each column: a load, a deflection, a residual, the longest role
+        table = new ReadingsTable(readings, ROWS, "9999.9", "-99.99", "-99.9 lbf", "free play");
         table.setName("workshop.readings");
         PastedRows.bindPaste(table, this::paste, () -> summary.setText(
                 "Nothing to paste: copy two columns, load and deflection, from a spreadsheet."));
@@ -97,22 +102,32 @@ public final class BarRatePage extends JPanel {
         use.addActionListener(event -> useInCar());
         summary.setName("workshop.summary");
 
-        JPanel top = new JPanel(new FlowLayout(FlowLayout.LEADING));
-        top.add(new JLabel("Bar on the"));
-        top.add(axle);
-        top.add(new JLabel("axle: hang loads on one link point, hold the other, read the travel. Paste with Ctrl+V."));
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(table), chart.component());
-        split.setResizeWeight(0.4);
+        JPanel choice = new JPanel(new FlowLayout(FlowLayout.LEADING));
+        choice.add(new JLabel("Bar on the"));
+        choice.add(axle);
+        choice.add(new JLabel("axle"));
+        JPanel top = new JPanel(new BorderLayout());
+        top.add(choice, BorderLayout.NORTH);
+        top.add(new Words("workshop.how", "Hang loads on one link point, hold the other, read the travel. "
+                + "Paste two columns, load and deflection, with Ctrl+V."), BorderLayout.CENTER);
+        JPanel left = new JPanel(new BorderLayout());
+        left.add(new JScrollPane(table), BorderLayout.NORTH);
+        ReadingsAndAnswer split = ReadingsAndAnswer.beside(left,
+                ReadingsAndAnswer.chartBox(chart.component(), CHART_LINES));
+        JPanel useRow = new JPanel(new FlowLayout(FlowLayout.TRAILING, 0, 0));
+        useRow.add(use);
         JPanel bottom = new JPanel(new BorderLayout(4, 4));
-        bottom.add(summary, BorderLayout.CENTER);
-        bottom.add(use, BorderLayout.EAST);
-        JLabel caution = new JLabel("<html>" + Cautions.SHORT + "</html>");
+        bottom.add(summary, BorderLayout.NORTH);
+        bottom.add(useRow, BorderLayout.CENTER);
+        Words caution = new Words("workshop.caution", Cautions.SHORT);
         caution.setForeground(Palette.muted());
         bottom.add(caution, BorderLayout.SOUTH);
-        setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        add(top, BorderLayout.NORTH);
-        add(split, BorderLayout.CENTER);
-        add(bottom, BorderLayout.SOUTH);
+        JPanel content = new JPanel(new BorderLayout(8, 8));
+        content.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
+        content.add(top, BorderLayout.NORTH);
+        content.add(split, BorderLayout.CENTER);
+        content.add(bottom, BorderLayout.SOUTH);
+        add(FittedPage.of(content), BorderLayout.CENTER);
         worker = BackgroundWork.newestOnly(BarRatePage::fit, this::arrived, message -> summary.setText(message));
         view.addListener(this::relabel);
         document.addListener(event -> refit());
@@ -185,7 +200,7 @@ public final class BarRatePage extends JPanel {
             text.append("; this axle has no bar to compare with");
         }
         fit.warnings().forEach(w -> text.append(". ").append(w));
-        summary.setText("<html>" + text + "</html>");
+        summary.setText(text.toString());
         summary.setForeground(UIManager.getColor("Label.foreground"));
         chart.show(fit, view.units());
         for (int i = 0, r = 0; r < readings.getRowCount() && i < fit.readings().size(); r++) {
@@ -218,8 +233,8 @@ public final class BarRatePage extends JPanel {
     }
 
     private void relabel() {
-        readings.setColumnIdentifiers(new Object[] {"Load (" + Quantity.FORCE.unit(view.units()).symbol() + ")",
-                "Deflection (" + Quantity.LENGTH.unit(view.units()).symbol() + ")", "Residual", "Used as"});
+        readings.setColumnIdentifiers(ReadingsTable.wordUnderWord("Load (" + Quantity.FORCE.unit(view.units()).symbol()
+                + ")", "Deflection (" + Quantity.LENGTH.unit(view.units()).symbol() + ")", "Residual", "Used as"));
         refit();
     }
 

@@ -43,13 +43,13 @@ public final class CentreOfMassPage extends JPanel {
     private final ReadingField scaleResolution;
     private final ReadingField raiseResolution;
     private final List<Runnable> relabel = new ArrayList<>();
-    private final JLabel fromCar = new JLabel(" ");
+    private final Words fromCar = new Words("cg.fromCar", " ");
     private final ResultText result = new ResultText("cg.result");
     private final JButton use = new JButton("Use this height in the car");
     private CentreOfMassHeight current;
 
     public CentreOfMassPage(OpenDocument document, ViewSettings view) {
-        super(new BorderLayout(8, 8));
+        super(new BorderLayout());
         setName("cg.page");
         this.document = document;
         this.view = view;
@@ -71,18 +71,19 @@ public final class CentreOfMassPage extends JPanel {
         row(form, 3, "Wheel centre height (optional)", wheelCentre, Quantity.LENGTH);
         row(form, 4, "Scale resolution", scaleResolution, Quantity.MASS);
         row(form, 5, "Tape resolution", raiseResolution, Quantity.LENGTH);
-        fromCar.setName("cg.fromCar");
         JPanel top = new JPanel(new BorderLayout(4, 4));
+        Words how = new Words("cg.how", "Weigh level, raise one axle, weigh the front again.");
+        how.setFont(how.getFont().deriveFont(java.awt.Font.BOLD));
+        top.add(how, BorderLayout.NORTH);
         top.add(form, BorderLayout.WEST);
         top.add(fromCar, BorderLayout.SOUTH);
-        top.setBorder(BorderFactory.createTitledBorder("Weigh level, raise one axle, weigh the front again"));
 
         use.setName("cg.use");
         use.setEnabled(false);
         use.setToolTipText("Put the measured height into the car (one step; Edit > Undo takes it back)");
         use.addActionListener(event -> useInCar());
         setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        add(ReadingsAndAnswer.of(top, use, result), BorderLayout.CENTER);
+        add(FittedPage.of(ReadingsAndAnswer.of(top, use, result)), BorderLayout.CENTER);
         view.addListener(this::unitsChanged);
         document.addListener(event -> workOut());
         unitsChanged();
@@ -96,19 +97,26 @@ public final class CentreOfMassPage extends JPanel {
         return new ReadingField(name, what, () -> Quantity.MASS.unit(view.units()), this::workOut);
     }
 
+    /** A reading's name over its field and unit: side by side the longest name and its field passed 570 px. */
     private void row(JPanel form, int y, String label, Component field, Quantity quantity) {
         GridBagConstraints at = new GridBagConstraints();
-        at.gridy = y;
-        at.insets = new Insets(3, 4, 3, 4);
+        at.gridx = 0;
+        at.gridy = 2 * y;
+        at.gridwidth = 2;
+        at.insets = new Insets(6, 4, 0, 4);
         at.anchor = GridBagConstraints.LINE_START;
-        form.add(new JLabel(label), at);
-        at.gridx = 1;
+        JLabel name = new JLabel(label);
+        name.setLabelFor(field);
+        form.add(name, at);
+        at.gridy = 2 * y + 1;
+        at.gridwidth = 1;
+        at.insets = new Insets(2, 4, 2, 4);
         at.fill = GridBagConstraints.HORIZONTAL;
         form.add(field, at);
         if (quantity != null) {
             JLabel unit = new JLabel();
             relabel.add(() -> unit.setText(quantity.unit(view.units()).symbol()));
-            at.gridx = 2;
+            at.gridx = 1;
             at.fill = GridBagConstraints.NONE;
             form.add(unit, at);
         }
@@ -147,8 +155,7 @@ public final class CentreOfMassPage extends JPanel {
         }
         Vehicle vehicle = car.vehicle();
         double defaultCentre = TiltTest.assumedWheelCentreHeight(vehicle);
-        fromCar.setText(String.format("<html>Level readings from the car file: mass %s, front axle %s, wheelbase %s."
-                        + "</html>",
+        fromCar.setText(String.format("Level readings from the car file: mass %s, front axle %s, wheelbase %s.",
                 Figures.format(vehicle.mass(), Quantity.MASS, view.units(), 1, view.locale()),
                 Figures.format(vehicle.mass() * vehicle.frontMassFraction(), Quantity.MASS, view.units(), 1,
                         view.locale()),

@@ -47,7 +47,7 @@ public final class CornerWeightsPage extends JPanel {
     private CornerWeights current;
 
     public CornerWeightsPage(OpenDocument document, ViewSettings view) {
-        super(new BorderLayout(8, 8));
+        super(new BorderLayout());
         setName("corners.page");
         this.document = document;
         this.view = view;
@@ -68,19 +68,21 @@ public final class CornerWeightsPage extends JPanel {
         JLabel front = new JLabel("\u2191 front of the car", SwingConstants.CENTER);
         car.add(front, BorderLayout.NORTH);
         car.add(scales, BorderLayout.CENTER);
-        car.setBorder(BorderFactory.createTitledBorder("The four scales, as they sit under the car"));
+        car.setBorder(BorderFactory.createTitledBorder("The four scales"));
+        car.setToolTipText("The four scales, as they sit under the car");
 
-        JPanel options = new JPanel(new GridLayout(3, 2, 6, 4));
+        // each question over its answer: side by side the longest passed 570 px at 28 points
+        JPanel options = new JPanel(new GridLayout(6, 1, 0, 2));
         options.add(new JLabel("Cross weight wanted (%, optional)"));
-        options.add(target);
+        options.add(leftAligned(target));
         options.add(new JLabel("Reached by the link of the bar at the"));
         axle.setName("corners.axle");
-        options.add(axle);
+        options.add(leftAligned(axle));
         options.add(new JLabel("A longer link there loads"));
         diagonal.setName("corners.diagonal");
         diagonal.setToolTipText("Which diagonal gains load when that link is made longer depends on the side and on "
                 + "how the bar end sits: check it on the car");
-        options.add(diagonal);
+        options.add(leftAligned(diagonal));
         axle.addActionListener(event -> workOut());
         diagonal.addActionListener(event -> workOut());
 
@@ -93,7 +95,7 @@ public final class CornerWeightsPage extends JPanel {
                 + "it back); the mass and front share then follow from them");
         use.addActionListener(event -> useInCar());
         setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        add(ReadingsAndAnswer.of(top, use, result), BorderLayout.CENTER);
+        add(FittedPage.of(ReadingsAndAnswer.of(top, use, result)), BorderLayout.CENTER);
         view.addListener(this::unitsChanged);
         document.addListener(event -> workOut());
         unitsChanged();
@@ -103,9 +105,16 @@ public final class CornerWeightsPage extends JPanel {
         return new ReadingField(name, what, () -> Quantity.MASS.unit(view.units()), this::workOut);
     }
 
+    private static JPanel leftAligned(java.awt.Component field) {
+        JPanel row = new JPanel(new FlowLayout(FlowLayout.LEADING, 0, 0));
+        row.add(field);
+        return row;
+    }
+
     private JPanel scale(String title, ReadingField field, int index) {
         JPanel panel = new JPanel(new FlowLayout(FlowLayout.CENTER, 6, 4));
         panel.setBorder(BorderFactory.createTitledBorder(title));
+        field.setColumns(6); // a reading such as 1234.5: two scales side by side fit 570 px at 28 points
         panel.add(field);
         units[index] = new JLabel();
         panel.add(units[index]);

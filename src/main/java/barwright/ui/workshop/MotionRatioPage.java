@@ -12,10 +12,8 @@ import barwright.units.Figures;
 import barwright.units.Quantity;
 
 import javax.swing.BorderFactory;
-import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.table.DefaultTableModel;
 import java.awt.BorderLayout;
@@ -37,6 +35,8 @@ import static barwright.ui.workshop.ReadingCells.number;
  */
 public final class MotionRatioPage extends JPanel {
     private static final int ROWS = 12;
+    /** The chart's least size in lines of text, under the readings: title, axes and a plot of some eight lines. */
+    private static final int CHART_LINES = 14;
     private final ViewSettings view;
     private final DefaultTableModel readings;
     private final ReadingField angle;
@@ -45,7 +45,7 @@ public final class MotionRatioPage extends JPanel {
     private boolean filling;
 
     public MotionRatioPage(ViewSettings view) {
-        super(new BorderLayout(8, 8));
+        super(new BorderLayout());
         setName("motionRatio.page");
         this.view = view;
         readings = new DefaultTableModel(ROWS, 4) {
@@ -54,7 +54,8 @@ public final class MotionRatioPage extends JPanel {
                 return column < 2;
             }
         };
-        JTable table = new JTable(readings);
+        // the widest content of each column: two travels, a residual, the note
+        JTable table = new ReadingsTable(readings, ROWS, "-99.9", "-99.9", "-9.99 mm", "outlier");
         table.setName("motionRatio.readings");
         PastedRows.bindPaste(table, this::paste, () -> result.why(
                 "Nothing to paste: copy two columns, wheel travel and component travel, from a spreadsheet."));
@@ -68,21 +69,28 @@ public final class MotionRatioPage extends JPanel {
         angle.setToolTipText("The angle between the component's axis and the direction its mount moves; 0 where the "
                 + "travel was read along the component itself");
 
-        JPanel lean = new JPanel(new FlowLayout(FlowLayout.LEADING));
-        lean.add(new JLabel("Lean of the component from the direction its mount moves (deg):"));
-        lean.add(angle);
+        JPanel lean = new JPanel(new BorderLayout(4, 4));
+        Words leanWords = new Words("motionRatio.leanLabel",
+                "Lean of the component from the direction its mount moves (deg):");
+        lean.add(leanWords, BorderLayout.NORTH);
+        JPanel field = new JPanel(new FlowLayout(FlowLayout.LEADING, 4, 0));
+        field.add(angle);
+        lean.add(field, BorderLayout.CENTER);
         JPanel top = new JPanel(new BorderLayout(4, 4));
-        top.add(new JLabel("<html>Jack the wheel through its travel (springs out, or a dummy damper); at each height "
-                + "read the wheel's travel and the component's. Paste two columns with Ctrl+V.</html>"),
+        top.add(new Words("motionRatio.how", "Jack the wheel through its travel (springs out, or a dummy damper); "
+                + "at each height read the wheel's travel and the component's. Paste two columns with Ctrl+V."),
                 BorderLayout.CENTER);
         top.add(lean, BorderLayout.SOUTH);
-        JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, new JScrollPane(table), new JScrollPane(result));
-        left.setResizeWeight(0.5);
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, chart.component());
-        split.setResizeWeight(0.45);
-        setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        add(top, BorderLayout.NORTH);
-        add(split, BorderLayout.CENTER);
+        JPanel left = new JPanel(new BorderLayout(4, 4));
+        left.add(new JScrollPane(table), BorderLayout.NORTH);
+        left.add(new JScrollPane(result), BorderLayout.CENTER);
+        ReadingsAndAnswer split = ReadingsAndAnswer.beside(left,
+                ReadingsAndAnswer.chartBox(chart.component(), CHART_LINES));
+        JPanel content = new JPanel(new BorderLayout(8, 8));
+        content.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
+        content.add(top, BorderLayout.NORTH);
+        content.add(split, BorderLayout.CENTER);
+        add(FittedPage.of(content), BorderLayout.CENTER);
         view.addListener(this::relabel);
         relabel();
     }
@@ -130,7 +138,7 @@ public final class MotionRatioPage extends JPanel {
                 for (int i = 0; i < rows.size(); i++) {
                     readings.setValueAt(Figures.format(fit.residuals().get(i), Quantity.LENGTH, view.units(), 2,
                             view.locale()), rows.get(i), 2);
-                    readings.setValueAt(fit.outliers().get(i) ? "outlier: look again" : "", rows.get(i), 3);
+                    readings.setValueAt(fit.outliers().get(i) ? "outlier" : "", rows.get(i), 3);
                 }
             } finally {
                 filling = false;
@@ -154,8 +162,8 @@ public final class MotionRatioPage extends JPanel {
         String unit = Quantity.LENGTH.unit(view.units()).symbol();
         filling = true;
         try {
-            readings.setColumnIdentifiers(new Object[] {"Wheel travel (" + unit + ")", "Component travel (" + unit + ")",
-                    "Residual", "Note"});
+            readings.setColumnIdentifiers(ReadingsTable.wordUnderWord("Wheel travel (" + unit + ")",
+                    "Component travel (" + unit + ")", "Residual", "Note"));
         } finally {
             filling = false;
         }

@@ -17,12 +17,15 @@ final class ResultText extends JTextArea {
 
     /** The answer, then the usual caution. */
     void answer(String text) {
+        setLineWrap(false); // the answer's figures stand in columns: it scrolls sideways in its box
         setText(text + "\n" + Cautions.SHORT + "\n");
         setCaretPosition(0);
     }
 
     /** Why there is no answer yet, in words that name the reading. */
     void why(String message) {
+        setLineWrap(true); // words only: they wrap at the box's width
+        setWrapStyleWord(true);
         setText(message + "\n");
     }
 }

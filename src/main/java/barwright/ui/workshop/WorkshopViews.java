@@ -23,6 +23,7 @@ public final class WorkshopViews implements WindowContribution {
         centreOfMass = new CentreOfMassPage(context.document(), context.view());
         corners = new CornerWeightsPage(context.document(), context.view());
         pages.setName("workshop.pages");
+        pages.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT); // one row of tabs, whatever the text size
         pages.addTab("Bar rate", page);
         pages.setToolTipTextAt(0, "A bar's rate and free play from load and deflection readings, against the model's");
         pages.addTab("Motion ratio", motionRatio);

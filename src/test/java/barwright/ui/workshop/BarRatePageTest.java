@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 
 import javax.swing.JButton;
 import javax.swing.JFrame;
-import javax.swing.JLabel;
+import javax.swing.text.JTextComponent;
 import java.util.Locale;
 
 import static org.assertj.core.api.Assertions.assertThat;
@@ -39,13 +39,13 @@ class BarRatePageTest {
             return created;
         });
         GuiActionRunner.execute(() -> page.paste(PASTED));
-        JLabel summary = (JLabel) NamedComponents.find(page, "workshop.summary");
+        JTextComponent summary = (JTextComponent) NamedComponents.find(page, "workshop.summary");
         JButton use = (JButton) NamedComponents.find(page, "workshop.use");
         long deadline = System.currentTimeMillis() + 20_000;
         while (!GuiActionRunner.execute(use::isEnabled) && System.currentTimeMillis() < deadline) {
             Thread.sleep(50);
         }
-        String text = GuiActionRunner.execute(summary::getText);
+        String text = GuiActionRunner.execute(() -> summary.getText());
         // 60 N per 2 mm past the free play: 30 N/mm, crossing zero load at 1 mm (the readings' own numbers)
         assertThat(text).contains("Rate 30.0 N/mm").contains("free play 1.00 mm");
         double model = BarAnalysis.model(document.lastValid().vehicle().front().bar(), 0).linkRate();
