@@ -23,8 +23,9 @@ import java.util.List;
  * beside 280 px of plot), a horizontal axis's off the chart's sides. After each drawing the name's font is made just
  * small enough to fit (never under {@link #SMALLEST_POINTS}), and back to the theme's size where there is room
  * again; a name too long even at that size gives way to its unit alone ("(deg/g)"), the words being in the
- * chart's title or legend. The size to fit from is the one {@link ChartStyle} gives every axis name. Which axes stand upright depends on the plot's orientation: a horizontal bar chart's value axis lies
- * along the bottom and is measured against the plot's width. Event thread.
+ * chart's title or legend. The size to fit from is the one {@link ChartStyle} gives every axis name. Which axes
+ * stand upright depends on the plot's orientation: a horizontal bar chart's value axis lies along the bottom and
+ * is measured against the plot's width. Event thread.
  */
 final class AxisNames {
     static final int SMALLEST_POINTS = 9;
@@ -88,6 +89,11 @@ final class AxisNames {
             }
         }
         return axis.getLabel();
+    }
+
+    /** @return the axis's whole name, also while its unit alone is shown */
+    static String wholeName(Axis axis) {
+        return ownName(axis);
     }
 
     /** Keeps the axis's whole name while its unit alone is shown; forgets it with null. */

@@ -128,6 +128,14 @@ public final class ChartStyle {
     }
 
     /**
+     * @return the axis's name as its chart gave it, also where a short room shows its unit alone ("(deg/g)" for
+     *         "Roll gradient (deg/g)")
+     */
+    public static String axisName(Axis axis) {
+        return AxisNames.wholeName(axis);
+    }
+
+    /**
      * @return the chart in a panel that redraws at any size (no buffer, no zoom, no pop-up menu) and fits the
      *         chart's words to each size: axis names, legend lines and marker labels stay inside the chart
      */
