@@ -3,6 +3,7 @@ package barwright.ui.panel;
 import javax.swing.JTable;
 import javax.swing.table.TableCellRenderer;
 import javax.swing.table.TableColumn;
+import java.awt.Component;
 
 /**
  * How a table's columns are fitted to their texts at the table's current font: each column as wide as the widest
@@ -63,13 +64,19 @@ public final class ColumnWidths {
                         false, -1, view).getPreferredSize().width + PADDING);
             }
             for (int row = 0; row < Math.min(table.getRowCount(), rowsMeasured); row++) {
-                width = Math.max(width, table.prepareRenderer(table.getCellRenderer(row, view), row, view)
-                        .getPreferredSize().width + PADDING);
+                width = Math.max(width, wholeCell(table, row, view).getPreferredSize().width + PADDING);
             }
             if (keptAsLeast) {
                 column.setMinWidth(width);
             }
             column.setPreferredWidth(width);
         }
+    }
+
+    /** The cell as drawn with its whole text, also where the view cuts its column (see FittedColumnsTable). */
+    private static Component wholeCell(JTable table, int row, int column) {
+        TableCellRenderer renderer = table.getCellRenderer(row, column);
+        return table instanceof FittedColumnsTable fitted ? fitted.prepareWholeRenderer(renderer, row, column)
+                : table.prepareRenderer(renderer, row, column);
     }
 }

@@ -1,6 +1,7 @@
 package barwright.ui.dynamics;
 
 import barwright.ui.document.Samples;
+import barwright.ui.panel.FittedColumnsTable;
 import barwright.ui.window.WindowFixture;
 import barwright.ui.window.WindowUnderTest;
 import org.assertj.swing.edt.GuiActionRunner;
@@ -8,7 +9,6 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
-import javax.swing.JTable;
 import javax.swing.table.TableColumn;
 import java.awt.Component;
 import java.util.ArrayList;
@@ -37,7 +37,7 @@ class DamperTableLargeTextTest {
         List<String> cut = GuiActionRunner.execute(() -> {
             DamperPage page = (DamperPage) fixture.robot.finder().findByName(fixture.window, "dampers.page", false);
             fixture.showResultsPage(page);
-            JTable table = page.table();
+            FittedColumnsTable table = (FittedColumnsTable) page.table();
             List<String> faults = new ArrayList<>();
             // guards the test itself: the sample's front damper has several points
             assertThat(table.getRowCount()).isGreaterThan(3);
@@ -48,7 +48,7 @@ class DamperTableLargeTextTest {
                         column.getHeaderValue(), false, false, -1, view);
                 int needed = header.getPreferredSize().width;
                 for (int row = 0; row < table.getRowCount(); row++) {
-                    needed = Math.max(needed, table.prepareRenderer(table.getCellRenderer(row, view), row, view)
+                    needed = Math.max(needed, table.prepareWholeRenderer(table.getCellRenderer(row, view), row, view)
                             .getPreferredSize().width);
                 }
                 if (column.getWidth() < needed) {
