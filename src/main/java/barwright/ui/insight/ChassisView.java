@@ -4,6 +4,7 @@ import barwright.insight.ChassisStudyResult;
 import barwright.report.insight.ChassisText;
 import barwright.ui.chart.ChassisChart;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.ScrollingPage;
 
 import javax.swing.JComponent;
 import javax.swing.JPanel;
@@ -32,7 +33,7 @@ public final class ChassisView extends JPanel {
         setName("insight.chassis");
         chart = new ChassisChart(view);
         JComponent panel = chart.panel("insight.chassis.chart");
-        add(ChartOverWords.of(panel, statement, LEAST_LINES), BorderLayout.CENTER);
+        add(ScrollingPage.chartOverWords(panel, statement, LEAST_LINES, InsightPanel.CHART_SHARE), BorderLayout.CENTER);
     }
 
     void show(ChassisStudyResult study) {

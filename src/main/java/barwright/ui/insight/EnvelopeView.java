@@ -8,6 +8,7 @@ import barwright.physics.VehicleAnalysis;
 import barwright.report.insight.EnvelopeText;
 import barwright.ui.chart.EnvelopeChart;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.ScrollingPage;
 import barwright.ui.task.BackgroundWork;
 
 import javax.swing.JComponent;
@@ -53,7 +54,7 @@ public final class EnvelopeView extends JPanel {
         JPanel words = new JPanel(new BorderLayout());
         words.add(controls(), BorderLayout.NORTH);
         words.add(sentences, BorderLayout.CENTER);
-        add(ChartOverWords.of(panel, words, LEAST_LINES), BorderLayout.CENTER);
+        add(ScrollingPage.chartOverWords(panel, words, LEAST_LINES, InsightPanel.CHART_SHARE), BorderLayout.CENTER);
         fileWorker = BackgroundWork.newestOnly(EnvelopeView::envelopeOf, this::fileArrived, this::fileFailed);
     }
 

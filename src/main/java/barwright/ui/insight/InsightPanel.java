@@ -25,6 +25,8 @@ import java.awt.BorderLayout;
  * previous setting. Event thread.
  */
 public final class InsightPanel extends JPanel {
+    /** The share of the view's height each tab's chart gets at least, as the split it replaced gave it. */
+    static final double CHART_SHARE = 0.72;
     private final ResultsModel results;
     private final EnvelopeView envelope;
     private final SensitivityView sensitivity;

@@ -5,6 +5,7 @@ import barwright.insight.SensitivityRow;
 import barwright.report.insight.SensitivityText;
 import barwright.ui.chart.SensitivityChart;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.ScrollingPage;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 
@@ -111,7 +112,7 @@ public final class SensitivityView extends JPanel {
         JPanel words = new JPanel(new BorderLayout(0, 4));
         words.add(bar, BorderLayout.NORTH);
         words.add(new JScrollPane(rows), BorderLayout.CENTER);
-        add(ChartOverWords.of(panel, words, LEAST_LINES), BorderLayout.CENTER);
+        add(ScrollingPage.chartOverWords(panel, words, LEAST_LINES, InsightPanel.CHART_SHARE), BorderLayout.CENTER);
     }
 
     void show(SensitivityResult result) {

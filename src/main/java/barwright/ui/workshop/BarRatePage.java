@@ -15,6 +15,7 @@ import barwright.ui.chart.BarRateChart;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.ViewSettings;
 import barwright.ui.panel.Palette;
+import barwright.ui.panel.ScrollingPage;
 import barwright.ui.task.BackgroundWork;
 import barwright.units.DisplayUnit;
 import barwright.units.Figures;
@@ -127,7 +128,7 @@ public final class BarRatePage extends JPanel {
         content.add(top, BorderLayout.NORTH);
         content.add(split, BorderLayout.CENTER);
         content.add(bottom, BorderLayout.SOUTH);
-        add(FittedPage.of(content), BorderLayout.CENTER);
+        add(ScrollingPage.of(content), BorderLayout.CENTER);
         worker = BackgroundWork.newestOnly(BarRatePage::fit, this::arrived, message -> summary.setText(message));
         view.addListener(this::relabel);
         document.addListener(event -> refit());

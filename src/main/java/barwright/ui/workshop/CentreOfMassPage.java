@@ -11,6 +11,7 @@ import barwright.model.Vehicle;
 import barwright.report.measure.MeasureText;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.ScrollingPage;
 import barwright.units.Figures;
 import barwright.units.Quantity;
 
@@ -83,7 +84,7 @@ public final class CentreOfMassPage extends JPanel {
         use.setToolTipText("Put the measured height into the car (one step; Edit > Undo takes it back)");
         use.addActionListener(event -> useInCar());
         setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        add(FittedPage.of(ReadingsAndAnswer.of(top, use, result)), BorderLayout.CENTER);
+        add(ScrollingPage.of(ReadingsAndAnswer.of(top, use, result)), BorderLayout.CENTER);
         view.addListener(this::unitsChanged);
         document.addListener(event -> workOut());
         unitsChanged();

@@ -11,6 +11,7 @@ import barwright.report.measure.MeasureText;
 import barwright.sizing.preload.GainingDiagonal;
 import barwright.ui.document.OpenDocument;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.ScrollingPage;
 import barwright.units.Quantity;
 
 import javax.swing.BorderFactory;
@@ -95,7 +96,7 @@ public final class CornerWeightsPage extends JPanel {
                 + "it back); the mass and front share then follow from them");
         use.addActionListener(event -> useInCar());
         setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
-        add(FittedPage.of(ReadingsAndAnswer.of(top, use, result)), BorderLayout.CENTER);
+        add(ScrollingPage.of(ReadingsAndAnswer.of(top, use, result)), BorderLayout.CENTER);
         view.addListener(this::unitsChanged);
         document.addListener(event -> workOut());
         unitsChanged();

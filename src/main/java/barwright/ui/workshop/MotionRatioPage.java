@@ -7,6 +7,7 @@ import barwright.measure.TravelReading;
 import barwright.report.measure.MeasureText;
 import barwright.ui.chart.TravelFitChart;
 import barwright.ui.field.ViewSettings;
+import barwright.ui.panel.ScrollingPage;
 import barwright.units.DisplayUnit;
 import barwright.units.Figures;
 import barwright.units.Quantity;
@@ -90,7 +91,7 @@ public final class MotionRatioPage extends JPanel {
         content.setBorder(BorderFactory.createEmptyBorder(8, 8, 8, 8));
         content.add(top, BorderLayout.NORTH);
         content.add(split, BorderLayout.CENTER);
-        add(FittedPage.of(content), BorderLayout.CENTER);
+        add(ScrollingPage.of(content), BorderLayout.CENTER);
         view.addListener(this::relabel);
         relabel();
     }

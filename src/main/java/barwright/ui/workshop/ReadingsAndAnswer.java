@@ -16,7 +16,7 @@ import java.awt.event.ComponentEvent;
  * A workshop page's readings and its answer (the result, or the chart of the fit): side by side where the page
  * is wide enough for the readings at the current text size and a useful answer beside them, one above the other
  * on a small screen or with large text, so that neither is squeezed to a sliver. One above the other, each
- * asks for its own height and the page scrolls ({@link FittedPage}).
+ * asks for its own height and the page scrolls ({@link barwright.ui.panel.ScrollingPage}).
  */
 final class ReadingsAndAnswer extends JSplitPane {
     /** The answer's least useful width beside the readings (pixels at the system text size). */

@@ -1,11 +1,11 @@
 package barwright.ui.workshop;
 
-import javax.swing.JTable;
+import barwright.ui.panel.ColumnWidths;
+import barwright.ui.panel.FittedColumnsTable;
+
 import javax.swing.JViewport;
 import javax.swing.event.TableModelEvent;
-import javax.swing.table.TableColumn;
 import javax.swing.table.TableModel;
-import java.awt.Component;
 import java.awt.Dimension;
 import java.awt.FontMetrics;
 
@@ -16,10 +16,9 @@ import java.awt.FontMetrics;
  * The columns share out what width is left; where the view is narrower than the columns need, the table keeps
  * its width and scrolls sideways rather than cut a name or a number. Event thread.
  */
-final class ReadingsTable extends JTable {
-    /** The room a cell leaves about its text (pixels). */
+final class ReadingsTable extends FittedColumnsTable {
+    /** The room a cell leaves about its text (pixels): four columns share a 1024x768 view at 28-point text. */
     private static final int PADDING = 8;
-    private final String[] widest;
     private final int rowsShown;
 
     /**
@@ -28,17 +27,17 @@ final class ReadingsTable extends JTable {
      */
     ReadingsTable(TableModel model, int rowsShown, String... widest) {
         super(model);
-        this.widest = widest;
         this.rowsShown = rowsShown;
         getTableHeader().setReorderingAllowed(false);
-        fitColumns();
+        fitColumnsWith(ColumnWidths.atLeastTexts(PADDING, widest));
+        fitRows();
     }
 
     @Override
     public void tableChanged(TableModelEvent event) {
         super.tableChanged(event);
         if (event == null || event.getFirstRow() == TableModelEvent.HEADER_ROW) {
-            fitColumns(); // new names (a change of units): the columns were made again at the default width
+            fitRows(); // new names (a change of units): the columns were made again, and fitted again above
         }
     }
 
@@ -51,32 +50,21 @@ final class ReadingsTable extends JTable {
         return lines;
     }
 
-    /** Sets each column's least width from its name and its widest content, at the present text size. */
-    void fitColumns() {
-        if (getTableHeader() == null || widest == null) {
-            return;
+    /** Sets the rows' height and the rows in view at the present text size, once the columns are fitted. */
+    private void fitRows() {
+        if (getTableHeader() == null) {
+            return; // JTable's constructor asks before the header is made
         }
         FontMetrics cells = getFontMetrics(getFont());
-        for (int i = 0; i < getColumnCount(); i++) {
-            TableColumn column = getColumnModel().getColumn(i);
-            Component name = getTableHeader().getDefaultRenderer().getTableCellRendererComponent(this,
-                    column.getHeaderValue(), false, false, -1, i);
-            int content = i < widest.length ? cells.stringWidth(widest[i]) : 0;
-            int least = Math.max(name.getPreferredSize().width, content) + PADDING;
-            column.setMinWidth(least);
-            column.setPreferredWidth(least);
-        }
         setRowHeight(Math.max(getRowHeight(), cells.getHeight() + 4));
         setPreferredScrollableViewportSize(new Dimension(getPreferredSize().width, rowsShown * getRowHeight()));
-        if (getTableHeader() != null) {
-            getTableHeader().resizeAndRepaint();
-        }
+        getTableHeader().resizeAndRepaint();
     }
 
     @Override
     public void updateUI() {
         super.updateUI();
-        fitColumns();
+        fitRows();
     }
 
     @Override

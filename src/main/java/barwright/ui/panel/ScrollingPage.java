@@ -1,6 +1,4 @@
-package barwright.ui.insight;
-
-import barwright.ui.panel.PagePanel;
+package barwright.ui.panel;
 
 import javax.swing.JComponent;
 import javax.swing.JScrollPane;
@@ -12,36 +10,47 @@ import java.awt.Dimension;
 import java.awt.Font;
 
 /**
- * A view's chart above its words and controls, always as wide as the view. The chart takes the height the words
- * leave; where that would be less than {@link #CHART_SHARE} of the view or than a least height in lines of text
- * (the chart's title, legend and axes grow with the text size, and the plot needs room besides), the chart
- * keeps that height and the page scrolls up and down to the words below. At 1024x768 with 28-point text the
- * chart split with its words had shrunk to a strip. Event thread.
+ * A page always as wide as the view: as high as the view where that holds all of it, and at its own height,
+ * scrolling up and down, where it does not (a 1024x768 projector with large text), so that what it shows keeps
+ * a size that can be read rather than being squeezed. Given a chart, the chart stands above its words and
+ * takes the height they leave, but never less than a least height: a share of the view's height or a number of
+ * lines of text (the chart's title, legend and axes grow with the text size, and the plot needs room besides),
+ * whichever is more; below that the page scrolls to the words. Event thread.
  */
-final class ChartOverWords extends PagePanel {
-    /** The share of the view's height the chart gets at least, as the split it replaces gave it. */
-    static final double CHART_SHARE = 0.72;
-    private final JComponent chart;
+public final class ScrollingPage extends PagePanel {
+    private static final int GAP = 4;
     private final JComponent words;
     private final int leastLines;
+    private final double leastShare;
     private int laidOutWidth = -1;
 
-    private ChartOverWords(JComponent chart, JComponent words, int leastLines) {
-        super(new BorderLayout(0, 4));
-        this.chart = chart;
+    private ScrollingPage(JComponent content, JComponent words, int leastLines, double leastShare) {
+        super(words == null ? new BorderLayout() : new BorderLayout(0, GAP));
         this.words = words;
         this.leastLines = leastLines;
-        add(chart, BorderLayout.CENTER);
-        add(words, BorderLayout.SOUTH);
+        this.leastShare = leastShare;
+        add(content, BorderLayout.CENTER);
+        if (words != null) {
+            add(words, BorderLayout.SOUTH);
+        }
+    }
+
+    /** @return the content in a pane that scrolls up and down, never sideways */
+    public static JScrollPane of(JComponent content) {
+        return scrolling(new ScrollingPage(content, null, 0, 0));
     }
 
     /**
      * @param leastLines the chart's least height in lines of the window's text (its title, legend, axes and a
      *                   plot at the present text size)
+     * @param leastShare the share of the view's height the chart gets at least
      * @return the chart over the words in a pane that scrolls up and down, never sideways
      */
-    static JScrollPane of(JComponent chart, JComponent words, int leastLines) {
-        ChartOverWords page = new ChartOverWords(chart, words, leastLines);
+    public static JScrollPane chartOverWords(JComponent chart, JComponent words, int leastLines, double leastShare) {
+        return scrolling(new ScrollingPage(chart, words, leastLines, leastShare));
+    }
+
+    private static JScrollPane scrolling(ScrollingPage page) {
         JScrollPane scroll = new JScrollPane(page, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
                 JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
         scroll.setBorder(null);
@@ -50,10 +59,10 @@ final class ChartOverWords extends PagePanel {
     }
 
     /** @return the chart's least height (pixels): the least lines of text, or the share of the view */
-    int chartLeastHeight() {
+    private int chartLeastHeight() {
         Font font = UIManager.getFont("Label.font");
         int line = getFontMetrics(font != null ? font : getFont()).getHeight();
-        return Math.max(leastLines * line, (int) Math.round(viewHeight() * CHART_SHARE));
+        return Math.max(leastLines * line, (int) Math.round(viewHeight() * leastShare));
     }
 
     private int viewHeight() {
@@ -63,7 +72,10 @@ final class ChartOverWords extends PagePanel {
     @Override
     public Dimension getPreferredSize() {
         Dimension wanted = super.getPreferredSize();
-        return new Dimension(wanted.width, chartLeastHeight() + 4 + words.getPreferredSize().height);
+        if (words == null) {
+            return wanted;
+        }
+        return new Dimension(wanted.width, chartLeastHeight() + GAP + words.getPreferredSize().height);
     }
 
     @Override
@@ -74,11 +86,6 @@ final class ChartOverWords extends PagePanel {
             laidOutWidth = getWidth();
             SwingUtilities.invokeLater(this::revalidate);
         }
-    }
-
-    /** @return the chart (tests) */
-    JComponent chart() {
-        return chart;
     }
 
     @Override
