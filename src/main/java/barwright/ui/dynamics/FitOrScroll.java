@@ -10,8 +10,6 @@ import javax.swing.Scrollable;
 import java.awt.BorderLayout;
 import java.awt.Dimension;
 import java.awt.Rectangle;
-import java.awt.event.ComponentAdapter;
-import java.awt.event.ComponentEvent;
 
 /**
  * A page's content that fills the space it is given, but never shrinks below a height at which its charts and
@@ -20,14 +18,23 @@ import java.awt.event.ComponentEvent;
 final class FitOrScroll extends JPanel implements Scrollable {
     /** A page narrower than this (pixels at the normal text size) stacks its chart above its picture. */
     static final int STACK_BELOW_WIDTH = 760;
+    /** The least height beside each other, in pixels at the normal text size. */
     private final int sideBySideHeight;
-    private int leastHeight;
+    private boolean stacked;
 
-    private FitOrScroll(JComponent content, int leastHeight) {
+    private FitOrScroll(JComponent content, int sideBySideHeight) {
         super(new BorderLayout());
-        this.sideBySideHeight = leastHeight;
-        this.leastHeight = leastHeight;
+        this.sideBySideHeight = sideBySideHeight;
         add(content, BorderLayout.CENTER);
+    }
+
+    /**
+     * @return the height below which the content scrolls, at the current text size: worked out anew each time, so
+     *         that a text size changed after the page was made (View &gt; Larger text) counts
+     */
+    private int leastHeight() {
+        int sideBySide = Math.round(sideBySideHeight * textScale());
+        return stacked ? 2 * sideBySide : sideBySide;
     }
 
     /**
@@ -35,25 +42,36 @@ final class FitOrScroll extends JPanel implements Scrollable {
      * @param split       the chart beside the picture: stacked, and given twice the height, on a narrow page
      */
     static JScrollPane of(JComponent content, int leastHeight, JSplitPane split) {
-        FitOrScroll fit = new FitOrScroll(content, Math.round(leastHeight * textScale()));
+        FitOrScroll fit = new FitOrScroll(content, leastHeight);
         JScrollPane scroll = new JScrollPane(fit, JScrollPane.VERTICAL_SCROLLBAR_AS_NEEDED,
-                JScrollPane.HORIZONTAL_SCROLLBAR_NEVER);
+                JScrollPane.HORIZONTAL_SCROLLBAR_NEVER) {
+            /**
+             * Stacks or unstacks the split for the width and the text size of now, at each layout: a new size of
+             * the page and a new text size (which lays every page out again) both count.
+             */
+            @Override
+            public void doLayout() {
+                fit.followWidth(getWidth(), split);
+                super.doLayout();
+            }
+        };
         scroll.setBorder(null);
         scroll.getVerticalScrollBar().setUnitIncrement(16);
-        scroll.addComponentListener(new ComponentAdapter() {
-            @Override
-            public void componentResized(ComponentEvent event) {
-                boolean narrow = scroll.getWidth() < STACK_BELOW_WIDTH * textScale();
-                int orientation = narrow ? JSplitPane.VERTICAL_SPLIT : JSplitPane.HORIZONTAL_SPLIT;
-                if (split.getOrientation() != orientation) {
-                    split.setOrientation(orientation);
-                    split.resetToPreferredSizes();
-                }
-                fit.leastHeight = narrow ? 2 * fit.sideBySideHeight : fit.sideBySideHeight;
-                fit.revalidate();
-            }
-        });
         return scroll;
+    }
+
+    /** Turns the split to suit a page this wide at the current text size, where it is not turned so already. */
+    private void followWidth(int width, JSplitPane split) {
+        boolean narrow = width < STACK_BELOW_WIDTH * textScale();
+        int orientation = narrow ? JSplitPane.VERTICAL_SPLIT : JSplitPane.HORIZONTAL_SPLIT;
+        if (split.getOrientation() != orientation) {
+            split.setOrientation(orientation);
+            split.resetToPreferredSizes();
+        }
+        if (narrow != stacked) {
+            stacked = narrow;
+            revalidate();
+        }
     }
 
     /**
@@ -92,7 +110,7 @@ final class FitOrScroll extends JPanel implements Scrollable {
     @Override
     public Dimension getPreferredSize() {
         Dimension wanted = super.getPreferredSize();
-        return new Dimension(wanted.width, Math.max(wanted.height, leastHeight));
+        return new Dimension(wanted.width, Math.max(wanted.height, leastHeight()));
     }
 
     @Override
@@ -112,6 +130,6 @@ final class FitOrScroll extends JPanel implements Scrollable {
 
     @Override
     public boolean getScrollableTracksViewportHeight() {
-        return getParent() instanceof JViewport viewport && viewport.getHeight() >= leastHeight;
+        return getParent() instanceof JViewport viewport && viewport.getHeight() >= leastHeight();
     }
 }

@@ -7,6 +7,7 @@ import javax.swing.JDialog;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTextArea;
+import javax.swing.text.JTextComponent;
 import javax.swing.KeyStroke;
 import java.awt.BorderLayout;
 import java.awt.FlowLayout;
@@ -28,10 +29,10 @@ final class TextDialog {
     }
 
     /**
-     * @param area the text, already filled and sized
+     * @param area the text, already filled and sized (a plain text area wraps at words)
      * @param name the dialog's component name (tests find it by it)
      */
-    static void show(Window owner, String title, String name, JTextArea area) {
+    static void show(Window owner, String title, String name, JTextComponent area) {
         JDialog dialog = make(owner, title, name, area);
         fitInside(dialog, usableBounds(owner));
         dialog.setLocationRelativeTo(owner);
@@ -41,12 +42,14 @@ final class TextDialog {
     }
 
     /** @return the dialog, packed to the text's own size, not yet shown */
-    static JDialog make(Window owner, String title, String name, JTextArea area) {
+    static JDialog make(Window owner, String title, String name, JTextComponent area) {
         JDialog dialog = new JDialog(owner, title, java.awt.Dialog.ModalityType.MODELESS);
         dialog.setName(name);
         area.setEditable(false);
-        area.setLineWrap(true);
-        area.setWrapStyleWord(true);
+        if (area instanceof JTextArea plain) {
+            plain.setLineWrap(true);
+            plain.setWrapStyleWord(true);
+        }
         area.setBorder(BorderFactory.createEmptyBorder(10, 12, 10, 12));
         JButton close = new JButton("Close");
         close.addActionListener(event -> dialog.dispose());
