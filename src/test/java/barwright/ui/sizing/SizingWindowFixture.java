@@ -7,10 +7,12 @@ import barwright.ui.document.Samples;
 import barwright.ui.window.WindowFixture;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.assertj.swing.core.Robot;
+import org.assertj.swing.data.TableCell;
 import org.assertj.swing.edt.GuiActionRunner;
 import org.assertj.swing.finder.WindowFinder;
 import org.assertj.swing.fixture.DialogFixture;
 import org.assertj.swing.fixture.FrameFixture;
+import org.assertj.swing.fixture.JTableFixture;
 import org.assertj.swing.timing.Condition;
 import org.assertj.swing.timing.Pause;
 import org.assertj.swing.timing.Timeout;
@@ -104,6 +106,19 @@ final class SizingWindowFixture implements AutoCloseable {
     /** @return the car the window opens on, read by the core */
     static Vehicle sample() {
         return Samples.load(Samples.CLUB_HATCHBACK).vehicle();
+    }
+
+    /**
+     * @return the cell's text as shown once the cell is scrolled into view, as a user would scroll to it (a column
+     *         the view's edge cuts shows "…" until then)
+     */
+    static String shownValue(JTableFixture table, int row, int column) {
+        GuiActionRunner.execute(() -> {
+            table.target().scrollRectToVisible(table.target().getCellRect(row, column, true));
+            return null;
+        });
+        table.robot().waitForIdle();
+        return table.valueAt(TableCell.row(row).column(column));
     }
 
     /** @return the number at the start of a shown figure, e.g. 52.3 from "52.3 %" (either decimal sign) */
